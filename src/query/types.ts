@@ -1,0 +1,78 @@
+/**
+ * The JSON contract of `kindred comps --format json` (and of the HTTP API).
+ * Stable: fields are only ever added, never renamed or removed.
+ */
+import type { Position } from '../ingest/types.ts';
+
+/** One dimension of one comp: the target's and the comp's value and how much it drove the distance. */
+export interface DimensionDetail {
+  /** Dimension name, e.g. `obp`, `pop_2b_s`. */
+  readonly name: string;
+  /** Target's value in natural units (null when the target lacks it). */
+  readonly target: number | null;
+  /** Comp's value in natural units (null when the comp lacks it). */
+  readonly comp: number | null;
+  /** Target's grade on the 20 to 80 scale, direction applied (higher is better). */
+  readonly target_grade: number | null;
+  readonly comp_grade: number | null;
+  /** Share of the weighted squared distance (the shares of a comp sum to 1; 0 when missing). */
+  readonly share: number;
+  /** True when either side lacks the dimension, so it did not count. */
+  readonly missing: boolean;
+  /** Shapley attribution of the embedded distance (present only when the store has an embedding). */
+  readonly attribution?: number;
+}
+
+export interface Comp {
+  readonly rank: number;
+  readonly player_id: string;
+  readonly name: string;
+  readonly season: number;
+  readonly level: string;
+  readonly position: Position;
+  readonly age: number | null;
+  /** 0 to 100, 100 for an identical profile; 100 * exp(-distance^2 / (2 * W)), W the total weight in play. */
+  readonly likeness: number;
+  readonly distance: number;
+  /** Share of the target's weighted dimensions that the comp also has (0 to 1). */
+  readonly coverage: number;
+  readonly dimensions: readonly DimensionDetail[];
+  /** Up to three heaviest-weighted dimensions that match closely. */
+  readonly alike: readonly string[];
+  /** Up to three dimensions with the largest differences. */
+  readonly apart: readonly string[];
+  /** The embedded distance the attributions add up to (only with an embedding). */
+  readonly attribution_total?: number;
+}
+
+export interface QueryEcho {
+  /** `player` for an existing player-season, `want` for a hand-built profile. */
+  readonly kind: 'player' | 'want';
+  readonly player_id: string | null;
+  readonly name: string | null;
+  readonly season: number | null;
+  readonly level: string | null;
+  readonly position: Position;
+  readonly group: string;
+  readonly age: number | null;
+  /** The target's dimensions in natural units (only those it has). */
+  readonly profile: Readonly<Record<string, number>>;
+  readonly k: number;
+  readonly method: 'hnsw' | 'exact';
+  readonly space: 'input' | 'pca' | 'autoencoder';
+}
+
+export interface PoolEcho {
+  /** Player-seasons in the position group before filters. */
+  readonly group_size: number;
+  /** Player-seasons left after the filters. */
+  readonly eligible: number;
+  readonly filters: Readonly<Record<string, string | number | readonly string[]>>;
+  readonly weights: Readonly<Record<string, number>>;
+}
+
+export interface CompsResult {
+  readonly query: QueryEcho;
+  readonly pool: PoolEcho;
+  readonly comps: readonly Comp[];
+}
