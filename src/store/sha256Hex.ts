@@ -1,0 +1,12 @@
+import { createHash } from 'node:crypto';
+
+/**
+ * SHA-256 (FIPS 180-4) of `bytes` as 64 lowercase hex digits.
+ *
+ * @example
+ * sha256Hex(new TextEncoder().encode('abc'));
+ * // => 'ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad' (FIPS 180-2, appendix B.1)
+ */
+export function sha256Hex(bytes: Uint8Array): string {
+  return createHash('sha256').update(bytes).digest('hex');
+}

@@ -1,0 +1,56 @@
+/**
+ * Child process for tests/store/corruptIndex.test.ts (run as `node --import tsx corruptIndexChild.ts <work folder>`).
+ * Builds a store holding an HNSW index, overwrites part of the index body with the same number of
+ * bytes, then opens the store and tries to load the index as the serving code would. It prints one
+ * line per attempt (`store <code>`, then `direct <code>` for a load that skips the store) and ends
+ * normally; a crash in the native code would instead end it by a signal.
+ */
+import { readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { KindredError } from '../../src/errors/KindredError.ts';
+import { GuardedIndex } from '../../src/index/GuardedIndex.ts';
+import type { IndexMeta } from '../../src/index/types.ts';
+import { openStore } from '../../src/store/openStore.ts';
+import { writeStore } from '../../src/store/writeStore.ts';
+import { randomVectors } from '../index/randomVectors.ts';
+
+const work = process.argv[2] ?? '.';
+const dim = 8;
+const rows = randomVectors(2000, dim, 7);
+const built = GuardedIndex.build(rows, dim, { M: 16, efConstruction: 100, ef: 64, seed: 3 });
+built.save(join(work, 'built.hnsw'));
+const storeDir = join(work, 'store');
+await writeStore(storeDir, { params: { index: { ...built.meta } }, files: new Map([['index.hnsw', readFileSync(join(work, 'built.hnsw'))]]) });
+
+// Same length, new body: every byte of the first half of layer 0 set to 0xff (links, counts, labels).
+const indexPath = join(storeDir, 'index.hnsw');
+const bytes = readFileSync(indexPath);
+bytes.fill(0xff, 96, 96 + Math.floor((bytes.length - 96) / 2));
+writeFileSync(indexPath, bytes);
+
+function attempt(label: string, run: () => Promise<void>): Promise<void> {
+  return run().then(
+    () => console.log(`${label} loaded`),
+    (error: unknown) => console.log(`${label} ${error instanceof KindredError ? error.code : `unexpected ${String(error)}`}`),
+  );
+}
+
+function metaOf(params: Record<string, unknown>): IndexMeta {
+  const index = params['index'];
+  const take = (key: string): number => {
+    const value = typeof index === 'object' && index !== null ? new Map<string, unknown>(Object.entries(index)).get(key) : undefined;
+    if (typeof value !== 'number') throw new Error(`manifest params.index.${key} is missing`);
+    return value;
+  };
+  return { dim: take('dim'), count: take('count'), M: take('M'), efConstruction: take('efConstruction'), ef: take('ef') };
+}
+
+await attempt('store', async () => {
+  const store = await openStore(storeDir);
+  const index = GuardedIndex.load(store.path('index.hnsw'), metaOf(store.manifest.params));
+  index.search(Array.from(rows.subarray(0, dim)), 10);
+});
+await attempt('direct', async () => {
+  const index = GuardedIndex.load(indexPath, built.meta);
+  index.search(Array.from(rows.subarray(0, dim)), 10);
+});
