@@ -121,4 +121,8 @@ export interface Roster {
   /** Data rows read per file (header excluded). */
   readonly rowsRead: Readonly<Record<string, number>>;
   readonly rejected: readonly RejectedRow[];
+  /** Columns read past because no canonical column maps to them, per file name as read (files with none omitted). */
+  readonly ignoredColumns: Readonly<Record<string, readonly string[]>>;
+  /** fielding.csv rows at position P: checked like the others, then left out (pitchers' fielding is not profiled). */
+  readonly pitcherFieldingRows: number;
 }

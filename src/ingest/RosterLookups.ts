@@ -1,0 +1,67 @@
+import type { Column } from './HeaderColumns.ts';
+import type { RowReader } from './RowReader.ts';
+import type { Player } from './types.ts';
+
+/** The default order of levels, low to high, used when a roster has no levels.csv. */
+export const DEFAULT_LEVELS: readonly string[] = ['Rk', 'A', 'A+', 'AA', 'AAA', 'MLB'];
+
+/**
+ * What the season files are checked against: the players of players.csv
+ * (and the lines of those rejected there) and the known levels.
+ */
+export class RosterLookups {
+  private readonly levelSet: ReadonlySet<string>;
+  private readonly levelsExpected: string;
+
+  constructor(
+    readonly players: ReadonlyMap<string, Player>,
+    private readonly rejectedPlayers: ReadonlyMap<string, number>,
+    private readonly playersFile: string,
+    readonly levels: readonly string[],
+    levelsFile: string | undefined,
+  ) {
+    this.levelSet = new Set(levels);
+    const source = levelsFile === undefined
+      ? 'the default order; list your own levels low to high in levels.csv'
+      : `the levels of ${levelsFile}`;
+    this.levelsExpected = `a known level: one of ${levels.join(', ')} (${source})`;
+  }
+
+  /** Reads a player_id that must be in players.csv. */
+  player(row: RowReader, col: Column): string {
+    const id = row.text(col);
+    if (id === '' || this.players.has(id)) return id;
+    const rejectedAt = this.rejectedPlayers.get(id);
+    const expected = rejectedAt === undefined
+      ? `a player_id listed in ${this.playersFile}`
+      : `a player_id of a valid row of ${this.playersFile} (this player's row, line ${rejectedAt}, was rejected)`;
+    row.report('kindred.input.unknownPlayer', col, id, expected);
+    return id;
+  }
+
+  /** Reads a level that must be in the known order. */
+  level(row: RowReader, col: Column): string {
+    const level = row.text(col);
+    if (level === '' || this.levelSet.has(level)) return level;
+    row.report('kindred.input.badValue', col, level, this.levelsExpected);
+    return level;
+  }
+}
+
+/** Remembers the first line of each key and reports a later row with the same key. */
+export class KeyLines {
+  private readonly lines = new Map<string, number>();
+
+  constructor(private readonly describe: string) {}
+
+  /** Records the key; reports a duplicate (at column 0, naming both lines) when already seen. */
+  check(row: RowReader, key: string, shown: string): void {
+    const first = this.lines.get(key);
+    if (first === undefined) {
+      this.lines.set(key, row.line);
+      return;
+    }
+    row.report('kindred.input.duplicateKey', undefined, shown,
+      `one row per ${this.describe} (line ${first} has the same key; this is line ${row.line})`);
+  }
+}

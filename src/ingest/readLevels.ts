@@ -1,0 +1,34 @@
+import { DEFAULT_LEVELS, KeyLines } from './RosterLookups.ts';
+import { readTable, type TableOptions } from './readTable.ts';
+
+export interface LevelsRead {
+  readonly levels: readonly string[];
+  /** The file the order came from, undefined for the default order. */
+  readonly file: string | undefined;
+  readonly rows: number;
+  readonly ignored: readonly string[];
+}
+
+/** Reads levels.csv (one column `level`, rows low to high), or gives the default order without it. */
+export async function readLevels(options: TableOptions): Promise<LevelsRead> {
+  const levels: string[] = [];
+  const keys = new KeyLines('level');
+  const read = await readTable(options, 'levels.csv', (ctx) => {
+    const c = { level: ctx.header.col('level') };
+    return (cells, line) => {
+      const { row } = ctx;
+      row.start(line, cells);
+      const level = row.text(c.level);
+      if (level !== '') keys.check(row, level, level);
+      if (ctx.settle()) levels.push(level);
+    };
+  });
+  if (!read.present) return { levels: DEFAULT_LEVELS, file: undefined, rows: 0, ignored: [] };
+  if (levels.length === 0 && read.rows === 0) {
+    options.log.fileProblem({
+      code: 'kindred.input.badValue', file: read.fileName, line: 2, column: 0, field: 'level', value: '',
+      expected: 'at least one level (rows from lowest to highest)',
+    });
+  }
+  return { levels, file: read.fileName, rows: read.rows, ignored: read.ignored };
+}

@@ -1,0 +1,79 @@
+import { IssueLog } from './IssueLog.ts';
+import { RosterLookups } from './RosterLookups.ts';
+import { EMPTY_COLUMN_MAP, type ColumnMap } from './loadColumnMap.ts';
+import { readBatting } from './readBatting.ts';
+import { readContracts } from './readContracts.ts';
+import { readFielding } from './readFielding.ts';
+import { readLevels } from './readLevels.ts';
+import { readPitching } from './readPitching.ts';
+import { readPlayers } from './readPlayers.ts';
+import type { TableOptions, TableRead } from './readTable.ts';
+import type { Roster } from './types.ts';
+
+export type { ColumnMap } from './loadColumnMap.ts';
+
+export interface ReadRosterOptions {
+  /** Leave out bad rows (listed in `roster.rejected`) instead of failing. Default false: strict. */
+  readonly lenient?: boolean;
+  /** The club's file and column names (see loadColumnMap). */
+  readonly columnMap?: ColumnMap;
+  /** Called every 100,000 rows and at the end of each file with the file name as read and the rows so far. */
+  readonly onProgress?: (file: string, rows: number) => void;
+}
+
+/**
+ * Reads and checks a roster folder (players.csv, batting.csv; optional
+ * fielding.csv, pitching.csv, contracts.csv, levels.csv).
+ *
+ * Strict (default): every problem is collected (the first 200 kept, the rest
+ * counted) and one InputError carrying them is thrown. Lenient: rows with
+ * problems are left out and listed in `rejected` with all their reasons;
+ * problems of a whole file or column (missing file or column, wrong
+ * delimiter, duplicate header names, CSV syntax, percents given as
+ * fractions) still throw. No row is dropped silently.
+ */
+export async function readRoster(dir: string, options: ReadRosterOptions = {}): Promise<Roster> {
+  const log = new IssueLog(options.lenient ?? false);
+  const table: TableOptions = {
+    dir,
+    log,
+    columnMap: options.columnMap ?? EMPTY_COLUMN_MAP,
+    ...(options.onProgress === undefined ? {} : { onProgress: options.onProgress }),
+  };
+  const levels = await readLevels(table);
+  const players = await readPlayers(table);
+  const lookups = new RosterLookups(players.players, players.rejectedAt, players.fileName, levels.levels, levels.file);
+  const batting = await readBatting(table, lookups);
+  const fielding = await readFielding(table, lookups);
+  const pitching = await readPitching(table, lookups);
+  const contracts = await readContracts(table, lookups);
+  log.throwIfFailed();
+
+  const reads: readonly [string, TableRead][] = [
+    ['levels.csv', { present: levels.file !== undefined, fileName: levels.file ?? 'levels.csv', rows: levels.rows, ignored: levels.ignored }],
+    ['players.csv', { present: true, fileName: players.fileName, rows: players.rows, ignored: players.ignored }],
+    ['batting.csv', batting],
+    ['fielding.csv', fielding],
+    ['pitching.csv', pitching],
+    ['contracts.csv', contracts],
+  ];
+  const rowsRead: Record<string, number> = {};
+  const ignoredColumns: Record<string, readonly string[]> = {};
+  for (const [canonical, read] of reads) {
+    if (!read.present) continue;
+    rowsRead[canonical] = read.rows;
+    if (read.ignored.length > 0) ignoredColumns[read.fileName] = read.ignored;
+  }
+  return {
+    players: players.players,
+    batting: batting.batting,
+    fielding: fielding.fielding,
+    pitching: pitching.pitching,
+    contracts: contracts.contracts,
+    levels: levels.levels,
+    rowsRead,
+    rejected: log.rejected,
+    ignoredColumns,
+    pitcherFieldingRows: fielding.pitcherRows,
+  };
+}

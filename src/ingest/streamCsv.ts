@@ -1,0 +1,103 @@
+import { createReadStream } from 'node:fs';
+import { parse, type CsvError } from 'csv-parse';
+import type { InputIssue } from '../errors/InputError.ts';
+
+/** Longest record accepted (bytes): bounds memory on an unterminated quote. */
+export const MAX_RECORD_BYTES = 1 << 20;
+
+export interface CsvSink {
+  /** The header (line 1). Return false to stop reading the file (its header is unusable). */
+  header(cells: readonly string[]): boolean;
+  /** A data record and the line it starts on (1-based). */
+  record(cells: readonly string[], line: number): void;
+}
+
+interface ParsedRecord {
+  readonly record: string[];
+  readonly info: { readonly lines: number; readonly empty_lines: number };
+}
+
+/**
+ * Streams a comma-separated file into a sink: records as arrays of strings
+ * (no casting), BOM dropped, empty lines skipped, ragged rows passed on for
+ * the caller to report. Resolves with the number of data records, or with a
+ * `kindred.input.csvSyntax` issue when the file cannot be parsed further.
+ */
+export function streamCsv(path: string, fileName: string, sink: CsvSink): Promise<{ rows: number; syntax?: InputIssue }> {
+  return new Promise((resolve, reject) => {
+    const parser = parse({
+      bom: true,
+      delimiter: ',',
+      columns: false,
+      info: true,
+      relax_column_count: true,
+      skip_empty_lines: true,
+      max_record_size: MAX_RECORD_BYTES,
+    });
+    const input = createReadStream(path);
+    let rows = 0;
+    let seenHeader = false;
+    let stopped = false;
+    let previousEnd = 0;
+    let previousEmpty = 0;
+    const finish = (syntax?: InputIssue): void => {
+      if (stopped) return;
+      stopped = true;
+      input.destroy();
+      parser.destroy();
+      resolve(syntax === undefined ? { rows } : { rows, syntax });
+    };
+    input.on('error', (err) => {
+      if (!stopped) {
+        stopped = true;
+        parser.destroy();
+        reject(err);
+      }
+    });
+    parser.on('readable', () => {
+      try {
+        let item: ParsedRecord | null;
+        while (!stopped && (item = parser.read()) !== null) {
+          const { record, info } = item;
+          // A record starts on the line after the previous one ended, past skipped empty lines.
+          const line = previousEnd + 1 + (info.empty_lines - previousEmpty);
+          previousEnd = info.lines;
+          previousEmpty = info.empty_lines;
+          if (!seenHeader) {
+            seenHeader = true;
+            if (!sink.header(record)) finish();
+            continue;
+          }
+          rows += 1;
+          sink.record(record, line);
+        }
+      } catch (err) {
+        stopped = true;
+        input.destroy();
+        parser.destroy();
+        reject(err);
+      }
+    });
+    parser.on('error', (err: CsvError) => {
+      const line = typeof err.lines === 'number' ? err.lines : previousEnd + 1;
+      finish({
+        code: 'kindred.input.csvSyntax',
+        file: fileName,
+        line,
+        column: typeof err.column === 'number' ? err.column + 1 : 0,
+        field: '',
+        value: err.code,
+        expected: `well-formed CSV (${err.message})`,
+      });
+    });
+    parser.on('end', () => {
+      if (!seenHeader) {
+        finish({ code: 'kindred.input.badHeader', file: fileName, line: 1, column: 0, field: '', value: '',
+          expected: 'a header line naming the columns (the file is empty)' });
+      } else {
+        finish();
+      }
+    });
+    input.pipe(parser);
+  });
+}
