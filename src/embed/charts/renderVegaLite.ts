@@ -1,0 +1,19 @@
+import * as vega from 'vega';
+import { compile, type TopLevelSpec } from 'vega-lite';
+
+/**
+ * Renders a Vega-Lite spec to an SVG string: compile to Vega, parse, headless view (renderer 'none').
+ *
+ * @example
+ * await renderVegaLite({ data: { values: [{ a: 1 }] }, mark: 'point', encoding: { x: { field: 'a', type: 'quantitative' } } });
+ * // => '<svg ...'
+ */
+export async function renderVegaLite(spec: TopLevelSpec): Promise<string> {
+  const compiled = compile(spec).spec;
+  const view = new vega.View(vega.parse(compiled), { renderer: 'none' });
+  try {
+    return await view.toSVG();
+  } finally {
+    view.finalize();
+  }
+}
