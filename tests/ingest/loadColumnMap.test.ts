@@ -1,0 +1,58 @@
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { InputError } from '../../src/errors/InputError.ts';
+import { loadColumnMap } from '../../src/ingest/loadColumnMap.ts';
+
+const dir = mkdtempSync(join(tmpdir(), 'kindred-map-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+let n = 0;
+function mapFile(text: string): string {
+  n += 1;
+  const path = join(dir, `map${n}.json`);
+  writeFileSync(path, text);
+  return path;
+}
+
+async function mapError(text: string): Promise<InputError> {
+  const err = await loadColumnMap(mapFile(text)).then(() => undefined, (e: unknown) => e);
+  if (!(err instanceof InputError)) throw new Error(`expected an InputError, got ${String(err)}`);
+  expect(err.code).toBe('kindred.input.badColumnMap');
+  return err;
+}
+
+describe('loadColumnMap(path)', () => {
+  it('reads file and column renames, both parts optional', async () => {
+    const map = await loadColumnMap(mapFile(JSON.stringify({
+      files: { 'batting.csv': 'their_batting.csv' },
+      columns: { 'batting.csv': { PA: 'plate_app' } },
+    })));
+    expect(map).toEqual({ files: { 'batting.csv': 'their_batting.csv' }, columns: { 'batting.csv': { PA: 'plate_app' } } });
+    expect(await loadColumnMap(mapFile('{}'))).toEqual({ files: {}, columns: {} });
+  });
+  it('refuses an unknown canonical column, naming the key', async () => {
+    const err = await mapError(JSON.stringify({ columns: { 'batting.csv': { PAA: 'plate_app' } } }));
+    expect(err.message).toContain('columns.batting.csv.PAA');
+    expect(err.issues[0]?.field).toBe('columns.batting.csv.PAA');
+  });
+  it('refuses an unknown file name and an unknown top-level key', async () => {
+    const err = await mapError(JSON.stringify({ files: { 'hitting.csv': 'x.csv' }, extra: 1 }));
+    const fields = err.issues.map((i) => i.field);
+    expect(fields).toContain('files.hitting.csv');
+    expect(fields).toContain('extra');
+  });
+  it('refuses an empty name and a name that is not a string', async () => {
+    const err = await mapError(JSON.stringify({ columns: { 'batting.csv': { PA: '', AB: 7 } } }));
+    expect(err.issues.map((i) => i.field).sort()).toEqual(['columns.batting.csv.AB', 'columns.batting.csv.PA']);
+  });
+  it('refuses two canonical columns mapped to one club column', async () => {
+    const err = await mapError(JSON.stringify({ columns: { 'batting.csv': { H: 'hits', HR: 'hits' } } }));
+    expect(err.message).toContain('columns.batting.csv.HR');
+  });
+  it('refuses text that is not JSON', async () => {
+    const err = await mapError('{ files: ');
+    expect(err.message).toContain('not valid JSON');
+  });
+});

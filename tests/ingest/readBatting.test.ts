@@ -1,0 +1,132 @@
+import { afterAll, describe, expect, it } from 'vitest';
+import { readRoster } from '../../src/ingest/readRoster.ts';
+import { col, csv, expectOneIssue, removeRosterDirs, rosterDir, strictIssues } from './rosterFixture.ts';
+
+afterAll(removeRosterDirs);
+
+/** Issues of a roster whose batting.csv has the given rows (line 2 is the first). */
+async function battingIssues(rows: Parameters<typeof csv>[1], omit: readonly string[] = []) {
+  return (await strictIssues(rosterDir({ 'batting.csv': csv('batting', rows, omit) }))).issues;
+}
+
+describe('readRoster: batting.csv counts', () => {
+  it('refuses a non-numeric count ("12abc" is not 12)', async () => {
+    const issues = await battingIssues([{}, { H: '12abc' }]);
+    expectOneIssue(issues, { code: 'kindred.input.notNumeric', file: 'batting.csv', line: 3, column: col('batting', 'H'), value: '12abc', field: 'H' });
+  });
+  it('refuses a negative count', async () => {
+    const issues = await battingIssues([{ BB: '-3' }]);
+    expectOneIssue(issues, { code: 'kindred.input.negative', file: 'batting.csv', line: 2, column: col('batting', 'BB'), value: '-3' });
+  });
+  it('refuses a non-integer count', async () => {
+    const issues = await battingIssues([{ SO: '2.5' }]);
+    expectOneIssue(issues, { code: 'kindred.input.notInteger', file: 'batting.csv', line: 2, column: col('batting', 'SO'), value: '2.5' });
+  });
+  it('reads "007" as 7 and leaves an empty optional cell undefined, never zero', async () => {
+    const roster = await readRoster(rosterDir({ 'batting.csv': csv('batting', [{ HR: '007', SB: '', ev_avg_mph: '' }]) }));
+    const season = roster.batting[0];
+    expect(season?.HR).toBe(7);
+    expect(season?.SB).toBeUndefined();
+    expect(season?.evAvgMph).toBeUndefined();
+    expect(season !== undefined && 'SB' in season).toBe(false);
+  });
+  it('refuses an empty cell in a required column', async () => {
+    const issues = await battingIssues([{ PA: '' }]);
+    expectOneIssue(issues, { code: 'kindred.input.badValue', file: 'batting.csv', line: 2, column: col('batting', 'PA'), value: '' });
+  });
+});
+
+describe('readRoster: batting.csv consistency', () => {
+  it('refuses H > AB', async () => {
+    const issues = await battingIssues([{ H: '110', AB: '105' }]);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.inconsistent', file: 'batting.csv', line: 2, column: col('batting', 'H'), value: '110' });
+    expect(issue.expected).toContain('H <= AB');
+  });
+  it('refuses 2B + 3B + HR > H', async () => {
+    const issues = await battingIssues([{ H: '10', '2B': '6', '3B': '2', HR: '4' }]);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.inconsistent', file: 'batting.csv', line: 2, column: col('batting', 'H'), value: '10' });
+    expect(issue.expected).toContain('2B + 3B + HR <= H (here 12 > 10)');
+  });
+  it('refuses AB + BB + HBP + SF > PA', async () => {
+    const issues = await battingIssues([{ PA: '119' }]);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.inconsistent', file: 'batting.csv', line: 2, column: col('batting', 'PA'), value: '119' });
+    expect(issue.expected).toContain('AB + BB + HBP + SF <= PA (here 120 > 119)');
+  });
+  it('refuses SO > PA', async () => {
+    // AB + BB + HBP + SF stays at most PA, so only SO > PA is wrong.
+    const issues = await battingIssues([{ PA: '20', AB: '20', H: '0', '2B': '0', '3B': '0', HR: '0', BB: '0', IBB: '0', HBP: '0', SF: '0', SO: '21', bbe: '0' }]);
+    expectOneIssue(issues, { code: 'kindred.input.inconsistent', file: 'batting.csv', line: 2, column: col('batting', 'SO'), value: '21' });
+  });
+  it('refuses IBB > BB', async () => {
+    const issues = await battingIssues([{ IBB: '11' }]);
+    expectOneIssue(issues, { code: 'kindred.input.inconsistent', file: 'batting.csv', line: 2, column: col('batting', 'IBB'), value: '11' });
+  });
+  it('refuses bbe > PA', async () => {
+    const issues = await battingIssues([{ bbe: '121' }]);
+    expectOneIssue(issues, { code: 'kindred.input.inconsistent', file: 'batting.csv', line: 2, column: col('batting', 'bbe'), value: '121' });
+  });
+});
+
+describe('readRoster: batting.csv measurements (plausible ranges)', () => {
+  it('refuses an average exit velocity of 130 mph (40 to 120)', async () => {
+    const issues = await battingIssues([{ ev_avg_mph: '130', ev_p90_mph: '' }]);
+    expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'ev_avg_mph'), value: '130' });
+  });
+  it('refuses a 90th percentile exit velocity of 126 mph (40 to 125)', async () => {
+    const issues = await battingIssues([{ ev_p90_mph: '126' }]);
+    expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'ev_p90_mph'), value: '126' });
+  });
+  it('refuses ev_p90_mph below ev_avg_mph', async () => {
+    const issues = await battingIssues([{ ev_avg_mph: '95', ev_p90_mph: '90' }]);
+    expectOneIssue(issues, { code: 'kindred.input.inconsistent', file: 'batting.csv', line: 2, column: col('batting', 'ev_p90_mph'), value: '90' });
+  });
+  it('refuses a launch angle of -95 degrees (-90 to 90)', async () => {
+    const issues = await battingIssues([{ la_avg_deg: '-95' }]);
+    expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'la_avg_deg'), value: '-95' });
+  });
+  it('refuses a sprint speed of 40 ft/s (15 to 35)', async () => {
+    const issues = await battingIssues([{ sprint_ft_s: '40' }]);
+    expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'sprint_ft_s'), value: '40' });
+  });
+  it('refuses a percent above 100', async () => {
+    const issues = await battingIssues([{ hard_hit_pct: '101' }]);
+    expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'hard_hit_pct'), value: '101' });
+  });
+  it('refuses a percent column whose values all look like fractions, at its first such cell', async () => {
+    const issues = await battingIssues([
+      { hard_hit_pct: '' },
+      { player_id: 'p2', hard_hit_pct: '0' },
+      { player_id: 'p3', hard_hit_pct: '0.42' },
+      { player_id: 'p1', level: 'AAA', hard_hit_pct: '0.38' },
+    ]);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.percentLooksLikeFraction', file: 'batting.csv', line: 4, column: col('batting', 'hard_hit_pct'), value: '0.42' });
+    expect(issue.expected).toContain('0 to 100');
+  });
+  it('accepts small percents when another value of the column is above 1', async () => {
+    const roster = await readRoster(rosterDir({ 'batting.csv': csv('batting', [{ sweet_spot_pct: '0.5' }, { player_id: 'p2', sweet_spot_pct: '31' }]) }));
+    expect(roster.batting.map((b) => b.sweetSpotPct)).toEqual([0.5, 31]);
+  });
+});
+
+describe('readRoster: batting.csv keys', () => {
+  it('refuses a season that is not a 4-digit year', async () => {
+    const issues = await battingIssues([{ season: '21' }]);
+    expectOneIssue(issues, { code: 'kindred.input.badValue', file: 'batting.csv', line: 2, column: col('batting', 'season'), value: '21' });
+  });
+  it('refuses an unknown level, naming the known levels and levels.csv', async () => {
+    const issues = await battingIssues([{ level: 'AAAA' }]);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.badValue', file: 'batting.csv', line: 2, column: col('batting', 'level'), value: 'AAAA' });
+    expect(issue.expected).toContain('Rk, A, A+, AA, AAA, MLB');
+    expect(issue.expected).toContain('levels.csv');
+  });
+  it('refuses a player_id that is not in players.csv', async () => {
+    const issues = await battingIssues([{ player_id: 'p9' }]);
+    expectOneIssue(issues, { code: 'kindred.input.unknownPlayer', file: 'batting.csv', line: 2, column: col('batting', 'player_id'), value: 'p9' });
+  });
+  it('refuses two rows with the same player, season, level and team, naming both lines', async () => {
+    const issues = await battingIssues([{}, { player_id: 'p2' }, { H: '29' }]);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.duplicateKey', file: 'batting.csv', line: 4, column: 0, value: 'p1 2021 AA T1' });
+    expect(issue.expected).toContain('line 2');
+    expect(issue.expected).toContain('line 4');
+  });
+});
