@@ -10,7 +10,8 @@ export interface AttributionRow {
 /**
  * Spread of attributions per dimension over many queries, as SVG: one row per dimension, sorted by
  * mean |attribution| (largest on top), a light strip of every value, a box from the first to the third
- * quartile with whiskers to the extremes and a dark median tick, all in one neutral hue; a rule at 0.
+ * quartile with whiskers to the extremes and a dark median tick (in the box hue when the box has no
+width), all in one neutral hue; a rule at 0.
  * No colour encodes a value, so it reads the same for every kind of colour vision.
  *
  * @example
@@ -36,7 +37,7 @@ export function attributionSpreadSvg(rows: readonly AttributionRow[]): Promise<s
     title: { text: 'Attribution per dimension across queries', subtitle: 'sorted by mean |attribution|; box = quartiles, tick = median', font: CHART_STYLE.font },
     width: CHART_STYLE.width,
     height: { step: 22 },
-    config: { font: CHART_STYLE.font, view: { stroke: null } },
+    config: { font: CHART_STYLE.font, view: { stroke: null }, mark: { color: CHART_STYLE.primary }, boxplot: { box: { color: CHART_STYLE.primary } } },
     data: { values },
     layer: [
       { mark: { type: 'rule', color: CHART_STYLE.reference }, encoding: { x: { datum: 0, type: 'quantitative' } } },
@@ -46,9 +47,8 @@ export function attributionSpreadSvg(rows: readonly AttributionRow[]): Promise<s
           type: 'boxplot',
           extent: 'min-max',
           size: 10,
-          color: CHART_STYLE.primary,
-          opacity: 0.35,
-          median: { color: CHART_STYLE.reference, size: 16, thickness: 2 },
+          box: { color: CHART_STYLE.primary, opacity: 0.35 },
+          median: { color: CHART_STYLE.reference, size: 16, thickness: 2, opacity: 1 },
           rule: { color: CHART_STYLE.primary },
         },
         encoding: { x, y },
