@@ -3,6 +3,7 @@
  * Stable: fields are only ever added, never renamed or removed.
  */
 import type { Position } from '../ingest/types.ts';
+import type { PositionGroup } from '../profiles/positionGroup.ts';
 
 /** One dimension of one comp: the target's and the comp's value and how much it drove the distance. */
 export interface DimensionDetail {
@@ -53,7 +54,7 @@ export interface QueryEcho {
   readonly season: number | null;
   readonly level: string | null;
   readonly position: Position;
-  readonly group: string;
+  readonly group: PositionGroup;
   readonly age: number | null;
   /** The target's dimensions in natural units (only those it has). */
   readonly profile: Readonly<Record<string, number>>;

@@ -1,0 +1,165 @@
+import { mkdtemp, readFile, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { Roster } from '../ingest/types.ts';
+import { readRoster, type ColumnMap } from '../ingest/readRoster.ts';
+import { writeRejects } from '../ingest/writeRejects.ts';
+import { buildProfiles, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
+import { groupFileNames, type GroupFile, type PlayersFile } from '../profiles/groupFile.ts';
+import { GuardedIndex } from '../index/GuardedIndex.ts';
+import type { IndexParams } from '../index/types.ts';
+import { writeStore } from '../store/writeStore.ts';
+import { float32ToBytes } from '../store/float32Bytes.ts';
+import { indexVector } from '../query/indexVector.ts';
+import type { PositionGroup } from '../profiles/positionGroup.ts';
+
+export const DEFAULT_INDEX_PARAMS: IndexParams = { M: 16, efConstruction: 100, ef: 128, seed: 100 };
+
+export interface BuildOptions {
+  readonly lenient: boolean;
+  readonly columnMap?: ColumnMap;
+  /** Where --lenient writes the skipped rows (default: beside the store, `<store>.rejects.csv`). */
+  readonly rejectsPath?: string;
+  readonly profile?: ProfileOptions;
+  readonly index?: IndexParams;
+  readonly onProgress?: (stage: string, done: number, total: number) => void;
+}
+
+export interface BuildSummary {
+  readonly storeDir: string;
+  readonly rowsRead: Readonly<Record<string, number>>;
+  readonly rejected: number;
+  readonly rejectsPath: string | null;
+  readonly profiles: Readonly<Partial<Record<PositionGroup, number>>>;
+  readonly skipped: ProfileSet['skipped'];
+  readonly seconds: number;
+}
+
+/**
+ * Reads a roster folder, builds the profiles and one HNSW index per position group, and writes the
+ * store (temporary folder, then renamed into place). On bad input in strict mode nothing is written and
+ * an existing store is left as it was.
+ */
+export async function buildStore(rosterDir: string, storeDir: string, options: BuildOptions): Promise<BuildSummary> {
+  const started = performance.now();
+  const progress = options.onProgress ?? (() => {});
+  const roster = await readRoster(rosterDir, {
+    lenient: options.lenient,
+    ...(options.columnMap ? { columnMap: options.columnMap } : {}),
+    onProgress: (file, rows) => progress(`reading ${file}`, rows, 0),
+  });
+  let rejectsPath: string | null = null;
+  if (roster.rejected.length > 0) {
+    rejectsPath = options.rejectsPath ?? `${storeDir.replace(/\/+$/, '')}.rejects.csv`;
+    await writeRejects(rejectsPath, roster.rejected);
+  }
+  progress('profiles', 0, 1);
+  const profiles = buildProfiles(roster, options.profile ?? DEFAULT_PROFILE_OPTIONS);
+  const files = new Map<string, Uint8Array | string>();
+  const playerIndex = new Map<string, number>();
+  files.set('players.json', JSON.stringify(playersFile(roster, playerIndex)));
+  const indexParams = options.index ?? DEFAULT_INDEX_PARAMS;
+  const counts: Partial<Record<PositionGroup, number>> = {};
+  const scratch = await mkdtemp(join(tmpdir(), 'kindred-index-'));
+  try {
+    let done = 0;
+    for (const [group, g] of profiles.groups) {
+      progress(`index ${group}`, done, profiles.groups.size);
+      const names = groupFileNames(group);
+      const vectors = weightedVectors(g);
+      const d = g.dims.length;
+      const index = GuardedIndex.build(vectors, d, indexParams);
+      const indexPath = join(scratch, names.index);
+      index.save(indexPath);
+      files.set(names.index, await readFile(indexPath));
+      files.set(names.raw, float32ToBytes(g.raw));
+      files.set(names.z, float32ToBytes(g.z));
+      files.set(names.json, JSON.stringify(groupFile(g, playerIndex, roster.levels, { ...indexParams, dim: d, count: g.meta.length })));
+      counts[group] = g.meta.length;
+      done++;
+    }
+    progress('writing store', 0, 1);
+    await writeStore(storeDir, {
+      params: {
+        roster: rosterDir,
+        lenient: options.lenient,
+        profile: options.profile ?? DEFAULT_PROFILE_OPTIONS,
+        index: indexParams,
+        space: 'input',
+        groups: counts,
+      },
+      files,
+    });
+  } finally {
+    await rm(scratch, { recursive: true, force: true });
+  }
+  return {
+    storeDir,
+    rowsRead: roster.rowsRead,
+    rejected: roster.rejected.length,
+    rejectsPath,
+    profiles: counts,
+    skipped: profiles.skipped,
+    seconds: (performance.now() - started) / 1000,
+  };
+}
+
+/** Index vectors: sqrt(redundancy weight) * z, missing as 0 (see indexVector). */
+export function weightedVectors(g: GroupProfiles): Float32Array {
+  const d = g.dims.length;
+  const n = g.meta.length;
+  const sqrtW = Float64Array.from(g.redundancy, Math.sqrt);
+  const out = new Float32Array(n * d);
+  for (let i = 0; i < n; i++) indexVector(g.z, i * d, sqrtW, out, i * d);
+  return out;
+}
+
+function playersFile(roster: Roster, playerIndex: Map<string, number>): PlayersFile {
+  const players: PlayersFile['players'] = [];
+  for (const p of roster.players.values()) {
+    playerIndex.set(p.playerId, players.length);
+    players.push({
+      player_id: p.playerId,
+      name: p.name,
+      birth_date: p.birthDate ?? null,
+      bats: p.bats ?? null,
+      throws: p.throws ?? null,
+    });
+  }
+  const contracts: PlayersFile['contracts'] = [];
+  for (const c of roster.contracts) {
+    const idx = playerIndex.get(c.playerId);
+    if (idx !== undefined) contracts.push([idx, c.season, c.salaryUsd]);
+  }
+  return { levels: [...roster.levels], players, contracts };
+}
+
+function groupFile(
+  g: GroupProfiles,
+  playerIndex: ReadonlyMap<string, number>,
+  levels: readonly string[],
+  index: GroupFile['index'],
+): GroupFile {
+  const levelIdx = new Map(levels.map((l, i) => [l, i]));
+  const strata: GroupFile['strata'] = {};
+  for (const [dim, map] of g.strata) {
+    strata[dim] = [...map].map(([key, s]) => [key, s.mean, s.sd, s.n, s.seasons[0], s.seasons[1]]);
+  }
+  return {
+    group: g.group,
+    n: g.meta.length,
+    dims: [...g.dims],
+    redundancy: [...g.redundancy],
+    rows: {
+      player: g.meta.map((m) => playerIndex.get(m.playerId) ?? -1),
+      season: g.meta.map((m) => m.season),
+      level: g.meta.map((m) => levelIdx.get(m.level) ?? -1),
+      position: g.meta.map((m) => m.position),
+      age: g.meta.map((m) => m.age),
+      sample: g.meta.map((m) => m.sample),
+      teams: g.meta.map((m) => m.teams.join('/')),
+    },
+    strata,
+    index,
+  };
+}

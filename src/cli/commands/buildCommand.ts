@@ -1,0 +1,74 @@
+import { Command } from 'commander';
+import cliProgress from 'cli-progress';
+import type { CliIo } from '../CliIo.ts';
+import { buildStore, type BuildSummary } from '../../build/buildStore.ts';
+import { loadColumnMap } from '../../ingest/loadColumnMap.ts';
+import { DEFAULT_STORE } from '../defaults.ts';
+import { z } from 'zod';
+import { UsageError } from '../../errors/KindredError.ts';
+
+const buildOptionsSchema = z.object({
+  store: z.string(),
+  lenient: z.boolean(),
+  columns: z.string().optional(),
+  rejects: z.string().optional(),
+});
+
+/** The build summary: rows read and rejected per file, profiles per group, time. */
+export function formatBuildSummary(s: BuildSummary): string {
+  const lines = [`Store written to ${s.storeDir} in ${s.seconds.toFixed(1)} s`];
+  const files = Object.entries(s.rowsRead).map(([f, n]) => `${f} ${n.toLocaleString('en-US')}`);
+  lines.push(`Rows read: ${files.join(', ')}`);
+  lines.push(`Rows rejected: ${s.rejected.toLocaleString('en-US')}${s.rejectsPath ? ` (every one with its reason in ${s.rejectsPath})` : ''}`);
+  const groups = Object.entries(s.profiles).map(([g, n]) => `${g} ${n.toLocaleString('en-US')}`);
+  lines.push(`Profiles: ${groups.join(', ')}`);
+  const k = s.skipped;
+  lines.push(
+    `Not profiled: ${k.hittersBelowMinimum.toLocaleString('en-US')} hitter seasons under the PA minimum, ${k.pitchersBelowMinimum.toLocaleString('en-US')} pitcher seasons under the BF minimum, ${k.pitchersBatting.toLocaleString('en-US')} pitchers' batting lines`,
+  );
+  return lines.join('\n') + '\n';
+}
+
+export function buildCommand(io: CliIo): Command {
+  return new Command('build')
+    .description('read a roster folder of CSV files and write a store of profiles and indexes')
+    .argument('<roster-dir>', 'folder with players.csv, batting.csv, fielding.csv, pitching.csv, contracts.csv')
+    .option('--store <dir>', 'store folder to write (replaced only when the build succeeds)', DEFAULT_STORE)
+    .option('--lenient', 'skip bad rows (each written with its reason to a rejects file) instead of stopping', false)
+    .option('--columns <map.json>', 'map your export\u2019s file and column names to the canonical ones')
+    .option('--rejects <file>', 'where --lenient writes skipped rows (default <store>.rejects.csv)')
+    .action(async (rosterDir: string, raw: unknown) => {
+      const parsed = buildOptionsSchema.safeParse(raw);
+      if (!parsed.success) throw new UsageError(`bad build options: ${parsed.error.issues[0]?.message ?? ''}`);
+      const o = parsed.data;
+      const columnMap = o.columns !== undefined ? await loadColumnMap(o.columns) : undefined;
+      const bar = io.isTTY
+        ? new cliProgress.SingleBar(
+            { format: ' {stage} [{bar}] {value}', stream: process.stderr, hideCursor: true, clearOnComplete: true },
+            cliProgress.Presets.shades_classic,
+          )
+        : null;
+      bar?.start(1, 0, { stage: 'reading' });
+      let lastStage = '';
+      try {
+        const summary = await buildStore(rosterDir, o.store, {
+          lenient: o.lenient,
+          ...(columnMap ? { columnMap } : {}),
+          ...(o.rejects !== undefined ? { rejectsPath: o.rejects } : {}),
+          onProgress: (stage, done, total) => {
+            if (bar) {
+              bar.setTotal(Math.max(total, done, 1));
+              bar.update(done, { stage });
+            } else if (stage !== lastStage && !stage.startsWith('reading')) {
+              io.stderr.write(`${stage}...\n`);
+            }
+            lastStage = stage;
+          },
+        });
+        bar?.stop();
+        io.stderr.write(formatBuildSummary(summary));
+      } finally {
+        bar?.stop();
+      }
+    });
+}

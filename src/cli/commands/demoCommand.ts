@@ -1,0 +1,61 @@
+import { Command } from 'commander';
+import { fileURLToPath } from 'node:url';
+import type { CliIo } from '../CliIo.ts';
+import { buildStore } from '../../build/buildStore.ts';
+import { loadProfileStore } from '../../query/loadProfileStore.ts';
+import { DEFAULT_COMPS_OPTIONS, findComps } from '../../query/findComps.ts';
+import { playerTarget } from '../../query/playerTarget.ts';
+import { compsTable } from '../../report/compsTable.ts';
+import { formatBuildSummary } from './buildCommand.ts';
+import { DEFAULT_STORE } from '../defaults.ts';
+import type { ProfileStore } from '../../query/ProfileStore.ts';
+import type { TargetRow } from '../../query/selectTargetRow.ts';
+
+/** The bundled invented league. */
+export const DEMO_ROSTER = fileURLToPath(new URL('../../../demo-roster', import.meta.url));
+
+/** The demo's featured target: the top level's catcher with the most plate appearances in the latest season. */
+export function featuredTarget(store: ProfileStore): TargetRow | undefined {
+  const g = store.groups.get('C');
+  if (!g) return undefined;
+  const top = store.levels.length - 1;
+  let best = -1;
+  let latest = -Infinity;
+  for (let i = 0; i < g.n; i++) if ((g.level[i] as number) === top) latest = Math.max(latest, g.season[i] as number);
+  for (let i = 0; i < g.n; i++) {
+    if (g.level[i] !== top || g.season[i] !== latest) continue;
+    if (best < 0 || (g.sample[i] as number) > (g.sample[best] as number)) best = i;
+  }
+  return best < 0 ? undefined : { group: 'C', row: best };
+}
+
+export function demoCommand(io: CliIo): Command {
+  return new Command('demo')
+    .description('build a store from the bundled invented league and show comps for one of its catchers')
+    .option('--store <dir>', 'where to write the demo store', DEFAULT_STORE)
+    .action(async (raw: { store: string }) => {
+      io.stderr.write(`Building the demo store from ${DEMO_ROSTER} (an invented league)...\n`);
+      const summary = await buildStore(DEMO_ROSTER, raw.store, { lenient: false });
+      io.stderr.write(formatBuildSummary(summary));
+      const store = await loadProfileStore(raw.store);
+      const at = featuredTarget(store);
+      if (!at) {
+        io.stderr.write('The demo roster has no catcher at the top level.\n');
+        return;
+      }
+      const result = findComps(store, playerTarget(store, at), DEFAULT_COMPS_OPTIONS);
+      io.stdout.write('\n' + compsTable(result, store.groups.get('C')?.dims ?? []));
+      const id = result.query.player_id ?? '';
+      io.stdout.write(
+        [
+          '',
+          'Try next:',
+          `  npx kindred comps ${id} --format json`,
+          `  npx kindred comps --want "pop_2b_s=1.90,obp=.340" --position C`,
+          `  npx kindred comps ${id} --pool-level MLB --age 25-30 --preset glove`,
+          '  npx kindred dims --position C',
+          '',
+        ].join('\n'),
+      );
+    });
+}

@@ -1,0 +1,2 @@
+/** Store folder used when --store is not given. */
+export const DEFAULT_STORE = '.kindred-store';

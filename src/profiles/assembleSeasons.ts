@@ -1,0 +1,126 @@
+import type { FieldingSeason, PitchingSeason, Position, Roster } from '../ingest/types.ts';
+import type { HitterLine } from './HitterLine.ts';
+import { ageOnJune30 } from '../stats/ageOnJune30.ts';
+
+/** Minimum samples for a season to get a profile (build parameters). */
+export interface SampleMinimums {
+  /** Plate appearances for a hitter profile. */
+  readonly minPa: number;
+  /** Batters faced for a pitcher profile. */
+  readonly minBf: number;
+}
+
+export const DEFAULT_MINIMUMS: SampleMinimums = { minPa: 30, minBf: 30 };
+
+export interface SeasonMeta {
+  readonly playerId: string;
+  readonly season: number;
+  readonly level: string;
+  readonly position: Position;
+  /** Age on June 30 of the season; null without a birth date. */
+  readonly age: number | null;
+  /** Plate appearances (hitters) or batters faced (pitchers). */
+  readonly sample: number;
+  readonly teams: readonly string[];
+}
+
+export interface AssembledSeasons {
+  readonly hitters: readonly { readonly meta: SeasonMeta; readonly line: HitterLine }[];
+  readonly pitchers: readonly { readonly meta: SeasonMeta; readonly line: PitchingSeason }[];
+  /** Seasons left without a profile, by reason; reported in the build summary, never silent. */
+  readonly skipped: { readonly hittersBelowMinimum: number; readonly pitchersBelowMinimum: number; readonly pitchersBatting: number };
+}
+
+const FIELD_ORDER = ['C', 'SS', '2B', 'CF', '3B', 'RF', 'LF', '1B'];
+
+const keyOf = (playerId: string, season: number, level: string): string => `${playerId}\u0000${season}\u0000${level}`;
+
+/**
+ * Turns the roster's lines into one hitter line and/or one pitcher line per player, season and level.
+ * - A season's position is the fielding position with the most innings (ties: the more demanding
+ *   position first, C, SS, 2B, CF, 3B, RF, LF, 1B); a hitter with no fielding row is DH.
+ * - A pitcher is SP when at least half his games are starts, RP otherwise.
+ * - A player with both lines at one level is profiled as a pitcher, and also as a hitter only when his
+ *   plate appearances reach his batters faced (a true two-way season).
+ */
+export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAULT_MINIMUMS): AssembledSeasons {
+  const fieldingByKey = new Map<string, FieldingSeason[]>();
+  for (const f of roster.fielding) {
+    const key = keyOf(f.playerId, f.season, f.level);
+    const list = fieldingByKey.get(key);
+    if (list) list.push(f);
+    else fieldingByKey.set(key, [f]);
+  }
+  const pitchingByKey = new Map<string, PitchingSeason>();
+  for (const p of roster.pitching) pitchingByKey.set(keyOf(p.playerId, p.season, p.level), p);
+
+  const ageOf = (playerId: string, season: number): number | null => {
+    const birth = roster.players.get(playerId)?.birthDate;
+    return birth === undefined ? null : ageOnJune30(birth, season);
+  };
+
+  const hitters: { meta: SeasonMeta; line: HitterLine }[] = [];
+  let hittersBelowMinimum = 0;
+  let pitchersBatting = 0;
+  for (const b of roster.batting) {
+    if (b.PA < minimums.minPa) {
+      hittersBelowMinimum++;
+      continue;
+    }
+    const key = keyOf(b.playerId, b.season, b.level);
+    const pitching = pitchingByKey.get(key);
+    if (pitching && pitching.BF > b.PA) {
+      pitchersBatting++;
+      continue;
+    }
+    const primary = primaryPosition(fieldingByKey.get(key) ?? []);
+    hitters.push({
+      meta: {
+        playerId: b.playerId,
+        season: b.season,
+        level: b.level,
+        position: primary?.pos ?? 'DH',
+        age: ageOf(b.playerId, b.season),
+        sample: b.PA,
+        teams: b.teams,
+      },
+      line: { batting: b, fielding: primary },
+    });
+  }
+
+  const pitchers: { meta: SeasonMeta; line: PitchingSeason }[] = [];
+  let pitchersBelowMinimum = 0;
+  for (const p of roster.pitching) {
+    if (p.BF < minimums.minBf) {
+      pitchersBelowMinimum++;
+      continue;
+    }
+    pitchers.push({
+      meta: {
+        playerId: p.playerId,
+        season: p.season,
+        level: p.level,
+        position: 2 * p.GS >= p.G ? 'SP' : 'RP',
+        age: ageOf(p.playerId, p.season),
+        sample: p.BF,
+        teams: p.teams,
+      },
+      line: p,
+    });
+  }
+  return { hitters, pitchers, skipped: { hittersBelowMinimum, pitchersBelowMinimum, pitchersBatting } };
+}
+
+function primaryPosition(rows: readonly FieldingSeason[]): FieldingSeason | undefined {
+  let best: FieldingSeason | undefined;
+  for (const row of rows) {
+    if (
+      best === undefined ||
+      row.outs > best.outs ||
+      (row.outs === best.outs && FIELD_ORDER.indexOf(row.pos) < FIELD_ORDER.indexOf(best.pos))
+    ) {
+      best = row;
+    }
+  }
+  return best;
+}

@@ -1,0 +1,152 @@
+import type { Roster } from '../ingest/types.ts';
+import type { Dimension, DimensionInfo, LeagueContext } from './Dimension.ts';
+import { describeDimension } from './Dimension.ts';
+import { assembleSeasons, DEFAULT_MINIMUMS, type AssembledSeasons, type SampleMinimums, type SeasonMeta } from './assembleSeasons.ts';
+import { measureDimensions, type MeasuredColumn } from './measureDimensions.ts';
+import { standardiseByStratum, DEFAULT_STANDARDISE, type StandardiseOptions, type StratumStats } from './standardiseByStratum.ts';
+import { redundancyWeights } from './redundancyWeights.ts';
+import { groupOf, POSITION_GROUPS, type PositionGroup } from './positionGroup.ts';
+import { HITTER_DIMENSIONS } from './hitterDimensions.ts';
+import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
+import { fipConstant } from '../stats/fipConstant.ts';
+import { era } from '../stats/era.ts';
+
+/** The profiles of one position group, row-major n x d. */
+export interface GroupProfiles {
+  readonly group: PositionGroup;
+  readonly dims: readonly DimensionInfo[];
+  readonly meta: readonly SeasonMeta[];
+  /** Observed values in natural units (NaN = missing). */
+  readonly raw: Float32Array;
+  /** Standardised regressed values (NaN = missing). */
+  readonly z: Float32Array;
+  /** Per dimension, stratum key `${season}|${level}|${group or position}` to its stats. */
+  readonly strata: ReadonlyMap<string, ReadonlyMap<string, StratumStats>>;
+  /** Redundancy weight per dimension (see redundancyWeights). */
+  readonly redundancy: Float64Array;
+}
+
+export interface ProfileOptions {
+  readonly minimums: SampleMinimums;
+  readonly standardise: StandardiseOptions;
+}
+
+export const DEFAULT_PROFILE_OPTIONS: ProfileOptions = { minimums: DEFAULT_MINIMUMS, standardise: DEFAULT_STANDARDISE };
+
+export interface ProfileSet {
+  readonly groups: ReadonlyMap<PositionGroup, GroupProfiles>;
+  readonly skipped: AssembledSeasons['skipped'];
+}
+
+export function dimensionsOf(group: PositionGroup): readonly DimensionInfo[] {
+  return dimensionDefs(group).map(describeDimension);
+}
+
+function dimensionDefs(group: PositionGroup): readonly Dimension<never>[] {
+  const all: readonly Dimension<never>[] = group === 'SP' || group === 'RP' ? PITCHER_DIMENSIONS : HITTER_DIMENSIONS;
+  return all.filter((d) => d.groups.includes(group));
+}
+
+/**
+ * From a checked roster to standardised profiles per position group:
+ * assemble seasons, measure and regress each dimension against its league (season and level),
+ * standardise within season, level and group (or position), and weigh redundancy.
+ */
+export function buildProfiles(roster: Roster, options: ProfileOptions = DEFAULT_PROFILE_OPTIONS): ProfileSet {
+  const seasons = assembleSeasons(roster, options.minimums);
+  const groups = new Map<PositionGroup, GroupProfiles>();
+
+  const hitterLines = seasons.hitters.map((h) => h.line);
+  const hitterMeta = seasons.hitters.map((h) => h.meta);
+  const noLeague: LeagueContext = { fipConstant: NaN };
+  const hitterCols = measureDimensions(HITTER_DIMENSIONS, {
+    lines: hitterLines,
+    leagueKey: (i, scope) => leagueKey(hitterMeta[i] as SeasonMeta, scope),
+    league: () => noLeague,
+  });
+
+  const pitcherLines = seasons.pitchers.map((p) => p.line);
+  const pitcherMeta = seasons.pitchers.map((p) => p.meta);
+  const constants = fipConstants(roster);
+  const pitcherCols = measureDimensions(PITCHER_DIMENSIONS, {
+    lines: pitcherLines,
+    leagueKey: (i, scope) => leagueKey(pitcherMeta[i] as SeasonMeta, scope),
+    league: (i) => {
+      const m = pitcherMeta[i] as SeasonMeta;
+      return { fipConstant: constants.get(`${m.season}|${m.level}`) ?? NaN };
+    },
+  });
+
+  for (const group of POSITION_GROUPS) {
+    const pitcher = group === 'SP' || group === 'RP';
+    const meta = pitcher ? pitcherMeta : hitterMeta;
+    const cols = pitcher ? pitcherCols : hitterCols;
+    const rows: number[] = [];
+    for (let i = 0; i < meta.length; i++) if (groupOf((meta[i] as SeasonMeta).position) === group) rows.push(i);
+    if (rows.length === 0) continue;
+    groups.set(group, assembleGroup(group, rows, meta, cols, options.standardise));
+  }
+  return { groups, skipped: seasons.skipped };
+}
+
+function leagueKey(m: SeasonMeta, scope: 'group' | 'position'): string {
+  return scope === 'group' ? `${m.season}|${m.level}` : `${m.season}|${m.level}|${m.position}`;
+}
+
+function assembleGroup(
+  group: PositionGroup,
+  rows: readonly number[],
+  allMeta: readonly SeasonMeta[],
+  cols: ReadonlyMap<string, MeasuredColumn>,
+  standardise: StandardiseOptions,
+): GroupProfiles {
+  const dims = dimensionsOf(group);
+  const n = rows.length;
+  const d = dims.length;
+  const meta = rows.map((i) => allMeta[i] as SeasonMeta);
+  const raw = new Float32Array(n * d);
+  const z = new Float32Array(n * d);
+  const z64 = new Float64Array(n * d);
+  const strata = new Map<string, ReadonlyMap<string, StratumStats>>();
+  dims.forEach((dim, j) => {
+    const col = cols.get(dim.name);
+    if (!col) throw new Error(`internal: dimension ${dim.name} was not measured`);
+    const values = new Float64Array(n);
+    for (let r = 0; r < n; r++) {
+      const src = rows[r] as number;
+      values[r] = col.regressed[src] as number;
+      raw[r * d + j] = col.raw[src] as number;
+    }
+    const scoped = (r: number): string => {
+      const m = meta[r] as SeasonMeta;
+      return dim.scope === 'group' ? `${m.level}|${group}` : `${m.level}|${m.position}`;
+    };
+    const st = standardiseByStratum(values, (r) => (meta[r] as SeasonMeta).season, scoped, standardise);
+    for (let r = 0; r < n; r++) {
+      const v = st.z[r] as number;
+      z[r * d + j] = v;
+      z64[r * d + j] = v;
+    }
+    strata.set(dim.name, st.strata);
+  });
+  return { group, dims, meta, raw, z, strata, redundancy: redundancyWeights(z64, n, d) };
+}
+
+/** FIP constant of every season and level: league ERA minus the league's raw FIP (src/stats/fipConstant.ts). */
+function fipConstants(roster: Roster): Map<string, number> {
+  const totals = new Map<string, { HR: number; BB: number; HBP: number; SO: number; ER: number; outs: number }>();
+  for (const p of roster.pitching) {
+    const key = `${p.season}|${p.level}`;
+    const t = totals.get(key) ?? { HR: 0, BB: 0, HBP: 0, SO: 0, ER: 0, outs: 0 };
+    t.HR += p.HR;
+    t.BB += p.BB;
+    t.HBP += p.HBP;
+    t.SO += p.SO;
+    t.ER += p.ER;
+    t.outs += p.outs;
+    totals.set(key, t);
+  }
+  const out = new Map<string, number>();
+  for (const [key, t] of totals) out.set(key, fipConstant(era(t.ER, t.outs), t.HR, t.BB, t.HBP, t.SO, t.outs));
+  return out;
+}

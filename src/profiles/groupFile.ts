@@ -1,0 +1,64 @@
+/**
+ * The JSON part of a position group in the store (`group-<G>.json`): dimensions, weights, strata and
+ * the row metadata in columns. The numbers live beside it in `group-<G>.raw.f32` and `group-<G>.z.f32`.
+ */
+import { z } from 'zod';
+import { POSITION_GROUPS } from './positionGroup.ts';
+
+const dimensionInfoSchema = z.strictObject({
+  name: z.string(),
+  label: z.string(),
+  unit: z.string(),
+  direction: z.enum(['higher', 'lower', 'neither']),
+  meaning: z.string(),
+  source: z.string(),
+  skill: z.string(),
+  scope: z.enum(['group', 'position']),
+  digits: z.number().int(),
+  stabilisation: z.number(),
+});
+
+export const groupFileSchema = z.strictObject({
+  group: z.enum(POSITION_GROUPS),
+  n: z.number().int().nonnegative(),
+  dims: z.array(dimensionInfoSchema),
+  redundancy: z.array(z.number()),
+  rows: z.strictObject({
+    player: z.array(z.number().int().nonnegative()),
+    season: z.array(z.number().int()),
+    level: z.array(z.number().int().nonnegative()),
+    position: z.array(z.enum(['C', '1B', '2B', '3B', 'SS', 'LF', 'CF', 'RF', 'DH', 'SP', 'RP'])),
+    age: z.array(z.number().int().nullable()),
+    sample: z.array(z.number().int().nonnegative()),
+    teams: z.array(z.string()),
+  }),
+  /** Per dimension: [stratum key, mean, sd, n, first season, last season]. */
+  strata: z.record(z.string(), z.array(z.tuple([z.string(), z.number(), z.number(), z.number(), z.number(), z.number()]))),
+  index: z.strictObject({ M: z.number(), efConstruction: z.number(), ef: z.number(), seed: z.number(), dim: z.number(), count: z.number() }),
+});
+
+export type GroupFile = z.infer<typeof groupFileSchema>;
+
+export const playersFileSchema = z.strictObject({
+  levels: z.array(z.string()),
+  players: z.array(
+    z.strictObject({
+      player_id: z.string(),
+      name: z.string(),
+      birth_date: z.string().nullable(),
+      bats: z.enum(['L', 'R', 'S']).nullable(),
+      throws: z.enum(['L', 'R']).nullable(),
+    }),
+  ),
+  /** [player index, season, salary in USD] */
+  contracts: z.array(z.tuple([z.number().int(), z.number().int(), z.number()])),
+});
+
+export type PlayersFile = z.infer<typeof playersFileSchema>;
+
+export const groupFileNames = (group: string): { json: string; raw: string; z: string; index: string } => ({
+  json: `group-${group}.json`,
+  raw: `group-${group}.raw.f32`,
+  z: `group-${group}.z.f32`,
+  index: `group-${group}.hnsw`,
+});

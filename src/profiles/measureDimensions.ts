@@ -1,0 +1,115 @@
+import type { Dimension, LeagueContext } from './Dimension.ts';
+import { regressToMean } from '../stats/regressToMean.ts';
+import { regressAverageToMean } from '../stats/regressAverageToMean.ts';
+
+/** Observed and regressed values of one dimension for every line (NaN = missing). */
+export interface MeasuredColumn {
+  readonly raw: Float64Array;
+  readonly regressed: Float64Array;
+}
+
+export interface MeasureInput<L> {
+  readonly lines: readonly L[];
+  /** League stratum of a line for a dimension of the given scope (season and level, plus position). */
+  readonly leagueKey: (index: number, scope: 'group' | 'position') => string;
+  /** League figures (FIP constant) for a line. */
+  readonly league: (index: number) => LeagueContext;
+}
+
+const usable = (x: number | undefined): x is number => x !== undefined && Number.isFinite(x);
+
+/**
+ * Measures every dimension on every line. League means are computed over all lines passed in (all
+ * position groups of the same kind, so a catcher's OBP is regressed toward the whole league's), per
+ * season and level, or per season, level and position for fielding dimensions.
+ * Rates: regressToMean(numerator, denominator, league rate, k); a zero or missing denominator is missing.
+ * Means: regressAverageToMean(value, events, league mean, k); without an event count the value is kept as is.
+ * Derived dimensions are computed after the others, from their regressed values.
+ */
+export function measureDimensions<L>(dims: readonly Dimension<L>[], input: MeasureInput<L>): Map<string, MeasuredColumn> {
+  const n = input.lines.length;
+  const out = new Map<string, MeasuredColumn>();
+  for (const dim of dims) {
+    const raw = new Float64Array(n).fill(NaN);
+    const regressed = new Float64Array(n).fill(NaN);
+    const m = dim.measure;
+    if (m.kind === 'rate') {
+      const num = new Float64Array(n).fill(NaN);
+      const den = new Float64Array(n).fill(NaN);
+      const totals = new Map<string, [number, number]>();
+      for (let i = 0; i < n; i++) {
+        const line = input.lines[i] as L;
+        const a = m.numerator(line);
+        const b = m.denominator(line);
+        if (!usable(a) || !usable(b) || b <= 0) continue;
+        num[i] = a;
+        den[i] = b;
+        const key = input.leagueKey(i, dim.scope);
+        const t = totals.get(key);
+        if (t) {
+          t[0] += a;
+          t[1] += b;
+        } else totals.set(key, [a, b]);
+      }
+      for (let i = 0; i < n; i++) {
+        const a = num[i] as number;
+        const b = den[i] as number;
+        if (Number.isNaN(a)) continue;
+        const t = totals.get(input.leagueKey(i, dim.scope)) as [number, number];
+        raw[i] = a / b;
+        regressed[i] = m.stabilisation > 0 ? regressToMean(a, b, t[0] / t[1], m.stabilisation) : a / b;
+      }
+    } else if (m.kind === 'mean') {
+      const vals = new Float64Array(n).fill(NaN);
+      const evs = new Float64Array(n).fill(NaN);
+      const totals = new Map<string, [number, number]>();
+      for (let i = 0; i < n; i++) {
+        const line = input.lines[i] as L;
+        const v = m.value(line);
+        if (!usable(v)) continue;
+        vals[i] = v;
+        const e = m.events(line);
+        if (!usable(e) || e <= 0) continue;
+        evs[i] = e;
+        const key = input.leagueKey(i, dim.scope);
+        const t = totals.get(key);
+        if (t) {
+          t[0] += v * e;
+          t[1] += e;
+        } else totals.set(key, [v * e, e]);
+      }
+      for (let i = 0; i < n; i++) {
+        const v = vals[i] as number;
+        if (Number.isNaN(v)) continue;
+        raw[i] = v;
+        const e = evs[i] as number;
+        const t = totals.get(input.leagueKey(i, dim.scope));
+        regressed[i] =
+          m.stabilisation > 0 && !Number.isNaN(e) && t ? regressAverageToMean(v, e, t[0] / t[1], m.stabilisation) : v;
+      }
+    }
+    out.set(dim.name, { raw, regressed });
+  }
+  for (const dim of dims) {
+    const m = dim.measure;
+    if (m.kind !== 'derived') continue;
+    const raw = new Float64Array(n).fill(NaN);
+    const regressed = new Float64Array(n).fill(NaN);
+    const others = [...out.entries()];
+    for (let i = 0; i < n; i++) {
+      const line = input.lines[i] as L;
+      const league = input.league(i);
+      const r = m.raw(line, league);
+      if (usable(r)) raw[i] = r;
+      const values = new Map<string, number>();
+      for (const [name, col] of others) {
+        const v = col.regressed[i] as number;
+        if (!Number.isNaN(v)) values.set(name, v);
+      }
+      const g = m.regressed(line, values, league);
+      if (usable(g)) regressed[i] = g;
+    }
+    out.set(dim.name, { raw, regressed });
+  }
+  return out;
+}

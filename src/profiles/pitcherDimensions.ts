@@ -1,0 +1,90 @@
+/**
+ * The pitchers' dimensions (starters and relievers alike; each group is standardised on its own).
+ * Rates name the formula module in src/stats they follow.
+ */
+import type { PitchingSeason } from '../ingest/types.ts';
+import type { Dimension } from './Dimension.ts';
+import { STABILISATION } from '../stats/stabilisation.ts';
+import { fip } from '../stats/fip.ts';
+
+type D = Dimension<PitchingSeason>;
+
+const PITCHERS = ['SP', 'RP'] as const;
+const k = (rate: keyof typeof STABILISATION): number => STABILISATION[rate].sample;
+/** Balls in play against: BF - SO - BB - HBP - HR (no sacrifice data in the pitching file). */
+const bipAgainst = (p: PitchingSeason): number => p.BF - p.SO - p.BB - p.HBP - p.HR;
+
+export const PITCHER_DIMENSIONS: readonly D[] = [
+  {
+    name: 'k_pct', label: 'K%', unit: 'fraction of BF', direction: 'higher', skill: 'stuff',
+    meaning: 'Strikeouts per batter faced.', source: 'src/stats/pitcherStrikeoutRate.ts (SO / BF)',
+    groups: PITCHERS, scope: 'group', digits: 3,
+    measure: { kind: 'rate', numerator: (p) => p.SO, denominator: (p) => p.BF, stabilisation: k('pitcherStrikeoutRate') },
+  },
+  {
+    name: 'bb_pct', label: 'BB%', unit: 'fraction of BF', direction: 'lower', skill: 'control',
+    meaning: 'Walks per batter faced.', source: 'src/stats/pitcherWalkRate.ts (BB / BF)',
+    groups: PITCHERS, scope: 'group', digits: 3,
+    measure: { kind: 'rate', numerator: (p) => p.BB, denominator: (p) => p.BF, stabilisation: k('pitcherWalkRate') },
+  },
+  {
+    name: 'hr_pct', label: 'HR%', unit: 'fraction of BF', direction: 'lower', skill: 'contact allowed',
+    meaning: 'Home runs allowed per batter faced.', source: 'src/stats/pitcherHomeRunRate.ts (HR / BF)',
+    groups: PITCHERS, scope: 'group', digits: 3,
+    measure: { kind: 'rate', numerator: (p) => p.HR, denominator: (p) => p.BF, stabilisation: k('pitcherHomeRunRate') },
+  },
+  {
+    name: 'babip_against', label: 'BABIP', unit: 'hits per ball in play', direction: 'lower', skill: 'contact allowed',
+    meaning: 'Hits allowed per ball in play (H - HR) / (BF - SO - BB - HBP - HR).', source: 'src/stats/babipAgainst.ts (common practice)',
+    groups: PITCHERS, scope: 'group', digits: 3,
+    measure: { kind: 'rate', numerator: (p) => p.H - p.HR, denominator: bipAgainst, stabilisation: k('babipAgainst') },
+  },
+  {
+    name: 'fip', label: 'FIP', unit: 'runs per 9 IP', direction: 'lower', skill: 'run prevention',
+    meaning: 'Fielding-independent pitching on the ERA scale, from regressed K, BB+HBP and HR rates.',
+    source: 'src/stats/fip.ts with the season-and-level constant from src/stats/fipConstant.ts',
+    groups: PITCHERS, scope: 'group', digits: 2,
+    measure: {
+      kind: 'derived',
+      raw: (p, league) => fip(p.HR, p.BB, p.HBP, p.SO, p.outs, league.fipConstant),
+      regressed: (p, r, league) => {
+        const kr = r.get('k_pct');
+        const bb = r.get('bb_pct');
+        const hr = r.get('hr_pct');
+        if (kr === undefined || bb === undefined || hr === undefined || p.outs === 0) return undefined;
+        // Rates per BF times BF give regressed counts; HBP is taken as observed.
+        return fip(hr * p.BF, bb * p.BF, p.HBP, kr * p.BF, p.outs, league.fipConstant);
+      },
+    },
+  },
+  {
+    name: 'gb_pct', label: 'GB%', unit: 'percent of balls in play', direction: 'higher', skill: 'ground balls',
+    meaning: 'Share of balls in play hit on the ground (0 to 100).', source: 'pitching.csv gb_pct, weighted by balls in play',
+    groups: PITCHERS, scope: 'group', digits: 1,
+    measure: { kind: 'mean', value: (p) => p.gbPct, events: bipAgainst, stabilisation: k('gbPct') },
+  },
+  {
+    name: 'whiff_pct', label: 'Whiff%', unit: 'percent of swings', direction: 'higher', skill: 'stuff',
+    meaning: 'Swings and misses per swing (0 to 100).', source: 'pitching.csv whiff_pct, weighted by BF',
+    groups: PITCHERS, scope: 'group', digits: 1,
+    measure: { kind: 'mean', value: (p) => p.whiffPct, events: (p) => p.BF, stabilisation: k('whiffPct') },
+  },
+  {
+    name: 'fb_mph', label: 'FB velo', unit: 'mph', direction: 'higher', skill: 'velocity',
+    meaning: 'Average fastball velocity (a measurement, not regressed).', source: 'pitching.csv fb_mph, weighted by BF',
+    groups: PITCHERS, scope: 'group', digits: 1,
+    measure: { kind: 'mean', value: (p) => p.fbMph, events: (p) => p.BF, stabilisation: 0 },
+  },
+  {
+    name: 'fb_spin_rpm', label: 'FB spin', unit: 'rpm', direction: 'higher', skill: 'velocity',
+    meaning: 'Average fastball spin rate (a measurement, not regressed).', source: 'pitching.csv fb_spin_rpm, weighted by BF',
+    groups: PITCHERS, scope: 'group', digits: 0,
+    measure: { kind: 'mean', value: (p) => p.fbSpinRpm, events: (p) => p.BF, stabilisation: 0 },
+  },
+  {
+    name: 'ip_per_g', label: 'IP/G', unit: 'innings per game', direction: 'neither', skill: 'workload',
+    meaning: 'Innings per appearance: how long he works each time out.', source: 'pitching.csv IP / G',
+    groups: PITCHERS, scope: 'group', digits: 2,
+    measure: { kind: 'rate', numerator: (p) => p.outs / 3, denominator: (p) => p.G, stabilisation: 0 },
+  },
+];

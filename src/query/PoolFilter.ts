@@ -1,0 +1,13 @@
+import type { Bats, Position, Throws } from '../ingest/types.ts';
+
+/** Which player-seasons may be comps. Every field is optional: absent means no restriction. */
+export interface PoolFilter {
+  readonly levels?: readonly string[];
+  readonly seasonFrom?: number;
+  readonly seasonTo?: number;
+  readonly ageMin?: number;
+  readonly ageMax?: number;
+  readonly bats?: readonly Bats[];
+  readonly throws?: readonly Throws[];
+  readonly positions?: readonly Position[];
+}

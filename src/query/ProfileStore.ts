@@ -1,0 +1,46 @@
+import type { Bats, Position, Throws } from '../ingest/types.ts';
+import type { DimensionInfo } from '../profiles/Dimension.ts';
+import type { PositionGroup } from '../profiles/positionGroup.ts';
+import type { StratumStats } from '../profiles/standardiseByStratum.ts';
+import type { GuardedIndex } from '../index/GuardedIndex.ts';
+
+export interface StoredPlayer {
+  readonly playerId: string;
+  readonly name: string;
+  readonly birthDate: string | null;
+  readonly bats: Bats | null;
+  readonly throws: Throws | null;
+}
+
+/** One position group as queries see it: columns of row metadata, the matrices, the index. */
+export interface StoredGroup {
+  readonly group: PositionGroup;
+  readonly dims: readonly DimensionInfo[];
+  readonly d: number;
+  readonly n: number;
+  readonly redundancy: Float64Array;
+  readonly player: Int32Array;
+  readonly season: Int32Array;
+  readonly level: Int32Array;
+  readonly position: readonly Position[];
+  /** NaN without a birth date. */
+  readonly age: Float64Array;
+  readonly sample: Int32Array;
+  readonly teams: readonly string[];
+  readonly raw: Float32Array;
+  readonly z: Float32Array;
+  /** Per dimension, `${season}|${level}|${scope}` to stats. */
+  readonly strata: ReadonlyMap<string, ReadonlyMap<string, StratumStats>>;
+  readonly index: GuardedIndex;
+}
+
+export interface ProfileStore {
+  readonly dir: string;
+  readonly params: Readonly<Record<string, unknown>>;
+  readonly levels: readonly string[];
+  readonly players: readonly StoredPlayer[];
+  readonly playerById: ReadonlyMap<string, number>;
+  /** Salary by player index and season. */
+  readonly salaries: ReadonlyMap<number, ReadonlyMap<number, number>>;
+  readonly groups: ReadonlyMap<PositionGroup, StoredGroup>;
+}

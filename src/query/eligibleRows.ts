@@ -1,0 +1,41 @@
+import type { PoolFilter } from './PoolFilter.ts';
+import type { ProfileStore, StoredGroup } from './ProfileStore.ts';
+
+/**
+ * The pool as a mask over a group's rows: 1 where the row passes every filter and is not one of the
+ * excluded players (the target himself). A row with an unknown age fails an age filter; a player with
+ * unknown bats or throws fails a bats or throws filter.
+ */
+export function eligibleRows(
+  store: ProfileStore,
+  g: StoredGroup,
+  filter: PoolFilter,
+  excludePlayers: ReadonlySet<number>,
+): { mask: Uint8Array; count: number } {
+  const mask = new Uint8Array(g.n);
+  const levelSet = filter.levels ? new Set(filter.levels.map((l) => store.levels.indexOf(l))) : null;
+  const posSet = filter.positions ? new Set(filter.positions) : null;
+  const batsSet = filter.bats ? new Set(filter.bats) : null;
+  const throwsSet = filter.throws ? new Set(filter.throws) : null;
+  let count = 0;
+  for (let i = 0; i < g.n; i++) {
+    const p = g.player[i] as number;
+    if (excludePlayers.has(p)) continue;
+    if (levelSet && !levelSet.has(g.level[i] as number)) continue;
+    const season = g.season[i] as number;
+    if (filter.seasonFrom !== undefined && season < filter.seasonFrom) continue;
+    if (filter.seasonTo !== undefined && season > filter.seasonTo) continue;
+    const age = g.age[i] as number;
+    if (filter.ageMin !== undefined && !(age >= filter.ageMin)) continue;
+    if (filter.ageMax !== undefined && !(age <= filter.ageMax)) continue;
+    if (posSet && !posSet.has(g.position[i] ?? 'DH')) continue;
+    if (batsSet || throwsSet) {
+      const pl = store.players[p];
+      if (batsSet && !(pl?.bats && batsSet.has(pl.bats))) continue;
+      if (throwsSet && !(pl?.throws && throwsSet.has(pl.throws))) continue;
+    }
+    mask[i] = 1;
+    count++;
+  }
+  return { mask, count };
+}

@@ -1,0 +1,75 @@
+import type { DimensionInfo } from '../profiles/Dimension.ts';
+import { toGrade } from '../stats/toGrade.ts';
+import type { DimensionDetail } from './types.ts';
+
+/** A difference of at most half a standard deviation counts as a close match for `alike`. */
+export const CLOSE_MATCH_SD = 0.5;
+
+export interface Explanation {
+  readonly dimensions: DimensionDetail[];
+  readonly alike: string[];
+  readonly apart: string[];
+}
+
+const gradeOf = (z: number, dim: DimensionInfo): number | null =>
+  Number.isNaN(z) ? null : toGrade(z, dim.direction === 'lower' ? 'lower' : 'higher');
+const round = (x: number, digits: number): number | null => (Number.isNaN(x) ? null : Number(x.toFixed(digits + 1)));
+
+/**
+ * Per-dimension breakdown of one comp: natural values (observed), grades (from the regressed,
+ * standardised values), and each dimension's share of the weighted squared distance (the shares of
+ * the dimensions in play sum to 1; when the profiles are identical the shares follow the weights).
+ * `alike`: up to three of the heaviest-weighted dimensions that differ by at most CLOSE_MATCH_SD,
+ * then the closest others; `apart`: up to three dimensions with the largest shares.
+ */
+export function explainComp(
+  dims: readonly DimensionInfo[],
+  weights: Float64Array,
+  targetZ: Float64Array | Float32Array,
+  targetRaw: Float64Array | Float32Array,
+  compZ: Float32Array,
+  compRaw: Float32Array,
+  offset: number,
+): Explanation {
+  const d = dims.length;
+  const parts = new Float64Array(d);
+  const inPlay: boolean[] = [];
+  let total = 0;
+  let weightInPlay = 0;
+  for (let j = 0; j < d; j++) {
+    const t = targetZ[j] as number;
+    const c = compZ[offset + j] as number;
+    const w = weights[j] as number;
+    const ok = !Number.isNaN(t) && !Number.isNaN(c) && w > 0;
+    inPlay.push(ok);
+    if (!ok) continue;
+    parts[j] = w * (t - c) * (t - c);
+    total += parts[j] as number;
+    weightInPlay += w;
+  }
+  const dimensions: DimensionDetail[] = dims.map((dim, j) => {
+    const t = targetZ[j] as number;
+    const c = compZ[offset + j] as number;
+    const share = !inPlay[j] ? 0 : total > 0 ? (parts[j] as number) / total : (weights[j] as number) / weightInPlay;
+    return {
+      name: dim.name,
+      target: round(targetRaw[j] as number, dim.digits),
+      comp: round(compRaw[offset + j] as number, dim.digits),
+      target_grade: gradeOf(t, dim),
+      comp_grade: gradeOf(c, dim),
+      share,
+      missing: !inPlay[j],
+    };
+  });
+  const shared = dims.map((_, j) => j).filter((j) => inPlay[j]);
+  const diff = (j: number): number => Math.abs((targetZ[j] as number) - (compZ[offset + j] as number));
+  const close = shared.filter((j) => diff(j) <= CLOSE_MATCH_SD).sort((a, b) => (weights[b] as number) - (weights[a] as number) || diff(a) - diff(b));
+  const rest = shared.filter((j) => diff(j) > CLOSE_MATCH_SD).sort((a, b) => diff(a) - diff(b));
+  const alikeIdx = [...close, ...rest].slice(0, 3);
+  const apartIdx = shared
+    .filter((j) => !alikeIdx.includes(j) && (parts[j] as number) > 0)
+    .sort((a, b) => (parts[b] as number) - (parts[a] as number))
+    .slice(0, 3);
+  const name = (j: number): string => (dims[j] as DimensionInfo).name;
+  return { dimensions, alike: alikeIdx.map(name), apart: apartIdx.map(name) };
+}

@@ -1,0 +1,190 @@
+import { QueryError } from '../errors/KindredError.ts';
+import { eligibleRows } from './eligibleRows.ts';
+import { explainComp } from './explainComp.ts';
+import { indexVector } from './indexVector.ts';
+import { likeness } from './likeness.ts';
+import { missingAwareDistance, targetWeight } from './missingAwareDistance.ts';
+import type { PoolFilter } from './PoolFilter.ts';
+import type { ProfileStore, StoredGroup } from './ProfileStore.ts';
+import type { Target } from './Target.ts';
+import type { Comp, CompsResult, QueryEcho } from './types.ts';
+import { userWeights, type WeightPreset } from './weightPresets.ts';
+
+export interface CompsOptions {
+  readonly k: number;
+  /** Skip the index and scan the whole pool. */
+  readonly exact: boolean;
+  /** Allow several seasons of one comp player (default: each player once, his closest season). */
+  readonly allSeasons: boolean;
+  readonly filter: PoolFilter;
+  readonly preset: WeightPreset;
+  readonly weightOverrides: ReadonlyMap<string, number>;
+  /** `redundancy` (default) weighs down dimensions that repeat a skill; `plain` gives every dimension 1. */
+  readonly weighting: 'redundancy' | 'plain';
+  /** Comps must share at least this much of the target's weight (0 to 1). */
+  readonly minCoverage: number;
+}
+
+export const DEFAULT_COMPS_OPTIONS: CompsOptions = {
+  k: 10,
+  exact: false,
+  allSeasons: false,
+  filter: {},
+  preset: 'balanced',
+  weightOverrides: new Map(),
+  weighting: 'redundancy',
+  minCoverage: 0.5,
+};
+
+/** Below this share of the group's weight the target is searched exactly: the index would mislead. */
+const INDEX_MIN_TARGET_COVERAGE = 0.75;
+/** A pool this small is scanned exactly: faster than a filtered index search, and exact. */
+const INDEX_MIN_POOL = 2000;
+
+interface Scored {
+  readonly row: number;
+  readonly d2: number;
+  readonly coverage: number;
+}
+
+/** The weights in play: redundancy (or 1) times the preset and per-dimension multipliers. */
+export function effectiveWeights(g: StoredGroup, options: CompsOptions): Float64Array {
+  const user = userWeights(g.dims, options.preset, options.weightOverrides);
+  return Float64Array.from(user, (u, j) => u * (options.weighting === 'redundancy' ? (g.redundancy[j] as number) : 1));
+}
+
+/**
+ * Ranked comps for a target: HNSW proposes candidates from the pool (the target's own player is
+ * never in it), an exact missing-aware distance orders them, and each comp player appears once,
+ * at his closest season, unless `allSeasons`. Falls back to a full scan of the pool when the
+ * weighting differs from the one the index was built with, when the target lacks much of the
+ * group's dimensions, when the pool is small, or on `exact`.
+ */
+export function findComps(store: ProfileStore, target: Target, options: CompsOptions): CompsResult {
+  const g = store.groups.get(target.group);
+  if (!g) throw new QueryError('kindred.query.emptyPool', `the store has no ${target.group} profiles`, { group: target.group });
+  const weights = effectiveWeights(g, options);
+  const exclude = new Set<number>(target.player >= 0 ? [target.player] : []);
+  const { mask, count } = eligibleRows(store, g, options.filter, exclude);
+  const wT = targetWeight(target.z, weights);
+  if (!(wT > 0)) {
+    throw new QueryError('kindred.query.badTarget', 'the target has no value on any weighted dimension', { group: target.group });
+  }
+  const defaultMetric = options.weighting === 'redundancy' && options.preset === 'balanced' && options.weightOverrides.size === 0;
+  const groupWeight = weights.reduce((a, b) => a + b, 0);
+  const useIndex = !options.exact && defaultMetric && wT / groupWeight >= INDEX_MIN_TARGET_COVERAGE && count >= INDEX_MIN_POOL;
+
+  const score = (row: number): Scored => {
+    const p = missingAwareDistance(target.z, g.z, row * g.d, weights, wT);
+    return { row, d2: p.d2, coverage: p.coverage };
+  };
+  const rank = (rows: Iterable<number>): Scored[] => {
+    const out: Scored[] = [];
+    for (const r of rows) {
+      const s = score(r);
+      if (s.coverage >= options.minCoverage && Number.isFinite(s.d2)) out.push(s);
+    }
+    out.sort((a, b) => a.d2 - b.d2 || (g.season[b.row] as number) - (g.season[a.row] as number));
+    return options.allSeasons ? out : onePerPlayer(out, g);
+  };
+
+  let ranked: Scored[] = [];
+  if (useIndex) {
+    const q = new Float32Array(g.d);
+    indexVector(target.z, 0, Float64Array.from(g.redundancy, Math.sqrt), q, 0);
+    let c = Math.min(count, Math.max(200, 20 * options.k));
+    for (;;) {
+      const hits = g.index.search(q, c, (label) => mask[label] === 1);
+      ranked = rank(hits.labels);
+      if (ranked.length >= options.k || c >= count) break;
+      c = Math.min(count, c * 4);
+    }
+  } else {
+    const rows: number[] = [];
+    for (let i = 0; i < g.n; i++) if (mask[i] === 1) rows.push(i);
+    ranked = rank(rows);
+  }
+
+  const comps: Comp[] = ranked.slice(0, options.k).map((s, i) => {
+    const ex = explainComp(g.dims, weights, target.z, target.raw, g.z, g.raw, s.row * g.d);
+    const player = store.players[g.player[s.row] as number];
+    const distance = Math.sqrt(s.d2);
+    const age = g.age[s.row] as number;
+    return {
+      rank: i + 1,
+      player_id: player?.playerId ?? '',
+      name: player?.name ?? '',
+      season: g.season[s.row] as number,
+      level: store.levels[g.level[s.row] as number] ?? '',
+      position: g.position[s.row] ?? 'DH',
+      age: Number.isNaN(age) ? null : age,
+      likeness: round(likeness(distance, wT), 1),
+      distance: round(distance, 4),
+      coverage: round(s.coverage, 3),
+      dimensions: ex.dimensions,
+      alike: ex.alike,
+      apart: ex.apart,
+    };
+  });
+
+  return {
+    query: echoTarget(store, g, target, options, useIndex),
+    pool: {
+      group_size: g.n,
+      eligible: count,
+      filters: filterEcho(options.filter),
+      weights: Object.fromEntries(g.dims.map((d, j) => [d.name, round(weights[j] as number, 4)])),
+    },
+    comps,
+  };
+}
+
+function onePerPlayer(sorted: readonly Scored[], g: StoredGroup): Scored[] {
+  const seen = new Set<number>();
+  const out: Scored[] = [];
+  for (const s of sorted) {
+    const p = g.player[s.row] as number;
+    if (seen.has(p)) continue;
+    seen.add(p);
+    out.push(s);
+  }
+  return out;
+}
+
+const round = (x: number, digits: number): number => Number(x.toFixed(digits));
+
+function echoTarget(store: ProfileStore, g: StoredGroup, t: Target, options: CompsOptions, usedIndex: boolean): QueryEcho {
+  const profile: Record<string, number> = {};
+  g.dims.forEach((d, j) => {
+    const v = t.raw[j] as number;
+    if (!Number.isNaN(v) && !Number.isNaN(t.z[j] as number)) profile[d.name] = Number(v.toFixed(d.digits + 1));
+  });
+  const player = t.player >= 0 ? store.players[t.player] : undefined;
+  return {
+    kind: t.kind,
+    player_id: player?.playerId ?? null,
+    name: player?.name ?? null,
+    season: t.season,
+    level: t.level,
+    position: t.position,
+    group: t.group,
+    age: t.age,
+    profile,
+    k: options.k,
+    method: usedIndex ? 'hnsw' : 'exact',
+    space: 'input',
+  };
+}
+
+function filterEcho(f: PoolFilter): Record<string, string | number | readonly string[]> {
+  const out: Record<string, string | number | readonly string[]> = {};
+  if (f.levels) out.levels = f.levels;
+  if (f.seasonFrom !== undefined) out.season_from = f.seasonFrom;
+  if (f.seasonTo !== undefined) out.season_to = f.seasonTo;
+  if (f.ageMin !== undefined) out.age_min = f.ageMin;
+  if (f.ageMax !== undefined) out.age_max = f.ageMax;
+  if (f.bats) out.bats = f.bats;
+  if (f.throws) out.throws = f.throws;
+  if (f.positions) out.positions = f.positions;
+  return out;
+}

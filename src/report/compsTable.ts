@@ -1,0 +1,81 @@
+import Table from 'cli-table3';
+import type { DimensionInfo } from '../profiles/Dimension.ts';
+import type { CompsResult } from '../query/types.ts';
+import { formatValue } from './formatValue.ts';
+
+const PLAIN = {
+  top: '', 'top-mid': '', 'top-left': '', 'top-right': '',
+  bottom: '', 'bottom-mid': '', 'bottom-left': '', 'bottom-right': '',
+  left: '', 'left-mid': '', mid: '', 'mid-mid': '',
+  right: '', 'right-mid': '', middle: ' ', 
+};
+
+/** A one-line description of the query target. */
+export function describeTarget(result: CompsResult): string {
+  const q = result.query;
+  const who = q.kind === 'player' ? `${q.name} (${q.player_id}), ${q.season} ${q.level} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
+  const pool = `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} player-seasons in the pool`;
+  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space`;
+}
+
+/**
+ * The comps as a terminal table that fits 100 columns: the ranked list, then the grades of the
+ * target and the top five comps on each dimension (20 to 80, higher is better).
+ */
+export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]): string {
+  const lines: string[] = [describeTarget(result), ''];
+  if (result.comps.length === 0) {
+    lines.push('No comps: the pool is empty after the filters, or no player shares enough of the profile (see --min-coverage).');
+    return lines.join('\n') + '\n';
+  }
+  const list = new Table({
+    head: ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', 'Like', 'Cov', 'Alike / apart'],
+    chars: PLAIN,
+    style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
+    colAligns: ['right', 'left', 'left', 'left', 'left', 'right', 'right', 'right', 'left'],
+    colWidths: [3, 25, 7, 5, 4, 4, 5, 5, 34],
+    wordWrap: true,
+  });
+  const byName = new Map(dims.map((d) => [d.name, d]));
+  const labels = (names: readonly string[]): string => names.map((n) => byName.get(n)?.label ?? n).join(', ') || '-';
+  for (const c of result.comps) {
+    list.push([
+      String(c.rank),
+      `${c.name}\n${c.player_id}`,
+      String(c.season),
+      c.level,
+      c.position,
+      c.age === null ? '-' : String(c.age),
+      c.likeness.toFixed(0),
+      `${Math.round(c.coverage * 100)}%`,
+      `= ${labels(c.alike)}\n\u2260 ${labels(c.apart)}`,
+    ]);
+  }
+  lines.push(list.toString(), '');
+  const top = result.comps.slice(0, 5);
+  const grid = new Table({
+    head: ['Dimension', 'Target', ...top.map((c) => `#${c.rank}`)],
+    chars: PLAIN,
+    style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
+    colAligns: ['left', 'right', ...top.map(() => 'right' as const)],
+    colWidths: [16, 13, ...top.map(() => 13)],
+  });
+  const first = result.comps[0];
+  for (const [j, detail] of (first?.dimensions ?? []).entries()) {
+    const dim = byName.get(detail.name);
+    if (!dim) continue;
+    const cell = (v: number | null, g: number | null): string => (v === null ? '-' : `${formatValue(v, dim)} ${g === null ? '' : `(${g})`}`.trim());
+    if (detail.target === null && top.every((c) => c.dimensions[j]?.comp === null)) continue;
+    grid.push([
+      dim.label,
+      cell(detail.target, detail.target_grade),
+      ...top.map((c) => {
+        const x = c.dimensions[j];
+        return x ? cell(x.comp, x.comp_grade) : '-';
+      }),
+    ]);
+  }
+  lines.push('Values as observed; (grades) 20 to 80 from regressed values, higher is better', grid.toString());
+  lines.push('Like: likeness 0-100 (100 identical, about 37 for unrelated players). Cov: share of the target\u2019s profile compared.');
+  return lines.join('\n') + '\n';
+}
