@@ -1,0 +1,83 @@
+/** Options and result of simulateLeague. */
+import type { Bats, Throws } from '../ingest/types.ts';
+import type { ColumnTable } from './ColumnTable.ts';
+import type { SimTruth } from './SimTruth.ts';
+
+/** First season from which each measured column is recorded (missing before). */
+export interface MeasuredFrom {
+  /** bbe, ev_avg_mph, ev_p90_mph, la_avg_deg, hard_hit_pct, sweet_spot_pct (default lastSeason - 9). */
+  readonly battedBall: number;
+  /** sprint_ft_s (default lastSeason - 9). */
+  readonly sprint: number;
+  /** arm_mph (default lastSeason - 7). */
+  readonly arm: number;
+  /** pop_2b_s and exchange_s (default lastSeason - 7). */
+  readonly catcherTiming: number;
+  /** fb_mph, fb_spin_rpm, whiff_pct (default lastSeason - 9). */
+  readonly pitchTracking: number;
+  /** gb_pct, recorded at every level (default lastSeason - 15). */
+  readonly groundball: number;
+}
+
+export interface SimOptions {
+  readonly seed: number;
+  readonly firstSeason: number;
+  readonly lastSeason: number;
+  /** New players entering each season; overrides targetPlayerSeasons. */
+  readonly playersPerSeasonIntake?: number;
+  /** Approximate number of player-seasons wanted in firstSeason..lastSeason (default 12,000). */
+  readonly targetPlayerSeasons?: number;
+  /** Clubs per level (default: sized so a club carries about 30 to 40 players a season, at least 4). */
+  readonly teamsPerLevel?: number;
+  /** Share of entrants who are pitchers (default 0.4). */
+  readonly pitcherShare?: number;
+  readonly measuredFrom?: Partial<MeasuredFrom>;
+  /** Lowest level with tracking measurements (every column of MeasuredFrom but groundball; default 'AA'). */
+  readonly trackedFromLevel?: string;
+}
+
+export interface ResolvedSimOptions {
+  readonly seed: number;
+  readonly firstSeason: number;
+  readonly lastSeason: number;
+  readonly playersPerSeasonIntake: number;
+  readonly teamsPerLevel: number;
+  readonly pitcherShare: number;
+  readonly measuredFrom: MeasuredFrom;
+  readonly trackedFromLevel: string;
+}
+
+/** The players of a league, as parallel arrays indexed by player (id "p000001" is index 0). */
+export interface SimPlayers {
+  readonly count: number;
+  readonly ids: readonly string[];
+  readonly names: readonly string[];
+  readonly birthDates: readonly string[];
+  readonly bats: readonly Bats[];
+  readonly throws: readonly Throws[];
+  /** 0 hitter, 1 pitcher. */
+  readonly kind: Uint8Array;
+  readonly entrySeason: Int16Array;
+  /** Age on June 30 of the entry season. */
+  readonly entryAge: Int8Array;
+  /** Highest level index reached (over the whole career, including seasons before firstSeason). */
+  readonly highestLevel: Int8Array;
+  /** Seasons with a top-level stint (whole career). */
+  readonly mlbSeasons: Int16Array;
+  /** 1 when the career was still going after lastSeason (censored). */
+  readonly active: Uint8Array;
+}
+
+export interface SimLeague {
+  readonly options: ResolvedSimOptions;
+  /** Level names, low to high. */
+  readonly levels: readonly string[];
+  /** Club names; club i plays at level floor(i / teamsPerLevel). */
+  readonly teams: readonly string[];
+  readonly players: SimPlayers;
+  readonly batting: ColumnTable;
+  readonly fielding: ColumnTable;
+  readonly pitching: ColumnTable;
+  readonly contracts: ColumnTable;
+  readonly truth: SimTruth;
+}

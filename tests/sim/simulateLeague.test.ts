@@ -1,0 +1,171 @@
+import { describe, expect, it } from 'vitest';
+import { cellText } from '../../src/sim/cellText.ts';
+import { simulateLeague } from '../../src/sim/simulateLeague.ts';
+import { LEVEL_MLB, SIM_LEVELS } from '../../src/sim/levelTable.ts';
+import { H_POWER, P_STUFF } from '../../src/sim/talentNames.ts';
+import { SMALL_OPTIONS, smallLeague } from './smallLeague.ts';
+import { UsageError } from '../../src/errors/KindredError.ts';
+
+const league = smallLeague();
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)] ?? Number.NaN;
+}
+
+/** Pearson correlation of two equal-length samples. */
+function correlation(xs: readonly number[], ys: readonly number[]): number {
+  const n = xs.length;
+  const mx = xs.reduce((a, b) => a + b, 0) / n;
+  const my = ys.reduce((a, b) => a + b, 0) / n;
+  let sxy = 0, sxx = 0, syy = 0;
+  for (let i = 0; i < n; i++) {
+    const dx = (xs[i] ?? 0) - mx, dy = (ys[i] ?? 0) - my;
+    sxy += dx * dy; sxx += dx * dx; syy += dy * dy;
+  }
+  return sxy / Math.sqrt(sxx * syy);
+}
+
+/** Age on June 30 of the season (common practice for baseball ages). */
+function ageOnJune30(birth: string, season: number): number {
+  const [y, m] = birth.split('-').map(Number);
+  return season - (y ?? 0) - ((m ?? 0) > 6 ? 1 : 0);
+}
+
+describe('simulateLeague(options)', () => {
+  it('sizes the league near targetPlayerSeasons', () => {
+    expect(league.truth.length).toBeGreaterThan(0.8 * 6000);
+    expect(league.truth.length).toBeLessThan(1.2 * 6000);
+  });
+
+  it('is a pure function of the seed: the same seed gives identical tables', () => {
+    const again = simulateLeague(SMALL_OPTIONS);
+    expect(again.players.names).toEqual(league.players.names);
+    for (const key of ['batting', 'fielding', 'pitching', 'contracts'] as const) {
+      const a = league[key], b = again[key];
+      expect(b.length).toBe(a.length);
+      for (let r = 0; r < a.length; r += 7) for (let c = 0; c < a.width; c++) expect(Object.is(b.get(r, c), a.get(r, c))).toBe(true);
+    }
+  });
+
+  it('gives a different league for a different seed', () => {
+    const other = simulateLeague({ ...SMALL_OPTIONS, seed: SMALL_OPTIONS.seed + 1 });
+    expect(other.players.names.slice(0, 50)).not.toEqual(league.players.names.slice(0, 50));
+    expect(other.batting.length).not.toBe(league.batting.length);
+  });
+
+  it('has one truth row per player-season with a stat row at each level it lists', () => {
+    const seen = new Set<string>();
+    for (const t of [league.batting, league.pitching]) {
+      for (let r = 0; r < t.length; r++) seen.add(`${t.get(r, 0)}|${t.get(r, 1)}|${t.get(r, 2)}`);
+    }
+    let listed = 0;
+    const keys = new Set<string>();
+    for (let r = 0; r < league.truth.length; r++) {
+      const p = league.truth.playerIndex(r), s = league.truth.season(r);
+      const key = `${p}|${s}`;
+      expect(keys.has(key)).toBe(false);
+      keys.add(key);
+      for (let lv = 0; lv < SIM_LEVELS.length; lv++) {
+        if ((league.truth.levelMask(r) & (1 << lv)) === 0) continue;
+        listed++;
+        expect(seen.has(`${p}|${s}|${lv}`)).toBe(true);
+      }
+    }
+    expect(listed).toBe(seen.size);
+  });
+
+  it('finds a player-season by id and season, with talents named per kind', () => {
+    const r = 123;
+    const found = league.truth.find(league.players.ids[league.truth.playerIndex(r)] ?? '', league.truth.season(r));
+    expect(found).toBeDefined();
+    expect(found?.talents.length).toBe(league.truth.talentNames[found?.kind ?? 'hitter'].length);
+    expect(league.truth.find('p999999', 2010)).toBeUndefined();
+  });
+
+  it('puts ages on June 30 in plausible ranges that rise with the level (common practice, from memory)', () => {
+    const byLevel: number[][] = SIM_LEVELS.map(() => []);
+    for (let r = 0; r < league.batting.length; r++) {
+      const p = league.batting.get(r, 0);
+      const age = ageOnJune30(league.players.birthDates[p] ?? '', league.batting.get(r, 1));
+      byLevel[league.batting.get(r, 2)]?.push(age);
+    }
+    for (const ages of byLevel) {
+      expect(Math.min(...ages)).toBeGreaterThanOrEqual(16);
+      expect(Math.max(...ages)).toBeLessThanOrEqual(42);
+    }
+    const medians = byLevel.map(median);
+    expect(medians[0]).toBeGreaterThanOrEqual(18);
+    expect(medians[0]).toBeLessThanOrEqual(21);
+    expect(medians[LEVEL_MLB]).toBeGreaterThanOrEqual(26);
+    expect(medians[LEVEL_MLB]).toBeLessThanOrEqual(31);
+    for (let i = 1; i < medians.length; i++) expect(medians[i] ?? 0).toBeGreaterThanOrEqual(medians[i - 1] ?? 0);
+  });
+
+  it('truth ages agree with birth dates', () => {
+    for (let r = 0; r < league.truth.length; r += 5) {
+      const birth = league.players.birthDates[league.truth.playerIndex(r)] ?? '';
+      expect(league.truth.age(r)).toBe(ageOnJune30(birth, league.truth.season(r)));
+    }
+  });
+
+  it('lets only some entrants reach the top level, the more talented ones', () => {
+    let entrants = 0, reached = 0;
+    for (let i = 0; i < league.players.count; i++) {
+      const entry = league.players.entrySeason[i] ?? 0;
+      if (entry < 2003 || entry > 2012) continue; // careers that started and mostly ended in the window
+      entrants++;
+      if (league.players.highestLevel[i] === LEVEL_MLB) reached++;
+    }
+    expect(reached / entrants).toBeGreaterThan(0.05);
+    expect(reached / entrants).toBeLessThan(0.3);
+    // Players at the top level have higher true talent than players at Rk.
+    const mean = (lv: number, k: number, kind: 'hitter' | 'pitcher'): number => {
+      let s = 0, n = 0;
+      const out = new Float64Array(7);
+      for (let r = 0; r < league.truth.length; r++) {
+        if (league.truth.kind(r) !== kind || league.truth.topLevel(r) !== lv) continue;
+        s += league.truth.talentsInto(r, out)[k] ?? 0;
+        n++;
+      }
+      return s / n;
+    };
+    expect(mean(LEVEL_MLB, H_POWER, 'hitter')).toBeGreaterThan(mean(0, H_POWER, 'hitter') + 0.5);
+    expect(mean(LEVEL_MLB, P_STUFF, 'pitcher')).toBeGreaterThan(mean(0, P_STUFF, 'pitcher') + 0.5);
+  });
+
+  it('leaves some careers in progress at the last season (censored)', () => {
+    const active = league.players.active.reduce((a, b) => a + b, 0);
+    expect(active).toBeGreaterThan(0);
+    expect(active).toBeLessThan(league.players.count);
+  });
+
+  it('ties ISO and exit velocity to true power across top-level player-seasons (model invariant)', () => {
+    const b = league.batting;
+    const iso: number[] = [], ev: number[] = [], powerIso: number[] = [], powerEv: number[] = [];
+    const out = new Float64Array(7);
+    for (let r = 0; r < b.length; r++) {
+      if (b.get(r, b.columnIndex('PA')) < 300) continue;
+      const t = league.truth.find(cellText(league, b, r, 0), b.get(r, 1));
+      if (t === undefined) continue;
+      const ab = b.get(r, b.columnIndex('AB'));
+      const xb = b.get(r, b.columnIndex('2B')) + 2 * b.get(r, b.columnIndex('3B')) + 3 * b.get(r, b.columnIndex('HR'));
+      out.set(t.talents);
+      iso.push(xb / ab);
+      powerIso.push(out[H_POWER] ?? 0);
+      const e = b.get(r, b.columnIndex('ev_avg_mph'));
+      if (!Number.isNaN(e)) {
+        ev.push(e);
+        powerEv.push(out[H_POWER] ?? 0);
+      }
+    }
+    expect(correlation(powerIso, iso)).toBeGreaterThan(0.5);
+    expect(correlation(powerEv, ev)).toBeGreaterThan(0.7);
+  });
+
+  it('refuses bad options with a UsageError', () => {
+    expect(() => simulateLeague({ seed: 1, firstSeason: 2010, lastSeason: 2005 })).toThrow(UsageError);
+    expect(() => simulateLeague({ seed: 1.5, firstSeason: 2003, lastSeason: 2005 })).toThrow(UsageError);
+    expect(() => simulateLeague({ seed: 1, firstSeason: 2003, lastSeason: 2005, trackedFromLevel: 'X' })).toThrow(UsageError);
+  });
+});
