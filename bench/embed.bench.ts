@@ -9,6 +9,7 @@ import { fitPcaEmbedding } from '../src/embed/fitPcaEmbedding.ts';
 import { trainAutoencoder } from '../src/embed/trainAutoencoder.ts';
 import { DEFAULT_TRAIN_OPTIONS } from '../src/embed/TrainOptions.ts';
 import { evaluateReconstruction } from '../src/embed/evaluateReconstruction.ts';
+import { attributeDistance } from '../src/embed/attributeDistance.ts';
 
 function structuredData(n: number, d: number, factors: number, seed: number): EmbedData {
   const rng = createRng(seed);
@@ -46,3 +47,17 @@ console.log(`val MSE ${result.history.val[result.bestEpoch - 1]?.toFixed(4)}, tr
 const t0 = performance.now();
 const pca = fitPcaEmbedding(data, o.latent);
 console.log(`PCA k=${o.latent}: fit ${((performance.now() - t0) / 1000).toFixed(2)} s, reconstruction MSE (all rows) ${pca.reconstructionError(data).toFixed(4)}; autoencoder (all rows) ${evaluateReconstruction(result.model, data).toFixed(4)}`);
+
+// Attribution cost per comp with the trained model (d = 24: sampled; 12 dimensions in play: exact).
+const encode = (v: Float64Array): Float64Array => result.model.encode(v);
+const target = data.x.slice(0, 24);
+const comp = data.x.slice(24 * 100, 24 * 101);
+let t = performance.now();
+const sampled = attributeDistance(encode, target, comp, { samples: 1000, seed: 1 });
+const sampledMs = performance.now() - t;
+const maxSe = Math.max(...sampled.standardError);
+const half = comp.slice();
+for (let j = 12; j < 24; j++) half[j] = target[j] ?? NaN;
+t = performance.now();
+const exact = attributeDistance(encode, target, half);
+console.log(`attribution: ${sampled.players} dims sampled (1000 permutations) ${sampledMs.toFixed(0)} ms, max standard error ${maxSe.toFixed(4)} of total ${sampled.total.toFixed(3)}; ${exact.players} dims exact ${(performance.now() - t).toFixed(0)} ms`);

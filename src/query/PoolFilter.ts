@@ -10,4 +10,9 @@ export interface PoolFilter {
   readonly bats?: readonly Bats[];
   readonly throws?: readonly Throws[];
   readonly positions?: readonly Position[];
+  /**
+   * Any further restriction, row by row (earlier seasons only, a known salary under a limit...).
+   * Receives the row index in the target's position group. Not echoed in JSON: callers describe it.
+   */
+  readonly include?: (row: number) => boolean;
 }

@@ -34,6 +34,7 @@ export function eligibleRows(
       if (batsSet && !(pl?.bats && batsSet.has(pl.bats))) continue;
       if (throwsSet && !(pl?.throws && throwsSet.has(pl.throws))) continue;
     }
+    if (filter.include && !filter.include(i)) continue;
     mask[i] = 1;
     count++;
   }

@@ -61,6 +61,15 @@ export function effectiveWeights(g: StoredGroup, options: CompsOptions): Float64
  * group's dimensions, when the pool is small, or on `exact`.
  */
 export function findComps(store: ProfileStore, target: Target, options: CompsOptions): CompsResult {
+  return findCompsWithRows(store, target, options).result;
+}
+
+/** As findComps, also giving each comp's row in the group (same order as result.comps). */
+export function findCompsWithRows(
+  store: ProfileStore,
+  target: Target,
+  options: CompsOptions,
+): { result: CompsResult; rows: number[] } {
   const g = store.groups.get(target.group);
   if (!g) throw new QueryError('kindred.query.emptyPool', `the store has no ${target.group} profiles`, { group: target.group });
   const weights = effectiveWeights(g, options);
@@ -127,7 +136,7 @@ export function findComps(store: ProfileStore, target: Target, options: CompsOpt
     };
   });
 
-  return {
+  const result: CompsResult = {
     query: echoTarget(store, g, target, options, useIndex),
     pool: {
       group_size: g.n,
@@ -137,6 +146,7 @@ export function findComps(store: ProfileStore, target: Target, options: CompsOpt
     },
     comps,
   };
+  return { result, rows: ranked.slice(0, options.k).map((s) => s.row) };
 }
 
 function onePerPlayer(sorted: readonly Scored[], g: StoredGroup): Scored[] {

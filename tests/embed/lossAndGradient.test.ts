@@ -29,7 +29,7 @@ function loss(model: Autoencoder): number {
 }
 
 describe('lossAndGradient', () => {
-  for (const [activation, hidden] of [['tanh', [3]], ['tanh', [3, 5]], ['identity', [3]]] as const) {
+  for (const [activation, hidden] of [['tanh', [3]], ['tanh', [3, 5]], ['relu', [3, 5]], ['identity', [3]]] as const) {
     it(`back-propagated gradients match central finite differences (${activation}, hidden ${hidden.join('-')}, with mask, L2 and L1)`, () => {
       // Source: gradient checking by central differences (f(p + h) - f(p - h)) / 2h, error O(h^2)
       // (common practice; e.g. Goodfellow, Bengio and Courville 2016, Deep Learning, section 11.5).
