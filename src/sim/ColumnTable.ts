@@ -69,9 +69,9 @@ export class ColumnTable {
     return this.data[row * this.width + col] ?? Number.NaN;
   }
 
-  /** Drops spare capacity once the table is complete. */
+  /** Drops spare capacity (when more than a tenth is unused) once the table is complete. */
   trim(): void {
-    if (this.data.length > this.rows * this.width) this.data = this.data.slice(0, this.rows * this.width);
+    if (this.data.length > 1.1 * this.rows * this.width + this.width) this.data = this.data.slice(0, this.rows * this.width);
   }
 
   /** Bytes held by the table. */

@@ -66,7 +66,7 @@ export class SimTruth {
 
   /** Fixes player ids and builds the per-player index (internal: called once at the end). */
   seal(ids: readonly string[]): void {
-    this.data = this.data.slice(0, this.rows * this.width);
+    if (this.data.length > 1.1 * this.rows * this.width + this.width) this.data = this.data.slice(0, this.rows * this.width);
     this.ids = ids;
     this.firstRow = new Int32Array(ids.length).fill(-1);
     this.rowCount = new Int32Array(ids.length);

@@ -27,7 +27,7 @@ import type { SeededRandom } from './random.ts';
 import { H_CONTACT, H_EYE, H_POWER, H_SPEED } from './talentNames.ts';
 
 /** Mean talent of a top-level regular (outcome rates are centred there). */
-export const MLB_CENTRE = { contact: 0.6, power: 0.7, eye: 0.65, speed: 0.1 } as const;
+export const MLB_CENTRE = { contact: 0.6, power: 0.8, eye: 0.65, speed: 0.1 } as const;
 
 const C = (name: string): number => columnAt(BATTING_COLUMNS, name);
 const iG = C('G'), iPA = C('PA'), iAB = C('AB'), iH = C('H'), i2B = C('2B'), i3B = C('3B'), iHR = C('HR');

@@ -4,7 +4,7 @@
  * to read as names without being those of any real public figure.
  *
  * @example
- * inventName(new SeededRandom(1)); // => a "First Last" string such as "Keldo Varnick"
+ * inventName(new SeededRandom(1)); // => a "First Last" string such as "Keldo Varnovar"
  */
 import type { SeededRandom } from './random.ts';
 
@@ -14,12 +14,13 @@ const FIRST_HEADS = [
 ] as const;
 const FIRST_TAILS = ['an', 'do', 'en', 'ric', 'io', 'vin', 'las', 'ton', 'ey', 'im', 'o', 'ar', 'is', 'ek'] as const;
 const LAST_HEADS = [
-  'Ash', 'Brim', 'Cald', 'Dorn', 'Elk', 'Fenn', 'Gald', 'Hask', 'Ingle', 'Jass', 'Kerr', 'Lund', 'Morr',
-  'Nock', 'Orve', 'Pell', 'Quarr', 'Rusk', 'Stave', 'Tarr', 'Umber', 'Varn', 'Wick', 'Yarr', 'Zell',
-  'Bell', 'Crane', 'Dell', 'Fald', 'Hollo',
+  'Ash', 'Brim', 'Cald', 'Dorn', 'Elk', 'Fenn', 'Gald', 'Hask', 'Ingl', 'Jas', 'Kerr', 'Lund', 'Morr',
+  'Nock', 'Orv', 'Pell', 'Quarr', 'Rusk', 'Stav', 'Tarr', 'Umber', 'Varn', 'Wick', 'Yarr', 'Zell',
+  'Bell', 'Cran', 'Dell', 'Fald', 'Holl',
 ] as const;
+// Tails chosen so the surnames read as invented rather than as common real surnames.
 const LAST_TAILS = [
-  'sett', 'ick', 'ley', 'berg', 'more', 'ham', 'ridge', 'ow', 'ens', 'ard', 'ski', 'ano', 'ez', 'wald', 'ton', 'by',
+  'sett', 'vane', 'oll', 'ast', 'ovar', 'ume', 'adine', 'eck', 'isk', 'orne', 'ivet', 'indel', 'osk', 'ane', 'eski', 'ach',
 ] as const;
 
 function pick(rng: SeededRandom, list: readonly string[]): string {

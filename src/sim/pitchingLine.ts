@@ -30,6 +30,7 @@ const iG = C('G'), iGS = C('GS'), iIP = C('IP'), iBF = C('BF'), iH = C('H'), iHR
 const iHBP = C('HBP'), iSO = C('SO'), iER = C('ER'), iFB = C('fb_mph'), iSPIN = C('fb_spin_rpm');
 const iWHIFF = C('whiff_pct'), iGB = C('gb_pct');
 
+const PITCHER_SHIFT_SCALE = 1.5;
 const L_SO = logit(0.22), L_BB = logit(0.08), L_HR = logit(0.03), L_BABIP = logit(0.292);
 const L_WHIFF = logit(0.25), L_GB = logit(0.43);
 
@@ -45,7 +46,8 @@ export function pitchingLine(
   groundball: boolean,
   row: Float64Array,
 ): void {
-  const shift = LEVEL_SHIFT[level] ?? 0;
+  // Pitchers climb the ladder further below the top level's talent than hitters, so their shift is larger.
+  const shift = PITCHER_SHIFT_SCALE * (LEVEL_SHIFT[level] ?? 0);
   const stuff = (t[P_STUFF] ?? 0) - MLB_PITCH_CENTRE.stuff;
   const control = (t[P_CONTROL] ?? 0) - MLB_PITCH_CENTRE.control;
   const gb = (t[P_GROUNDBALL] ?? 0) - MLB_PITCH_CENTRE.groundball;

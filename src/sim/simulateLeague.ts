@@ -81,11 +81,20 @@ export function resolveSimOptions(options: SimOptions): ResolvedSimOptions {
 
 /** Mean number of seasons in a career, from a pilot sample drawn with a seed-derived stream. */
 function meanCareerLength(seed: number, pitcherShare: number): number {
+  const key = `${seed}|${pitcherShare}`;
+  const known = pilotCache.get(key);
+  if (known !== undefined) return known;
   const rng = new SeededRandom((seed ^ 0x5eed5eed) >>> 0);
   let total = 0;
   for (let i = 0; i < PILOT_CAREERS; i++) total += simulateCareer(rng, 0, 60, 8, pitcherShare).seasons.length;
-  return total / PILOT_CAREERS;
+  const mean = total / PILOT_CAREERS;
+  if (pilotCache.size > 100) pilotCache.clear();
+  pilotCache.set(key, mean);
+  return mean;
 }
+
+/** Pilot results by seed and pitcher share (pure, so safe to reuse). */
+const pilotCache = new Map<string, number>();
 
 export function simulateLeague(options: SimOptions): SimLeague {
   const o = resolveSimOptions(options);
@@ -93,12 +102,14 @@ export function simulateLeague(options: SimOptions): SimLeague {
   const levels: readonly string[] = SIM_LEVELS;
   const teams = inventClubs(rng, levels.length, o.teamsPerLevel);
   const seasons = o.lastSeason - o.firstSeason + 1;
-  const expectedSeasons = o.playersPerSeasonIntake * seasons * 5;
-  const batting = new ColumnTable(BATTING_COLUMNS, Math.round(expectedSeasons * 0.7));
-  const fielding = new ColumnTable(FIELDING_COLUMNS, Math.round(expectedSeasons * 0.75));
-  const pitching = new ColumnTable(PITCHING_COLUMNS, Math.round(expectedSeasons * 0.5));
-  const contracts = new ColumnTable(CONTRACT_COLUMNS, Math.round(expectedSeasons * 0.1));
-  const truth = new SimTruth(levels, expectedSeasons);
+  // Capacities from the expected size (steady state), so tables rarely grow.
+  const expected = Math.ceil(1.04 * o.playersPerSeasonIntake * seasons * meanCareerLength(o.seed, o.pitcherShare));
+  const hitterRows = Math.ceil(expected * (1 - o.pitcherShare) * 1.1);
+  const batting = new ColumnTable(BATTING_COLUMNS, hitterRows);
+  const fielding = new ColumnTable(FIELDING_COLUMNS, Math.ceil(hitterRows * 1.2));
+  const pitching = new ColumnTable(PITCHING_COLUMNS, Math.ceil(expected * o.pitcherShare * 1.12));
+  const contracts = new ColumnTable(CONTRACT_COLUMNS, Math.ceil(expected * 0.18));
+  const truth = new SimTruth(levels, expected);
   const tracked = levels.indexOf(o.trackedFromLevel);
 
   const names: string[] = [];
