@@ -44,19 +44,6 @@ export class WeightedMean {
   }
 }
 
-/** Adds a stint's value to a lazily created mean. */
-export function addTo(
-  mean: WeightedMean | undefined,
-  value: number | undefined,
-  preferred: number | undefined,
-  fallback: number,
-): WeightedMean | undefined {
-  if (value === undefined) return mean;
-  const m = mean ?? new WeightedMean();
-  m.add(value, preferred, fallback);
-  return m;
-}
-
 /** Sum of an optional count over stints: unknown as soon as one stint lacks it. */
 export function addCount(total: number | undefined, value: number | undefined): number | undefined {
   return total === undefined || value === undefined ? undefined : total + value;

@@ -1,48 +1,22 @@
-import { KeyLines, type RosterLookups } from './RosterLookups.ts';
-import { WeightedMean, addCount, addTo } from './WeightedMean.ts';
+import type { RosterLookups } from './RosterLookups.ts';
+import { StintGroups } from './StintGroups.ts';
+import { combineBattingStints } from './combineBattingStints.ts';
 import { readTable, type TableOptions, type TableRead } from './readTable.ts';
 import type { BattingSeason } from './types.ts';
 
-interface BattingStints {
-  readonly playerId: string;
-  readonly season: number;
-  readonly level: string;
-  readonly teams: string[];
-  G: number | undefined;
-  PA: number;
-  AB: number;
-  H: number;
-  doubles: number;
-  triples: number;
-  HR: number;
-  BB: number;
-  HBP: number;
-  SF: number;
-  SO: number;
-  IBB: number | undefined;
-  SB: number | undefined;
-  CS: number | undefined;
-  bbe: number | undefined;
-  evAvg: WeightedMean | undefined;
-  evP90: WeightedMean | undefined;
-  laAvg: WeightedMean | undefined;
-  hardHit: WeightedMean | undefined;
-  sweetSpot: WeightedMean | undefined;
-  sprint: WeightedMean | undefined;
-}
+type Writable<T> = { -readonly [K in keyof T]: T[K] };
 
 /**
- * Reads batting.csv (one row per player, season, level and team) and combines
- * the stints of a player, season and level: counts summed (an optional count
- * is unknown when a stint lacks it), batted-ball averages weighted by bbe
- * (by PA when a stint with the value lacks bbe), sprint speed by PA.
+ * Reads batting.csv (one row per player, season, level and team), checks
+ * every row and combines the stints of a player, season and level
+ * (see combineBattingStints).
  */
 export async function readBatting(
   options: TableOptions,
   lookups: RosterLookups,
 ): Promise<TableRead & { readonly batting: BattingSeason[] }> {
-  const seasons = new Map<string, BattingStints>();
-  const keys = new KeyLines('player, season, level and team');
+  const groups = new StintGroups<BattingSeason>('player, season, level and team');
+  const teamOf = (s: BattingSeason): string => s.teams[0] ?? '';
   const read = await readTable(options, 'batting.csv', (ctx) => {
     const h = ctx.header;
     const c = {
@@ -77,12 +51,12 @@ export async function readBatting(
       const SB = row.countOpt(c.SB);
       const CS = row.countOpt(c.CS);
       const bbe = row.countOpt(c.bbe);
-      const evAvg = row.measured(c.evAvg);
-      const evP90 = row.measured(c.evP90);
-      const laAvg = row.measured(c.laAvg);
-      const hardHit = row.percent(c.hardHit);
-      const sweetSpot = row.percent(c.sweetSpot);
-      const sprint = row.measured(c.sprint);
+      const evAvgMph = row.measured(c.evAvg);
+      const evP90Mph = row.measured(c.evP90);
+      const laAvgDeg = row.measured(c.laAvg);
+      const hardHitPct = row.percent(c.hardHit);
+      const sweetSpotPct = row.percent(c.sweetSpot);
+      const sprintFtS = row.measured(c.sprint);
 
       row.atMost(c.H, 'H', H, 'AB', AB);
       row.atMost(c.H, '2B + 3B + HR', doubles + triples + HR, 'H', H);
@@ -90,92 +64,35 @@ export async function readBatting(
       row.atMost(c.SO, 'SO', SO, 'PA', PA);
       row.atMost(c.IBB, 'IBB', IBB, 'BB', BB);
       row.atMost(c.bbe, 'bbe', bbe, 'PA', PA);
-      row.atMost(c.evP90, 'ev_avg_mph', evAvg, 'ev_p90_mph', evP90);
+      row.atMost(c.evP90, 'ev_avg_mph', evAvgMph, 'ev_p90_mph', evP90Mph);
+      hardHitWatch.see(hardHitPct, line);
+      sweetSpotWatch.see(sweetSpotPct, line);
 
-      if (playerId !== '' && !Number.isNaN(season) && level !== '') {
-        keys.check(row, `${playerId}\u0000${season}\u0000${level}\u0000${team ?? ''}`,
-          `${playerId} ${season} ${level} ${team ?? '(no team)'}`);
-      }
-      hardHitWatch.see(hardHit, line);
-      sweetSpotWatch.see(sweetSpot, line);
-      if (!ctx.settle()) return;
-
+      const keyed = playerId !== '' && !Number.isNaN(season) && level !== '';
       const key = `${playerId}\u0000${season}\u0000${level}`;
-      const s = seasons.get(key);
-      if (s === undefined) {
-        seasons.set(key, {
-          playerId, season, level, teams: team === undefined ? [] : [team],
-          G, PA, AB, H, doubles, triples, HR, BB, HBP, SF, SO, IBB, SB, CS, bbe,
-          evAvg: addTo(undefined, evAvg, bbe, PA),
-          evP90: addTo(undefined, evP90, bbe, PA),
-          laAvg: addTo(undefined, laAvg, bbe, PA),
-          hardHit: addTo(undefined, hardHit, bbe, PA),
-          sweetSpot: addTo(undefined, sweetSpot, bbe, PA),
-          sprint: addTo(undefined, sprint, PA, PA),
-        });
+      const sub = team ?? '';
+      if (keyed) groups.checkDuplicate(row, key, sub, `${playerId} ${season} ${level} ${team ?? '(no team)'}`, teamOf);
+      if (!ctx.settle()) {
+        if (keyed) groups.rejectedRow(key, sub, line);
         return;
       }
-      if (team !== undefined && !s.teams.includes(team)) s.teams.push(team);
-      s.G = addCount(s.G, G);
-      s.PA += PA;
-      s.AB += AB;
-      s.H += H;
-      s.doubles += doubles;
-      s.triples += triples;
-      s.HR += HR;
-      s.BB += BB;
-      s.HBP += HBP;
-      s.SF += SF;
-      s.SO += SO;
-      s.IBB = addCount(s.IBB, IBB);
-      s.SB = addCount(s.SB, SB);
-      s.CS = addCount(s.CS, CS);
-      s.bbe = addCount(s.bbe, bbe);
-      s.evAvg = addTo(s.evAvg, evAvg, bbe, PA);
-      s.evP90 = addTo(s.evP90, evP90, bbe, PA);
-      s.laAvg = addTo(s.laAvg, laAvg, bbe, PA);
-      s.hardHit = addTo(s.hardHit, hardHit, bbe, PA);
-      s.sweetSpot = addTo(s.sweetSpot, sweetSpot, bbe, PA);
-      s.sprint = addTo(s.sprint, sprint, PA, PA);
+      const stint: Writable<BattingSeason> = {
+        playerId, season, level, teams: team === undefined ? [] : [team],
+        PA, AB, H, doubles, triples, HR, BB, HBP, SF, SO,
+      };
+      if (G !== undefined) stint.G = G;
+      if (IBB !== undefined) stint.IBB = IBB;
+      if (SB !== undefined) stint.SB = SB;
+      if (CS !== undefined) stint.CS = CS;
+      if (bbe !== undefined) stint.bbe = bbe;
+      if (evAvgMph !== undefined) stint.evAvgMph = evAvgMph;
+      if (evP90Mph !== undefined) stint.evP90Mph = evP90Mph;
+      if (laAvgDeg !== undefined) stint.laAvgDeg = laAvgDeg;
+      if (hardHitPct !== undefined) stint.hardHitPct = hardHitPct;
+      if (sweetSpotPct !== undefined) stint.sweetSpotPct = sweetSpotPct;
+      if (sprintFtS !== undefined) stint.sprintFtS = sprintFtS;
+      groups.add(key, stint, line);
     };
   });
-  const batting: BattingSeason[] = [];
-  for (const s of seasons.values()) batting.push(toBattingSeason(s));
-  return { ...read, batting };
-}
-
-function toBattingSeason(s: BattingStints): BattingSeason {
-  const evAvgMph = s.evAvg?.value();
-  const evP90Mph = s.evP90?.value();
-  const laAvgDeg = s.laAvg?.value();
-  const hardHitPct = s.hardHit?.value();
-  const sweetSpotPct = s.sweetSpot?.value();
-  const sprintFtS = s.sprint?.value();
-  return {
-    playerId: s.playerId,
-    season: s.season,
-    level: s.level,
-    teams: s.teams,
-    ...(s.G === undefined ? {} : { G: s.G }),
-    PA: s.PA,
-    AB: s.AB,
-    H: s.H,
-    doubles: s.doubles,
-    triples: s.triples,
-    HR: s.HR,
-    BB: s.BB,
-    HBP: s.HBP,
-    SF: s.SF,
-    SO: s.SO,
-    ...(s.IBB === undefined ? {} : { IBB: s.IBB }),
-    ...(s.SB === undefined ? {} : { SB: s.SB }),
-    ...(s.CS === undefined ? {} : { CS: s.CS }),
-    ...(s.bbe === undefined ? {} : { bbe: s.bbe }),
-    ...(evAvgMph === undefined ? {} : { evAvgMph }),
-    ...(evP90Mph === undefined ? {} : { evP90Mph }),
-    ...(laAvgDeg === undefined ? {} : { laAvgDeg }),
-    ...(hardHitPct === undefined ? {} : { hardHitPct }),
-    ...(sweetSpotPct === undefined ? {} : { sweetSpotPct }),
-    ...(sprintFtS === undefined ? {} : { sprintFtS }),
-  };
+  return { ...read, batting: groups.collect((s) => s, combineBattingStints) };
 }

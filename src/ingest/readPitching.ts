@@ -1,41 +1,22 @@
-import { KeyLines, type RosterLookups } from './RosterLookups.ts';
-import { WeightedMean, addTo } from './WeightedMean.ts';
+import type { RosterLookups } from './RosterLookups.ts';
+import { StintGroups } from './StintGroups.ts';
+import { combinePitchingStints } from './combinePitchingStints.ts';
 import { readTable, type TableOptions, type TableRead } from './readTable.ts';
 import type { PitchingSeason } from './types.ts';
 
-interface PitchingStints {
-  readonly playerId: string;
-  readonly season: number;
-  readonly level: string;
-  readonly teams: string[];
-  G: number;
-  GS: number;
-  outs: number;
-  BF: number;
-  H: number;
-  HR: number;
-  BB: number;
-  HBP: number;
-  SO: number;
-  ER: number;
-  fb: WeightedMean | undefined;
-  spin: WeightedMean | undefined;
-  whiff: WeightedMean | undefined;
-  gb: WeightedMean | undefined;
-}
+type Writable<T> = { -readonly [K in keyof T]: T[K] };
 
 /**
- * Reads pitching.csv (one row per player, season, level and team) and
- * combines the stints of a player, season and level: counts and innings
- * summed, fb_mph, fb_spin_rpm and whiff_pct weighted by BF, gb_pct by balls
- * in play (BF - SO - BB - HBP).
+ * Reads pitching.csv (one row per player, season, level and team), checks
+ * every row and combines the stints of a player, season and level
+ * (see combinePitchingStints).
  */
 export async function readPitching(
   options: TableOptions,
   lookups: RosterLookups,
 ): Promise<TableRead & { readonly pitching: PitchingSeason[] }> {
-  const seasons = new Map<string, PitchingStints>();
-  const keys = new KeyLines('player, season, level and team');
+  const groups = new StintGroups<PitchingSeason>('player, season, level and team');
+  const teamOf = (s: PitchingSeason): string => s.teams[0] ?? '';
   const read = await readTable(options, 'pitching.csv', (ctx) => {
     const h = ctx.header;
     const c = {
@@ -63,83 +44,36 @@ export async function readPitching(
       const HBP = row.count(c.HBP);
       const SO = row.count(c.SO);
       const ER = row.count(c.ER);
-      const fb = row.measured(c.fb);
-      const spin = row.measured(c.spin);
-      const whiff = row.percent(c.whiff);
-      const gb = row.percent(c.gb);
+      const fbMph = row.measured(c.fb);
+      const fbSpinRpm = row.measured(c.spin);
+      const whiffPct = row.percent(c.whiff);
+      const gbPct = row.percent(c.gb);
 
       row.atMost(c.GS, 'GS', GS, 'G', G);
       row.atMost(c.H, 'H', H, 'BF', BF);
       row.atMost(c.HR, 'HR', HR, 'H', H);
       row.atMost(c.BF, 'SO + BB + HBP', SO + BB + HBP, 'BF', BF);
+      whiffWatch.see(whiffPct, line);
+      gbWatch.see(gbPct, line);
 
-      if (playerId !== '' && !Number.isNaN(season) && level !== '') {
-        keys.check(row, `${playerId}\u0000${season}\u0000${level}\u0000${team ?? ''}`,
-          `${playerId} ${season} ${level} ${team ?? '(no team)'}`);
-      }
-      whiffWatch.see(whiff, line);
-      gbWatch.see(gb, line);
-      if (!ctx.settle()) return;
-
-      const inPlay = BF - SO - BB - HBP;
+      const keyed = playerId !== '' && !Number.isNaN(season) && level !== '';
       const key = `${playerId}\u0000${season}\u0000${level}`;
-      const s = seasons.get(key);
-      if (s === undefined) {
-        seasons.set(key, {
-          playerId, season, level, teams: team === undefined ? [] : [team],
-          G, GS, outs, BF, H, HR, BB, HBP, SO, ER,
-          fb: addTo(undefined, fb, BF, BF),
-          spin: addTo(undefined, spin, BF, BF),
-          whiff: addTo(undefined, whiff, BF, BF),
-          gb: addTo(undefined, gb, inPlay, inPlay),
-        });
+      const sub = team ?? '';
+      if (keyed) groups.checkDuplicate(row, key, sub, `${playerId} ${season} ${level} ${team ?? '(no team)'}`, teamOf);
+      if (!ctx.settle()) {
+        if (keyed) groups.rejectedRow(key, sub, line);
         return;
       }
-      if (team !== undefined && !s.teams.includes(team)) s.teams.push(team);
-      s.G += G;
-      s.GS += GS;
-      s.outs += outs;
-      s.BF += BF;
-      s.H += H;
-      s.HR += HR;
-      s.BB += BB;
-      s.HBP += HBP;
-      s.SO += SO;
-      s.ER += ER;
-      s.fb = addTo(s.fb, fb, BF, BF);
-      s.spin = addTo(s.spin, spin, BF, BF);
-      s.whiff = addTo(s.whiff, whiff, BF, BF);
-      s.gb = addTo(s.gb, gb, inPlay, inPlay);
+      const stint: Writable<PitchingSeason> = {
+        playerId, season, level, teams: team === undefined ? [] : [team],
+        G, GS, outs, BF, H, HR, BB, HBP, SO, ER,
+      };
+      if (fbMph !== undefined) stint.fbMph = fbMph;
+      if (fbSpinRpm !== undefined) stint.fbSpinRpm = fbSpinRpm;
+      if (whiffPct !== undefined) stint.whiffPct = whiffPct;
+      if (gbPct !== undefined) stint.gbPct = gbPct;
+      groups.add(key, stint, line);
     };
   });
-  const pitching: PitchingSeason[] = [];
-  for (const s of seasons.values()) pitching.push(toPitchingSeason(s));
-  return { ...read, pitching };
-}
-
-function toPitchingSeason(s: PitchingStints): PitchingSeason {
-  const fbMph = s.fb?.value();
-  const fbSpinRpm = s.spin?.value();
-  const whiffPct = s.whiff?.value();
-  const gbPct = s.gb?.value();
-  return {
-    playerId: s.playerId,
-    season: s.season,
-    level: s.level,
-    teams: s.teams,
-    G: s.G,
-    GS: s.GS,
-    outs: s.outs,
-    BF: s.BF,
-    H: s.H,
-    HR: s.HR,
-    BB: s.BB,
-    HBP: s.HBP,
-    SO: s.SO,
-    ER: s.ER,
-    ...(fbMph === undefined ? {} : { fbMph }),
-    ...(fbSpinRpm === undefined ? {} : { fbSpinRpm }),
-    ...(whiffPct === undefined ? {} : { whiffPct }),
-    ...(gbPct === undefined ? {} : { gbPct }),
-  };
+  return { ...read, pitching: groups.collect((s) => s, combinePitchingStints) };
 }

@@ -1,0 +1,66 @@
+import type { RowReader } from './RowReader.ts';
+
+/**
+ * The stints of each player-season key, in file order, with the line of each.
+ * Finds same-key duplicates (same season key and the same `sub` key, e.g.
+ * the team) and names both lines, also when the earlier row was rejected.
+ * Most keys have one stint, so a group holds its first stint inline.
+ */
+export class StintGroups<S> {
+  private readonly groups = new Map<string, Group<S>>();
+  private readonly rejected = new Map<string, number>();
+
+  constructor(private readonly describe: string) {}
+
+  /** Reports a duplicate of `key` + `sub` on the row (nothing else is recorded). */
+  checkDuplicate(row: RowReader, key: string, sub: string, shown: string, subOf: (s: S) => string): void {
+    const group = this.groups.get(key);
+    let first: number | undefined;
+    if (group !== undefined) {
+      if (subOf(group.first) === sub) first = group.firstLine;
+      else if (group.more !== undefined) {
+        const i = group.more.findIndex((s) => subOf(s) === sub);
+        if (i >= 0) first = group.moreLines?.[i];
+      }
+    }
+    first ??= this.rejected.get(`${key}\u0000${sub}`);
+    if (first === undefined) return;
+    row.report('kindred.input.duplicateKey', undefined, shown,
+      `one row per ${this.describe} (line ${first} has the same key; this is line ${row.line})`);
+  }
+
+  /** Remembers a rejected row's key so a later row with the same key is still reported. */
+  rejectedRow(key: string, sub: string, line: number): void {
+    const full = `${key}\u0000${sub}`;
+    if (!this.rejected.has(full)) this.rejected.set(full, line);
+  }
+
+  add(key: string, stint: S, line: number): void {
+    const group = this.groups.get(key);
+    if (group === undefined) {
+      this.groups.set(key, { first: stint, firstLine: line, more: undefined, moreLines: undefined });
+    } else if (group.more === undefined || group.moreLines === undefined) {
+      group.more = [stint];
+      group.moreLines = [line];
+    } else {
+      group.more.push(stint);
+      group.moreLines.push(line);
+    }
+  }
+
+  /** One value per key: the stint itself when alone, else `combine` of all stints in file order. */
+  collect<T>(single: (s: S) => T, combine: (stints: readonly S[]) => T): T[] {
+    const out: T[] = [];
+    for (const group of this.groups.values()) {
+      out.push(group.more === undefined ? single(group.first) : combine([group.first, ...group.more]));
+    }
+    return out;
+  }
+}
+
+interface Group<S> {
+  readonly first: S;
+  readonly firstLine: number;
+  more: S[] | undefined;
+  moreLines: number[] | undefined;
+}
