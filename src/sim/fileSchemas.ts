@@ -2,6 +2,7 @@
  * The columns of each written file, in the canonical roster format, with
  * the form each number takes in the text.
  */
+import { KindredError } from '../errors/KindredError.ts';
 import type { ColumnSpec } from './ColumnTable.ts';
 
 function spec(text: string): ColumnSpec[] {
@@ -17,7 +18,7 @@ function parseFormat(text: string): ColumnSpec['format'] {
     case 'fixed1': case 'fixed2': case 'thirds': case 'thousandsUsd':
       return text;
     default:
-      throw new Error(`unknown column format ${JSON.stringify(text)}`);
+      throw new KindredError('kindred.usage.badOption', `unknown column format ${JSON.stringify(text)}: expected player, level, team, pos, int, fixed1, fixed2, thirds or thousandsUsd`);
   }
 }
 
@@ -41,6 +42,6 @@ export const CONTRACT_COLUMNS = spec('player_id:player, season, salary_usd:thous
 /** Position of a named column; throws on a name the list lacks (a programming error). */
 export function columnAt(columns: readonly ColumnSpec[], name: string): number {
   const i = columns.findIndex((c) => c.name === name);
-  if (i < 0) throw new Error(`no column ${JSON.stringify(name)}`);
+  if (i < 0) throw new KindredError('kindred.usage.badOption', `no column ${JSON.stringify(name)}: expected one of ${columns.map((c) => c.name).join(', ')}`);
   return i;
 }

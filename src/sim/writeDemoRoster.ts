@@ -1,14 +1,12 @@
 /**
- * Regenerates the bundled demo roster (demo-roster/ by default) from a fixed
- * seed: `node --import tsx src/sim/writeDemoRoster.ts [dir]`.
+ * Regenerates the bundled demo roster (demo-roster/ by default) from its
+ * fixed seed: `node --import tsx src/sim/writeDemoRoster.ts [dir]`.
  */
 import { fileURLToPath } from 'node:url';
 import { dirname, join, resolve } from 'node:path';
+import { DEMO_OPTIONS } from './demoOptions.ts';
 import { simulateLeague } from './simulateLeague.ts';
 import { writeLeagueCsv } from './writeLeagueCsv.ts';
-
-/** The demo league's fixed settings. */
-export const DEMO_OPTIONS = { seed: 20260630, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: 17000 } as const;
 
 const here = dirname(fileURLToPath(import.meta.url));
 const dir = resolve(process.argv[2] ?? join(here, '..', '..', 'demo-roster'));
