@@ -9,12 +9,17 @@ import type { RowReader } from './RowReader.ts';
 export class StintGroups<S> {
   private readonly groups = new Map<string, Group<S>>();
   private readonly rejected = new Map<string, number>();
+  /** The key and group of the last checkDuplicate, so add() on the same row looks up once. */
+  private lastKey: string | undefined;
+  private lastGroup: Group<S> | undefined;
 
   constructor(private readonly describe: string) {}
 
   /** Reports a duplicate of `key` + `sub` on the row (nothing else is recorded). */
   checkDuplicate(row: RowReader, key: string, sub: string, shown: string, subOf: (s: S) => string): void {
     const group = this.groups.get(key);
+    this.lastKey = key;
+    this.lastGroup = group;
     let first: number | undefined;
     if (group !== undefined) {
       if (subOf(group.first) === sub) first = group.firstLine;
@@ -23,7 +28,7 @@ export class StintGroups<S> {
         if (i >= 0) first = group.moreLines?.[i];
       }
     }
-    first ??= this.rejected.get(`${key}\u0000${sub}`);
+    if (first === undefined && this.rejected.size > 0) first = this.rejected.get(`${key}\u0000${sub}`);
     if (first === undefined) return;
     row.report('kindred.input.duplicateKey', undefined, shown,
       `one row per ${this.describe} (line ${first} has the same key; this is line ${row.line})`);
@@ -36,7 +41,9 @@ export class StintGroups<S> {
   }
 
   add(key: string, stint: S, line: number): void {
-    const group = this.groups.get(key);
+    const group = key === this.lastKey ? this.lastGroup : this.groups.get(key);
+    this.lastKey = undefined;
+    this.lastGroup = undefined;
     if (group === undefined) {
       this.groups.set(key, { first: stint, firstLine: line, more: undefined, moreLines: undefined });
     } else if (group.more === undefined || group.moreLines === undefined) {
