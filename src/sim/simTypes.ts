@@ -64,6 +64,8 @@ export interface SimPlayers {
   readonly highestLevel: Int8Array;
   /** Seasons with a top-level stint (whole career). */
   readonly mlbSeasons: Int16Array;
+  /** Overall value (playerValue, talent units) of the player's peak talents: his true ceiling. */
+  readonly peakValue: Float32Array;
   /** 1 when the career was still going after lastSeason (censored). */
   readonly active: Uint8Array;
 }

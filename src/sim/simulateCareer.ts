@@ -59,6 +59,8 @@ export interface Career {
   readonly entrySeason: number;
   readonly entryAge: number;
   readonly peak: Float64Array;
+  /** Overall value of the peak talents at the entry position or role. */
+  readonly peakValue: number;
   readonly seasons: readonly CareerSeason[];
   /** Still playing after the last simulated season (a censored career). */
   readonly active: boolean;
@@ -147,6 +149,7 @@ export function simulateCareer(
       ? hitterValue(t, position === 'SP' || position === 'RP' ? 'DH' : position)
       : pitcherValue(t, position === 'SP');
 
+  const peakValue = valueNow(peak);
   const walk = new Float64Array(width);
   const seasons: CareerSeason[] = [];
   let level = LEVEL_RK;
@@ -216,7 +219,7 @@ export function simulateCareer(
     if (level !== before || !rng.chance(0.85)) club = rng.int(teamsPerLevel);
     if (kind === 'pitcher' && position === 'SP' && level >= 3 && gap > 0 && rng.chance(0.25)) position = 'RP';
   }
-  return { kind, bats, throws, birthDate, entrySeason, entryAge, peak, seasons, active };
+  return { kind, bats, throws, birthDate, entrySeason, entryAge, peak, peakValue, seasons, active };
 }
 
 function secondaryThisSeason(

@@ -122,6 +122,7 @@ export function simulateLeague(options: SimOptions): SimLeague {
   const highestLevel: number[] = [];
   const mlbSeasons: number[] = [];
   const active: number[] = [];
+  const peakValue: number[] = [];
 
   const bRow = new Float64Array(BATTING_COLUMNS.length);
   const fRow = new Float64Array(FIELDING_COLUMNS.length);
@@ -244,6 +245,7 @@ export function simulateLeague(options: SimOptions): SimLeague {
     entrySeason.push(career.entrySeason);
     entryAge.push(career.entryAge);
     active.push(career.active ? 1 : 0);
+    peakValue.push(career.peakValue);
   }
 
   const count = names.length;
@@ -270,6 +272,7 @@ export function simulateLeague(options: SimOptions): SimLeague {
       entryAge: Int8Array.from(entryAge),
       highestLevel: Int8Array.from(highestLevel),
       mlbSeasons: Int16Array.from(mlbSeasons),
+      peakValue: Float32Array.from(peakValue),
       active: Uint8Array.from(active),
     },
     batting,

@@ -134,6 +134,44 @@ describe('simulateLeague(options)', () => {
     expect(mean(LEVEL_MLB, P_STUFF, 'pitcher')).toBeGreaterThan(mean(0, P_STUFF, 'pitcher') + 0.5);
   });
 
+  it('gives players who reach the top level a higher true ceiling (peakValue) than those who do not', () => {
+    let topSum = 0, topN = 0, restSum = 0, restN = 0;
+    for (let i = 0; i < league.players.count; i++) {
+      const v = league.players.peakValue[i] ?? 0;
+      if (league.players.highestLevel[i] === LEVEL_MLB) { topSum += v; topN++; } else { restSum += v; restN++; }
+    }
+    expect(topSum / topN).toBeGreaterThan(restSum / restN + 0.8);
+  });
+
+  it('names as truth position the fielding position a hitter played most that season (DH when he did not field)', () => {
+    const games = new Map<string, Map<string, number>>();
+    const f = league.fielding;
+    for (let r = 0; r < f.length; r++) {
+      const key = `${f.get(r, 0)}|${f.get(r, 1)}`;
+      const byPos = games.get(key) ?? new Map<string, number>();
+      const pos = cellText(league, f, r, f.columnIndex('pos'));
+      byPos.set(pos, (byPos.get(pos) ?? 0) + f.get(r, f.columnIndex('G')));
+      games.set(key, byPos);
+    }
+    let checked = 0, agree = 0, dhFielding = 0, dh = 0;
+    for (let r = 0; r < league.truth.length; r++) {
+      if (league.truth.kind(r) !== 'hitter') continue;
+      const byPos = games.get(`${league.truth.playerIndex(r)}|${league.truth.season(r)}`);
+      const pos = league.truth.position(r);
+      if (pos === 'DH') {
+        dh++;
+        if (byPos !== undefined) dhFielding++;
+        continue;
+      }
+      checked++;
+      const most = byPos === undefined ? '' : [...byPos.entries()].sort((a, b) => b[1] - a[1])[0]?.[0];
+      if (most === pos) agree++;
+    }
+    expect(agree / checked).toBeGreaterThan(0.97);
+    expect(dh).toBeGreaterThan(0);
+    expect(dhFielding).toBeLessThan(dh); // most DH seasons have no fielding row; some cover a little 1B or LF
+  });
+
   it('leaves some careers in progress at the last season (censored)', () => {
     const active = league.players.active.reduce((a, b) => a + b, 0);
     expect(active).toBeGreaterThan(0);
