@@ -129,4 +129,15 @@ describe('readRoster: batting.csv keys', () => {
     expect(issue.expected).toContain('line 2');
     expect(issue.expected).toContain('line 4');
   });
+  it('still reports a duplicate of a row that was refused for another reason', async () => {
+    const issues = await battingIssues([{ H: 'x' }, { player_id: 'p2' }, {}]);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.duplicateKey', file: 'batting.csv', line: 4, column: 0, value: 'p1 2021 AA T1' });
+    expect(issue.expected).toContain('line 2');
+  });
+  it('reads stints of one season at two teams as one season, but a second row of the same team as a duplicate', async () => {
+    const roster = await readRoster(rosterDir({ 'batting.csv': csv('batting', [{}, { team: 'T2' }]) }));
+    expect(roster.batting).toHaveLength(1);
+    expect(roster.batting[0]?.teams).toEqual(['T1', 'T2']);
+    expect(roster.batting[0]?.PA).toBe(240);
+  });
 });

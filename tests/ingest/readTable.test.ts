@@ -36,6 +36,11 @@ describe('readRoster: file shape', () => {
     const { issues } = await strictIssues(rosterDir({ 'players.csv': text }));
     expectOneIssue(issues, { code: 'kindred.input.raggedRow', file: 'players.csv', line: 6, column: 0, value: '3 cells' });
   });
+  it('reads CRLF line endings and counts lines the same way', async () => {
+    const text = csv('batting', [{}, { player_id: 'p2' }, { player_id: 'p3', AB: 'x' }]).replaceAll('\n', '\r\n');
+    const { issues } = await strictIssues(rosterDir({ 'batting.csv': text }));
+    expectOneIssue(issues, { code: 'kindred.input.notNumeric', file: 'batting.csv', line: 4, column: col('batting', 'AB'), value: 'x' });
+  });
   it('refuses a missing required column at column 0, naming it', async () => {
     const { issues } = await strictIssues(rosterDir({ 'batting.csv': csv('batting', [{}], ['SF']) }));
     const issue = expectOneIssue(issues, { code: 'kindred.input.missingColumn', file: 'batting.csv', line: 1, column: 0, value: 'SF', field: 'SF' });
