@@ -150,6 +150,7 @@ function groupFile(
     n: g.meta.length,
     dims: [...g.dims],
     redundancy: [...g.redundancy],
+    reliability: [...g.reliability],
     rows: {
       player: g.meta.map((m) => playerIndex.get(m.playerId) ?? -1),
       season: g.meta.map((m) => m.season),

@@ -5,6 +5,7 @@ import { assembleSeasons, DEFAULT_MINIMUMS, type AssembledSeasons, type SampleMi
 import { measureDimensions, type MeasuredColumn } from './measureDimensions.ts';
 import { standardiseByStratum, DEFAULT_STANDARDISE, type StandardiseOptions, type StratumStats } from './standardiseByStratum.ts';
 import { redundancyWeights } from './redundancyWeights.ts';
+import { reliability } from './reliability.ts';
 import { groupOf, POSITION_GROUPS, type PositionGroup } from './positionGroup.ts';
 import { HITTER_DIMENSIONS } from './hitterDimensions.ts';
 import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
@@ -22,7 +23,9 @@ export interface GroupProfiles {
   readonly z: Float32Array;
   /** Per dimension, stratum key `${season}|${level}|${group or position}` to its stats. */
   readonly strata: ReadonlyMap<string, ReadonlyMap<string, StratumStats>>;
-  /** Redundancy weight per dimension (see redundancyWeights). */
+  /** Season-to-season reliability per dimension (see reliability). */
+  readonly reliability: Float64Array;
+  /** Default weight per dimension: reliability and redundancy (see redundancyWeights). */
   readonly redundancy: Float64Array;
 }
 
@@ -129,7 +132,10 @@ function assembleGroup(
     }
     strata.set(dim.name, st.strata);
   });
-  return { group, dims, meta, raw, z, strata, redundancy: redundancyWeights(z64, n, d) };
+  const ids = new Map<string, number>();
+  const playerNumber = (id: string): number => ids.get(id) ?? ids.set(id, ids.size).size - 1;
+  const rel = reliability(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season));
+  return { group, dims, meta, raw, z, strata, reliability: rel, redundancy: redundancyWeights(z64, n, d, rel) };
 }
 
 /** FIP constant of every season and level: league ERA minus the league's raw FIP (src/stats/fipConstant.ts). */

@@ -23,6 +23,7 @@ export const groupFileSchema = z.strictObject({
   n: z.number().int().nonnegative(),
   dims: z.array(dimensionInfoSchema),
   redundancy: z.array(z.number()),
+  reliability: z.array(z.number()),
   rows: z.strictObject({
     player: z.array(z.number().int().nonnegative()),
     season: z.array(z.number().int()),

@@ -1,28 +1,33 @@
 /**
- * Redundancy weights: a dimension that measures the same skill as others counts for less, so that a
- * skill seen through many dimensions (power: ISO, HR%, SLG, exit velocity, hard-hit%) does not outvote
- * a skill seen through one (speed).
+ * Dimension weights that count each lasting skill about once:
  *
- * w_i = 1 / sum_j r_ij^2, with r the Pearson correlation of the standardised dimensions over the
- * rows where both are present (pairwise complete), and r_ii = 1. A dimension uncorrelated with all
- * others keeps weight 1; m perfectly correlated copies share weight 1 between them (1/m each).
- * This is the inverse of the dimension's "participation" in the correlation matrix: a project
- * choice, measured against plain z-scores on simulated leagues in bench/comps-quality.
- * Pairs with fewer than `minPairs` shared rows count as uncorrelated.
+ *   w_i = rel_i^2 / sum_j rho'_ij^2,   rho'_ij = min(1, |r_ij| / sqrt(rel_i rel_j)),  rho'_ii = 1
+ *
+ * - rel_i is the dimension's season-to-season reliability (see reliability.ts): a dimension that is
+ *   mostly sampling noise (BABIP, fielding percentage) counts for little.
+ * - rho' is the correlation corrected for attenuation (Spearman 1904): how much two dimensions measure
+ *   the same skill once their noise is set aside. A skill seen through many dimensions (power: ISO,
+ *   HR%, SLG, exit velocity, hard-hit%) shares its weight among them instead of outvoting a skill seen
+ *   through one (speed). Without the correction, noise (uncorrelated with everything) would look like
+ *   a unique skill and be weighted up.
+ * r is the pairwise-complete Pearson correlation of the standardised dimensions; pairs with fewer than
+ * `minPairs` shared rows count as unrelated.
+ * A project choice, measured against plain z-scores on simulated leagues (bench/compsQuality.bench.ts).
  *
  * @example
- * // two identical columns and one independent column: weights [0.5, 0.5, 1]
+ * // two identical, perfectly reliable columns and an unrelated one: weights [0.5, 0.5, 1]
  */
-export function redundancyWeights(z: Float64Array, n: number, d: number, minPairs = 30): Float64Array {
+export function redundancyWeights(z: Float64Array, n: number, d: number, rel: Float64Array = new Float64Array(d).fill(1), minPairs = 30): Float64Array {
   const r = correlationMatrix(z, n, d, minPairs);
   const w = new Float64Array(d);
   for (let i = 0; i < d; i++) {
+    const ri = rel[i] as number;
     let s = 0;
     for (let j = 0; j < d; j++) {
-      const v = r[i * d + j] as number;
+      const v = i === j ? 1 : Math.min(1, Math.abs(r[i * d + j] as number) / Math.sqrt(ri * (rel[j] as number)));
       s += v * v;
     }
-    w[i] = s > 0 ? 1 / s : 1;
+    w[i] = (ri * ri) / s;
   }
   return w;
 }

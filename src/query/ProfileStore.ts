@@ -18,7 +18,10 @@ export interface StoredGroup {
   readonly dims: readonly DimensionInfo[];
   readonly d: number;
   readonly n: number;
+  /** Default dimension weights (reliability and redundancy; see src/profiles/redundancyWeights.ts). */
   readonly redundancy: Float64Array;
+  /** Season-to-season reliability per dimension. */
+  readonly reliability: Float64Array;
   readonly player: Int32Array;
   readonly season: Int32Array;
   readonly level: Int32Array;

@@ -57,7 +57,7 @@ export async function loadProfileStore(dir: string): Promise<ProfileStore> {
     const raw = bytesToFloat32(await store.readBytes(names.raw));
     const zz = bytesToFloat32(await store.readBytes(names.z));
     const lengths = [gf.rows.player, gf.rows.season, gf.rows.level, gf.rows.position, gf.rows.age, gf.rows.sample, gf.rows.teams].map((a) => a.length);
-    if (raw.length !== gf.n * d || zz.length !== gf.n * d || lengths.some((l) => l !== gf.n) || gf.redundancy.length !== d) {
+    if (raw.length !== gf.n * d || zz.length !== gf.n * d || lengths.some((l) => l !== gf.n) || gf.redundancy.length !== d || gf.reliability.length !== d) {
       throw new StoreError('kindred.store.corrupt', `${dir}/${names.json}: sizes do not match (${gf.n} rows x ${d} dimensions); rebuild the store`, { file: names.json });
     }
     if (gf.index.dim !== d || gf.index.count !== gf.n) {
@@ -74,6 +74,7 @@ export async function loadProfileStore(dir: string): Promise<ProfileStore> {
       d,
       n: gf.n,
       redundancy: Float64Array.from(gf.redundancy),
+      reliability: Float64Array.from(gf.reliability),
       player: Int32Array.from(gf.rows.player),
       season: Int32Array.from(gf.rows.season),
       level: Int32Array.from(gf.rows.level),
