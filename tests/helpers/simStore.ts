@@ -1,0 +1,28 @@
+/** A store built from a small simulated league in a temp folder, for query and CLI tests. */
+import { mkdtemp } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { simulateLeague } from '../../src/sim/simulateLeague.ts';
+import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
+import { buildStore } from '../../src/build/buildStore.ts';
+import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import type { SimLeague } from '../../src/sim/simTypes.ts';
+
+export interface SimStore {
+  readonly dir: string;
+  readonly rosterDir: string;
+  readonly storeDir: string;
+  readonly league: SimLeague;
+  readonly store: ProfileStore;
+}
+
+export async function simStore(targetPlayerSeasons = 8000, seed = 4242): Promise<SimStore> {
+  const dir = await mkdtemp(join(tmpdir(), 'kindred-test-'));
+  const league = simulateLeague({ seed, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons });
+  const rosterDir = join(dir, 'roster');
+  const storeDir = join(dir, 'store');
+  await writeLeagueCsv(league, rosterDir);
+  await buildStore(rosterDir, storeDir, { lenient: false });
+  return { dir, rosterDir, storeDir, league, store: await loadProfileStore(storeDir) };
+}
