@@ -1,0 +1,58 @@
+import { Command, InvalidArgumentError } from 'commander';
+import type { CliIo } from '../CliIo.ts';
+import { DEFAULT_STORE } from '../defaults.ts';
+import { createServer } from '../../server/createServer.ts';
+
+/** A TCP port: 0 (any free port) to 65535. */
+export function port(value: string): number {
+  const n = Number(value);
+  if (!/^\d{1,5}$/.test(value.trim()) || n > 65535) throw new InvalidArgumentError(`expected a port from 0 to 65535, got "${value}"`);
+  return n;
+}
+
+export interface ServeSignals {
+  /** Registers a handler; returns a function that removes it. */
+  on(signal: 'SIGHUP' | 'SIGINT' | 'SIGTERM', handler: () => void): () => void;
+}
+
+const processSignals: ServeSignals = {
+  on(signal, handler) {
+    process.on(signal, handler);
+    return () => process.off(signal, handler);
+  },
+};
+
+/**
+ * `kindred serve`: the page and the JSON API over one loaded store, until SIGINT or SIGTERM.
+ * SIGHUP reloads the store (as POST /api/reload does); a failed reload keeps the old store.
+ */
+export function serveCommand(io: CliIo, signals: ServeSignals = processSignals): Command {
+  return new Command('serve')
+    .description('serve a local web page and a JSON API for comps over a store')
+    .option('--store <dir>', 'store folder made by kindred build', DEFAULT_STORE)
+    .option('--port <n>', 'TCP port (0: any free port)', port, 8080)
+    .option('--host <address>', 'address to listen on (anything but loopback exposes the store to the network)', '127.0.0.1')
+    .action(async (raw: { store: string; port: number; host: string }) => {
+      const running = await createServer({ storeDir: raw.store, port: raw.port, host: raw.host, log: (line) => io.stderr.write(line + '\n') });
+      io.stdout.write(`Kindred is serving ${running.url} from ${raw.store}\n`);
+      io.stderr.write('Ctrl-C stops; SIGHUP or POST /api/reload reloads the store after a rebuild.\n');
+      await new Promise<void>((resolve) => {
+        const offs: (() => void)[] = [];
+        const stop = (): void => {
+          for (const off of offs) off();
+          running.close().then(resolve, resolve);
+        };
+        offs.push(
+          signals.on('SIGHUP', () => {
+            running.reload().then(
+              (loaded) => io.stderr.write(`reloaded ${raw.store} (generation ${loaded.generation})\n`),
+              (e: unknown) => io.stderr.write(`reload failed, still serving the previous store: ${e instanceof Error ? e.message : String(e)}\n`),
+            );
+          }),
+          signals.on('SIGINT', stop),
+          signals.on('SIGTERM', stop),
+        );
+      });
+      io.stderr.write('stopped\n');
+    });
+}

@@ -1,0 +1,48 @@
+import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { PositionGroup } from '../profiles/positionGroup.ts';
+import type { TargetRow } from '../query/selectTargetRow.ts';
+import { poolMap, type PoolMap } from './poolMap.ts';
+
+/** A store as the server holds it: the store, when it was loaded, and what is computed from it on demand. */
+export class LoadedStore {
+  readonly store: ProfileStore;
+  readonly loadedAt: Date;
+  readonly generation: number;
+  readonly #maps = new Map<PositionGroup, PoolMap>();
+  #rows: Map<number, TargetRow[]> | undefined;
+
+  constructor(store: ProfileStore, generation: number, loadedAt: Date = new Date()) {
+    this.store = store;
+    this.generation = generation;
+    this.loadedAt = loadedAt;
+  }
+
+  /** The pool map of a group, computed once per loaded store; undefined when the store lacks the group. */
+  map(group: PositionGroup): PoolMap | undefined {
+    const cached = this.#maps.get(group);
+    if (cached) return cached;
+    const g = this.store.groups.get(group);
+    if (!g) return undefined;
+    const m = poolMap(this.store, g);
+    this.#maps.set(group, m);
+    return m;
+  }
+
+  /** Every profiled row of a player (all groups), from an index built on first use. */
+  rowsOf(player: number): readonly TargetRow[] {
+    if (!this.#rows) {
+      const all = new Map<number, TargetRow[]>();
+      for (const [group, g] of this.store.groups) {
+        for (let i = 0; i < g.n; i++) {
+          const p = g.player[i] as number;
+          let list = all.get(p);
+          if (!list) all.set(p, (list = []));
+          list.push({ group, row: i });
+        }
+      }
+      this.#rows = all;
+    }
+    return this.#rows.get(player) ?? [];
+  }
+}
+

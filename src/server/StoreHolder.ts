@@ -1,0 +1,42 @@
+import { loadProfileStore } from '../query/loadProfileStore.ts';
+import type { ProfileStore } from '../query/ProfileStore.ts';
+import { LoadedStore } from './LoadedStore.ts';
+
+export type StoreLoader = (dir: string) => Promise<ProfileStore>;
+
+/**
+ * The store the server answers from. Queries read `current` and never wait; `reload` reads the
+ * store folder again in full (manifest and checksums verified by loadProfileStore) and swaps it in
+ * only when that succeeded, so a query sees the old store or the new one, never a mix. A failed
+ * reload leaves the old store in place and rejects with the load error. Reloads run one at a time.
+ */
+export class StoreHolder {
+  readonly dir: string;
+  readonly #load: StoreLoader;
+  #current: LoadedStore;
+  #queue: Promise<unknown> = Promise.resolve();
+
+  private constructor(dir: string, first: LoadedStore, load: StoreLoader) {
+    this.dir = dir;
+    this.#current = first;
+    this.#load = load;
+  }
+
+  static async open(dir: string, load: StoreLoader = loadProfileStore): Promise<StoreHolder> {
+    return new StoreHolder(dir, new LoadedStore(await load(dir), 1), load);
+  }
+
+  get current(): LoadedStore {
+    return this.#current;
+  }
+
+  reload(): Promise<LoadedStore> {
+    const next = this.#queue.then(async () => {
+      const store = await this.#load(this.dir);
+      this.#current = new LoadedStore(store, this.#current.generation + 1);
+      return this.#current;
+    });
+    this.#queue = next.catch(() => undefined);
+    return next;
+  }
+}

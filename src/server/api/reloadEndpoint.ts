@@ -1,0 +1,16 @@
+import type { Endpoint } from '../Endpoint.ts';
+import { parseParameters } from '../commandParameters.ts';
+import { answerInfo, type StoreInfo } from './infoEndpoint.ts';
+
+/**
+ * `POST /api/reload`: reads the store folder again in full and swaps it in; answers the new store's
+ * info. A store that fails to load (missing, corrupt, half-written) is a 503 and the old one stays.
+ */
+export const reloadEndpoint: Endpoint = {
+  methods: ['POST'],
+  answer: async ({ holder, query }): Promise<StoreInfo> => {
+    parseParameters(query, { specs: new Map(), extra: [] });
+    const loaded = await holder.reload();
+    return answerInfo(loaded, new URLSearchParams());
+  },
+};

@@ -1,0 +1,17 @@
+import type { Endpoint } from './Endpoint.ts';
+import { compsEndpoint } from './api/compsEndpoint.ts';
+import { dimsEndpoint } from './api/dimsEndpoint.ts';
+import { infoEndpoint } from './api/infoEndpoint.ts';
+import { mapEndpoint } from './api/mapEndpoint.ts';
+import { playersEndpoint } from './api/playersEndpoint.ts';
+import { reloadEndpoint } from './api/reloadEndpoint.ts';
+
+/** Every JSON endpoint by its exact path. */
+export const API_ENDPOINTS: ReadonlyMap<string, Endpoint> = new Map([
+  ['/api/comps', compsEndpoint],
+  ['/api/players', playersEndpoint],
+  ['/api/dims', dimsEndpoint],
+  ['/api/map', mapEndpoint],
+  ['/api/info', infoEndpoint],
+  ['/api/reload', reloadEndpoint],
+]);

@@ -1,0 +1,170 @@
+import http, { type IncomingMessage, type ServerResponse } from 'node:http';
+import { fileURLToPath } from 'node:url';
+import { allowedHosts } from './allowedHosts.ts';
+import { checkRequestSource } from './checkRequestSource.ts';
+import { errorResponse } from './errorResponse.ts';
+import { HttpError } from './HttpError.ts';
+import { readBody } from './readBody.ts';
+import { SECURITY_HEADERS } from './securityHeaders.ts';
+import { loadStaticFiles, type StaticFile } from './staticFiles.ts';
+import { StoreHolder, type StoreLoader } from './StoreHolder.ts';
+import type { LoadedStore } from './LoadedStore.ts';
+import type { Endpoint } from './Endpoint.ts';
+import { API_ENDPOINTS } from './apiEndpoints.ts';
+
+/** Where `npm run build:web` writes the page. */
+export const DEFAULT_WEB_ROOT = fileURLToPath(new URL('../web/dist', import.meta.url));
+
+export interface ServerLimits {
+  /** node:http maxHeaderSize: request line plus headers (431 above it). */
+  readonly maxHeaderBytes: number;
+  /** Request body cap (413 above it). */
+  readonly maxBodyBytes: number;
+  /** node:http headersTimeout: time to receive the whole header block (408 after it). */
+  readonly headersTimeoutMs: number;
+  /** node:http requestTimeout: time to receive the whole request. */
+  readonly requestTimeoutMs: number;
+  readonly keepAliveTimeoutMs: number;
+}
+
+export const DEFAULT_LIMITS: ServerLimits = {
+  maxHeaderBytes: 16 * 1024,
+  maxBodyBytes: 64 * 1024,
+  headersTimeoutMs: 10_000,
+  requestTimeoutMs: 30_000,
+  keepAliveTimeoutMs: 5_000,
+};
+
+export interface ServerOptions {
+  readonly storeDir: string;
+  /** Default 127.0.0.1: only this machine. */
+  readonly host?: string;
+  /** Default 8080; 0 picks a free port. */
+  readonly port?: number;
+  /** Folder of the built page (default DEFAULT_WEB_ROOT). */
+  readonly webRoot?: string;
+  readonly limits?: Partial<ServerLimits>;
+  /** Where unexpected failures are logged with their stack (default: stderr). */
+  readonly log?: (line: string) => void;
+  readonly loadStore?: StoreLoader;
+}
+
+export interface RunningServer {
+  readonly server: http.Server;
+  /** e.g. `http://127.0.0.1:8080/` */
+  readonly url: string;
+  readonly holder: StoreHolder;
+  /** Same as POST /api/reload. */
+  readonly reload: () => Promise<LoadedStore>;
+  /** Stops listening and ends every open connection. */
+  readonly close: () => Promise<void>;
+}
+
+/**
+ * The Kindred HTTP server: the JSON API over a loaded store and the bundled page, on node:http.
+ * Loads the store before listening (a bad store fails here, not at the first request).
+ */
+export async function createServer(options: ServerOptions): Promise<RunningServer> {
+  const limits: ServerLimits = { ...DEFAULT_LIMITS, ...options.limits };
+  const log = options.log ?? ((line: string) => process.stderr.write(line + '\n'));
+  const holder = await StoreHolder.open(options.storeDir, options.loadStore);
+  const files = await loadStaticFiles(options.webRoot ?? DEFAULT_WEB_ROOT);
+  let hosts: ReadonlySet<string> = new Set();
+
+  const server = http.createServer(
+    {
+      maxHeaderSize: limits.maxHeaderBytes,
+      headersTimeout: limits.headersTimeoutMs,
+      requestTimeout: limits.requestTimeoutMs,
+      keepAliveTimeout: limits.keepAliveTimeoutMs,
+      connectionsCheckingInterval: Math.max(50, Math.min(1000, Math.floor(limits.headersTimeoutMs / 4))),
+    },
+    (req, res) => {
+      handle(req, res).catch((e: unknown) => {
+        log(`kindred serve: failed to answer ${req.method ?? '?'} ${req.url ?? '?'}: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+        if (!res.headersSent) res.writeHead(500).end();
+        else res.destroy();
+      });
+    },
+  );
+  server.maxHeadersCount = 100;
+
+  async function handle(req: IncomingMessage, res: ServerResponse): Promise<void> {
+    for (const [k, v] of Object.entries(SECURITY_HEADERS)) res.setHeader(k, v);
+    const method = req.method ?? 'GET';
+    try {
+      checkRequestSource(req, hosts);
+      const target = req.url ?? '';
+      if (!target.startsWith('/')) throw new HttpError(400, 'kindred.http.badPath', 'expected a request path starting with /');
+      const q = target.indexOf('?');
+      const path = q < 0 ? target : target.slice(0, q);
+      const query = new URLSearchParams(q < 0 ? '' : target.slice(q + 1));
+      await readBody(req, limits.maxBodyBytes);
+      const endpoint: Endpoint | undefined = API_ENDPOINTS.get(path);
+      if (endpoint) {
+        const allowed: readonly string[] = endpoint.methods;
+        const ok = allowed.includes(method) || (method === 'HEAD' && allowed.includes('GET'));
+        if (!ok) throw new HttpError(405, 'kindred.http.methodNotAllowed', `${path} takes ${allowed.join(', ')}, not ${method}`, { Allow: allowed.join(', ') });
+        sendJson(res, method, 200, await endpoint.answer({ holder, query }));
+        return;
+      }
+      if (path.startsWith('/api/')) throw new HttpError(404, 'kindred.http.notFound', `no endpoint ${path}; known: ${[...API_ENDPOINTS.keys()].join(', ')}`);
+      if (method !== 'GET' && method !== 'HEAD') throw new HttpError(405, 'kindred.http.methodNotAllowed', `the page takes GET, not ${method}`, { Allow: 'GET, HEAD' });
+      if (!files) throw new HttpError(503, 'kindred.http.pageNotBuilt', 'the page is not built: run `npm run build:web` (the JSON API under /api/ works without it)');
+      const file = files.get(path);
+      if (!file) throw new HttpError(404, 'kindred.http.notFound', `no file ${path}`);
+      sendFile(res, method, file);
+    } catch (e) {
+      const r = errorResponse(e);
+      if (r.unexpected) log(`kindred serve: ${method} ${req.url ?? ''}: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+      for (const [k, v] of Object.entries(r.headers)) res.setHeader(k, v);
+      if (!req.complete) res.setHeader('Connection', 'close');
+      sendJson(res, method, r.status, r.body);
+    }
+  }
+
+  await new Promise<void>((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(options.port ?? 8080, options.host ?? '127.0.0.1', () => {
+      server.off('error', reject);
+      resolve();
+    });
+  });
+  const address = server.address();
+  if (address === null || typeof address === 'string') throw new RangeError('the server is not listening on a TCP port');
+  const host = options.host ?? '127.0.0.1';
+  hosts = allowedHosts(host, address.port);
+  const urlHost = address.family === 'IPv6' ? `[${address.address}]` : address.address;
+  const url = `http://${host === '0.0.0.0' || host === '::' ? '127.0.0.1' : urlHost}:${address.port}/`;
+
+  return {
+    server,
+    url,
+    holder,
+    reload: () => holder.reload(),
+    close: () =>
+      new Promise<void>((resolve, reject) => {
+        server.close((e) => (e ? reject(e) : resolve()));
+        server.closeAllConnections();
+      }),
+  };
+}
+
+function sendJson(res: ServerResponse, method: string, status: number, body: unknown): void {
+  const text = JSON.stringify(body);
+  res.writeHead(status, {
+    'Content-Type': 'application/json; charset=utf-8',
+    'Content-Length': Buffer.byteLength(text),
+    'Cache-Control': 'no-store',
+  });
+  res.end(method === 'HEAD' ? undefined : text);
+}
+
+function sendFile(res: ServerResponse, method: string, file: StaticFile): void {
+  res.writeHead(200, {
+    'Content-Type': file.type,
+    'Content-Length': file.body.length,
+    'Cache-Control': file.immutable ? 'public, max-age=31536000, immutable' : 'no-cache',
+  });
+  res.end(method === 'HEAD' ? undefined : file.body);
+}
