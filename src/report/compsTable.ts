@@ -33,7 +33,7 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     chars: PLAIN,
     style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
     colAligns: ['right', 'left', 'left', 'left', 'left', 'right', 'right', 'right', 'left'],
-    colWidths: [3, 25, 7, 5, 4, 4, 5, 5, 34],
+    colWidths: [3, 25, 7, 5, 4, 4, 5, 5, 32],
     wordWrap: true,
   });
   const byName = new Map(dims.map((d) => [d.name, d]));
@@ -58,7 +58,7 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     chars: PLAIN,
     style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
     colAligns: ['left', 'right', ...top.map(() => 'right' as const)],
-    colWidths: [16, 13, ...top.map(() => 13)],
+    colWidths: [13, 12, ...top.map(() => 12)],
   });
   const first = result.comps[0];
   for (const [j, detail] of (first?.dimensions ?? []).entries()) {
@@ -76,6 +76,7 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     ]);
   }
   lines.push('Values as observed; (grades) 20 to 80 from regressed values, higher is better', grid.toString());
-  lines.push('Like: likeness 0-100 (100 identical, about 37 for unrelated players). Cov: share of the target\u2019s profile compared.');
-  return lines.join('\n') + '\n';
+  lines.push('Like: likeness 0-100 (100 identical, about 37 for two unrelated players).');
+  lines.push('Cov: share of the target\u2019s weighted profile that the comp has data for.');
+  return lines.join('\n').split('\n').map((l) => l.trimEnd()).join('\n') + '\n';
 }
