@@ -1,0 +1,173 @@
+import { mkdtemp, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { runCli } from '../helpers/runCli.ts';
+import { compsResultSchema } from './compsContract.ts';
+import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
+import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+
+let dir: string;
+let store: string;
+let profiles: ProfileStore;
+/** A demo catcher and a demo shortstop with several seasons. */
+let catcher: { id: string; name: string };
+
+beforeAll(async () => {
+  dir = await mkdtemp(join(tmpdir(), 'kindred-cli-'));
+  store = join(dir, 'store');
+  const built = await runCli('build', DEMO_ROSTER, '--store', store);
+  expect(built.code).toBe(0);
+  profiles = await loadProfileStore(store);
+  const c = profiles.groups.get('C');
+  if (!c) throw new Error('demo roster has no catchers');
+  const last = c.n - 1;
+  const p = profiles.players[c.player[last] as number];
+  catcher = { id: p?.playerId ?? '', name: p?.name ?? '' };
+});
+
+describe('kindred build <demo-roster>', () => {
+  it('reports rows read, rows rejected and profiles per group on stderr', async () => {
+    const out = await runCli('build', DEMO_ROSTER, '--store', join(dir, 'again'));
+    expect(out.code).toBe(0);
+    expect(out.stdout).toBe('');
+    expect(out.stderr).toMatch(/Rows read: .*batting\.csv 10,305/);
+    expect(out.stderr).toMatch(/Rows rejected: 0/);
+    expect(out.stderr).toMatch(/Profiles: C \d/);
+  });
+});
+
+describe('kindred comps <player> --format json', () => {
+  it('follows the documented JSON contract, with shares summing to 1 and never the target himself', async () => {
+    const out = await runCli('comps', catcher.id, '--store', store, '--format', 'json');
+    expect(out.code).toBe(0);
+    const result = compsResultSchema.parse(JSON.parse(out.stdout));
+    expect(result.query.player_id).toBe(catcher.id);
+    expect(result.comps).toHaveLength(10);
+    for (const c of result.comps) {
+      expect(c.player_id).not.toBe(catcher.id);
+      const sum = c.dimensions.reduce((a, d) => a + d.share, 0);
+      expect(sum).toBeCloseTo(1, 6);
+      expect(c.alike.length).toBeGreaterThan(0);
+    }
+    expect(result.comps.map((c) => c.likeness)).toEqual([...result.comps.map((c) => c.likeness)].sort((a, b) => b - a));
+  });
+
+  it('takes a name instead of an id, and his latest season at his highest level by default', async () => {
+    const out = await runCli('comps', catcher.name, '--store', store, '--format', 'json', '--k', '3');
+    expect(out.code).toBe(0);
+    const result = compsResultSchema.parse(JSON.parse(out.stdout));
+    expect(result.query.player_id).toBe(catcher.id);
+    expect(result.comps).toHaveLength(3);
+    const c = profiles.groups.get('C');
+    const seasons: number[] = [];
+    for (let i = 0; c && i < c.n; i++) if (profiles.players[c.player[i] as number]?.playerId === catcher.id) seasons.push(c.season[i] as number);
+    expect(result.query.season).toBe(Math.max(...seasons));
+  });
+
+  it('lists the candidates of an ambiguous name and exits 1', async () => {
+    const first = catcher.name.slice(0, 2);
+    const out = await runCli('comps', first, '--store', store);
+    expect(out.code).toBe(1);
+    expect(out.stderr).toMatch(/matches \d+ players; pass a player id: p\d+/);
+    expect(out.stderr).toContain('kindred.query.ambiguousPlayer');
+  });
+
+  it('says so for an unknown player and exits 1', async () => {
+    const out = await runCli('comps', 'Nobody Atall', '--store', store);
+    expect(out.code).toBe(1);
+    expect(out.stderr).toMatch(/no player matches "Nobody Atall"/);
+  });
+
+  it('refuses a season the player did not play, listing the ones he did', async () => {
+    const out = await runCli('comps', catcher.id, '--store', store, '--season', '1990');
+    expect(out.code).toBe(1);
+    expect(out.stderr).toMatch(/no profile for 1990; his profiled seasons: \d{4} /);
+  });
+
+  it('prints a table that fits 100 columns', async () => {
+    const out = await runCli('comps', catcher.id, '--store', store);
+    expect(out.code).toBe(0);
+    expect(out.stdout).toMatch(/^Comps for /);
+    for (const line of out.stdout.split('\n')) expect(line.length).toBeLessThanOrEqual(100);
+  });
+
+  it('writes CSV with a header and one row per comp', async () => {
+    const out = await runCli('comps', catcher.id, '--store', store, '--format', 'csv', '--k', '4');
+    expect(out.code).toBe(0);
+    const lines = out.stdout.trim().split('\n');
+    expect(lines).toHaveLength(5);
+    expect(lines[0]).toMatch(/^target_player_id,target_season,target_level,rank,player_id,name,season,level,position,age,likeness/);
+    expect(lines[0]).toContain('pop_2b_s_grade');
+  });
+});
+
+describe('kindred comps --want', () => {
+  it('answers a hand-built catcher profile on the given dimensions', async () => {
+    const out = await runCli('comps', '--want', 'pop_2b_s=1.90,obp=.360', '--position', 'C', '--store', store, '--format', 'json');
+    expect(out.code).toBe(0);
+    const result = compsResultSchema.parse(JSON.parse(out.stdout));
+    expect(result.query.kind).toBe('want');
+    expect(result.query.profile).toEqual({ pop_2b_s: 1.9, obp: 0.36 });
+  });
+
+  it('suggests the nearest dimension name for a typo and exits 2', async () => {
+    const out = await runCli('comps', '--want', 'pop_2b=1.90', '--position', 'C', '--store', store);
+    expect(out.code).toBe(2);
+    expect(out.stderr).toMatch(/no dimension "pop_2b" \(did you mean pop_2b_s\?\)/);
+  });
+
+  it('needs --position', async () => {
+    const out = await runCli('comps', '--want', 'obp=.360', '--store', store);
+    expect(out.code).toBe(2);
+    expect(out.stderr).toMatch(/--want needs --position/);
+  });
+});
+
+describe('kindred comps --batch', () => {
+  it('answers every target in the order given, one JSON object per line; a failed target gets an error line and exit 1', async () => {
+    const c = profiles.groups.get('C');
+    const ids: string[] = [];
+    for (let i = 0; c && i < c.n && ids.length < 3; i++) {
+      const id = profiles.players[c.player[i] as number]?.playerId ?? '';
+      if (!ids.includes(id)) ids.push(id);
+    }
+    const file = join(dir, 'targets.csv');
+    await writeFile(file, `player_id,season,level\n${ids[2]},,\nnobody,2020,AA\n${ids[0]},,\n`);
+    const out = await runCli('comps', '--batch', file, '--store', store, '--k', '2');
+    expect(out.code).toBe(1);
+    const lines = out.stdout.trim().split('\n').map((l) => JSON.parse(l) as { query: { player_id: string }; error?: { code: string } });
+    expect(lines.map((l) => l.query.player_id)).toEqual([ids[2], 'nobody', ids[0]]);
+    expect(lines[1]?.error?.code).toBe('kindred.query.unknownPlayer');
+    compsResultSchema.parse(lines[0]);
+  });
+});
+
+describe('usage errors exit 2, missing stores exit 1', () => {
+  it.each([
+    [['comps', 'x', '--k', '0'], /expected a whole number/],
+    [['comps', 'x', '--format', 'xml'], /expected table, json or csv/],
+    [['comps', 'x', '--bogus'], /unknown option/],
+    [['comps', 'x', '--season', '20'], /four-digit season/],
+  ])('kindred %j', async (argv, message) => {
+    const out = await runCli(...argv, '--store', store);
+    expect(out.code).toBe(2);
+    expect(out.stderr).toMatch(message);
+  });
+
+  it('a missing store says how to make one', async () => {
+    const out = await runCli('comps', 'x', '--store', join(dir, 'nowhere'));
+    expect(out.code).toBe(1);
+    expect(out.stderr).toMatch(/no store at .*run kindred build/);
+  });
+});
+
+describe('kindred dims', () => {
+  it('lists the catcher dimensions with units and direction', async () => {
+    const out = await runCli('dims', '--position', 'C');
+    expect(out.code).toBe(0);
+    expect(out.stdout).toMatch(/pop_2b_s\s+│?\s*s\s+│?\s*lower/);
+    expect(out.stdout).not.toContain('fb_mph');
+  });
+});
