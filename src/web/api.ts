@@ -1,0 +1,86 @@
+import type { CompsResult } from '../query/types.ts';
+import type { PlayerHit } from '../server/api/playersEndpoint.ts';
+import type { StoreInfo } from '../server/api/infoEndpoint.ts';
+import type { PoolMap } from '../server/poolMap.ts';
+import type { DimensionInfo } from '../profiles/Dimension.ts';
+
+/** An error answered by the API: its stable code and message. */
+export class ApiError extends Error {
+  readonly code: string;
+  readonly status: number;
+
+  constructor(status: number, code: string, message: string) {
+    super(message);
+    this.name = 'ApiError';
+    this.status = status;
+    this.code = code;
+  }
+}
+
+function isRecord(v: unknown): v is Record<string, unknown> {
+  return typeof v === 'object' && v !== null;
+}
+
+/** GETs (or POSTs) a JSON endpoint of this server; an error body becomes an ApiError. */
+export async function getJson(path: string, params: URLSearchParams = new URLSearchParams(), method: 'GET' | 'POST' = 'GET'): Promise<unknown> {
+  const qs = params.toString();
+  const res = await fetch(qs ? `${path}?${qs}` : path, { method, headers: { Accept: 'application/json' } });
+  const body: unknown = await res.json().catch(() => null);
+  if (!res.ok) {
+    const err = isRecord(body) && isRecord(body.error) ? body.error : {};
+    throw new ApiError(res.status, typeof err.code === 'string' ? err.code : 'unknown', typeof err.message === 'string' ? err.message : `HTTP ${res.status}`);
+  }
+  return body;
+}
+
+/*
+ * The server is this page's own (same build, same contract types), so its answers are taken as the
+ * declared shapes after a check of their top-level fields.
+ */
+
+export async function fetchInfo(): Promise<StoreInfo> {
+  const v = await getJson('/api/info');
+  if (!isInfo(v)) throw new ApiError(0, 'badAnswer', '/api/info answered an unexpected shape');
+  return v;
+}
+
+export async function fetchPlayers(q: string, limit = 10): Promise<readonly PlayerHit[]> {
+  const v = await getJson('/api/players', new URLSearchParams({ q, limit: String(limit) }));
+  if (!isRecord(v) || !Array.isArray(v.players)) throw new ApiError(0, 'badAnswer', '/api/players answered an unexpected shape');
+  return v.players.filter(isPlayerHit);
+}
+
+export async function fetchComps(path: string, params: URLSearchParams): Promise<CompsResult> {
+  const v = await getJson(path, params);
+  if (!isCompsResult(v)) throw new ApiError(0, 'badAnswer', `${path} answered an unexpected shape`);
+  return v;
+}
+
+export async function fetchMap(group: string): Promise<PoolMap> {
+  const v = await getJson('/api/map', new URLSearchParams({ group }));
+  if (!isPoolMap(v)) throw new ApiError(0, 'badAnswer', '/api/map answered an unexpected shape');
+  return v;
+}
+
+export async function fetchDims(position: string): Promise<readonly DimensionInfo[]> {
+  const v = await getJson('/api/dims', new URLSearchParams({ position }));
+  if (!isRecord(v)) throw new ApiError(0, 'badAnswer', '/api/dims answered an unexpected shape');
+  const list = Object.values(v)[0];
+  return Array.isArray(list) ? list.filter(isDimensionInfo) : [];
+}
+
+function isInfo(v: unknown): v is StoreInfo {
+  return isRecord(v) && Array.isArray(v.levels) && isRecord(v.groups) && Array.isArray(v.presets);
+}
+function isPlayerHit(v: unknown): v is PlayerHit {
+  return isRecord(v) && typeof v.player_id === 'string' && typeof v.name === 'string' && Array.isArray(v.seasons);
+}
+function isCompsResult(v: unknown): v is CompsResult {
+  return isRecord(v) && isRecord(v.query) && isRecord(v.pool) && Array.isArray(v.comps);
+}
+function isPoolMap(v: unknown): v is PoolMap {
+  return isRecord(v) && typeof v.group === 'string' && Array.isArray(v.x) && Array.isArray(v.y) && Array.isArray(v.player_id) && Array.isArray(v.season);
+}
+function isDimensionInfo(v: unknown): v is DimensionInfo {
+  return isRecord(v) && typeof v.name === 'string' && typeof v.label === 'string' && typeof v.direction === 'string';
+}

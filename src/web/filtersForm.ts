@@ -1,0 +1,77 @@
+import type { StoreInfo } from '../server/api/infoEndpoint.ts';
+import { h } from './dom.ts';
+
+export interface FiltersForm {
+  readonly element: HTMLElement;
+  /** The pool, weighting and k as API parameters (only those that differ from the defaults). */
+  params(): URLSearchParams;
+}
+
+const checkboxes = (name: string, values: readonly string[]): HTMLElement =>
+  h(
+    'span',
+    { class: 'checks', role: 'group', 'aria-label': name },
+    ...values.map((v) => h('label', { class: 'check' }, h('input', { type: 'checkbox', name, value: v }), v)),
+  );
+
+const range = (id: string, label: string, min: number, max: number): HTMLElement =>
+  h(
+    'div',
+    { class: 'field range' },
+    h('span', { class: 'field-label' }, label),
+    h('input', { id: `${id}-from`, type: 'number', min: String(min), max: String(max), placeholder: 'from', 'aria-label': `${label} from` }),
+    h('span', {}, 'to'),
+    h('input', { id: `${id}-to`, type: 'number', min: String(min), max: String(max), placeholder: 'to', 'aria-label': `${label} to` }),
+  );
+
+/** The pool filters (levels, seasons, ages, bats, throws), k, weighting preset, per-dimension weights. */
+export function filtersForm(info: StoreInfo): FiltersForm {
+  const k = h('input', { id: 'opt-k', type: 'number', min: '1', max: '100', value: '10' });
+  const preset = h('select', { id: 'opt-preset' }, ...info.presets.map((p) => h('option', { value: p }, p)));
+  const weights = h('input', { id: 'opt-weights', type: 'text', placeholder: 'e.g. obp=2,sprint_ft_s=0', spellcheck: 'false' });
+  const coverage = h('input', { id: 'opt-min-coverage', type: 'number', min: '0', max: '1', step: '0.05', value: '0.5' });
+  const allSeasons = h('input', { id: 'opt-all-seasons', type: 'checkbox' });
+  const element = h(
+    'fieldset',
+    { class: 'filters' },
+    h('legend', {}, 'Pool and weights'),
+    h('div', { class: 'field' }, h('span', { class: 'field-label' }, 'Levels'), checkboxes('pool-level', info.levels)),
+    range('opt-seasons', 'Seasons', info.seasons.from ?? 1900, info.seasons.to ?? 2100),
+    range('opt-age', 'Age', 15, 50),
+    h('div', { class: 'field' }, h('span', { class: 'field-label' }, 'Bats'), checkboxes('bats', ['L', 'R', 'S'])),
+    h('div', { class: 'field' }, h('span', { class: 'field-label' }, 'Throws'), checkboxes('throws', ['L', 'R'])),
+    h('div', { class: 'field' }, h('label', { for: k.id, class: 'field-label' }, 'Comps (k)'), k),
+    h('div', { class: 'field' }, h('label', { for: preset.id, class: 'field-label' }, 'Weighting'), preset),
+    h('div', { class: 'field' }, h('label', { for: weights.id, class: 'field-label' }, 'Weights'), weights),
+    h('div', { class: 'field' }, h('label', { for: coverage.id, class: 'field-label' }, 'Min coverage'), coverage),
+    h('div', { class: 'field' }, h('label', { class: 'check' }, allSeasons, 'several seasons of one player')),
+  );
+  const value = (id: string): string => {
+    const el = element.querySelector(`#${id}`);
+    return el instanceof HTMLInputElement ? el.value.trim() : '';
+  };
+  const checked = (name: string): string[] =>
+    Array.from(element.querySelectorAll(`input[name="${name}"]`)).filter((el): el is HTMLInputElement => el instanceof HTMLInputElement && el.checked).map((el) => el.value);
+  const span = (from: string, to: string): string => (from || to ? `${from}-${to}` : '');
+
+  return {
+    element,
+    params(): URLSearchParams {
+      const p = new URLSearchParams();
+      const set = (name: string, v: string): void => {
+        if (v !== '') p.set(name, v);
+      };
+      set('pool-level', checked('pool-level').join(','));
+      set('pool-season', span(value('opt-seasons-from'), value('opt-seasons-to')));
+      set('age', span(value('opt-age-from'), value('opt-age-to')));
+      set('bats', checked('bats').join(','));
+      set('throws', checked('throws').join(','));
+      if (k.value.trim() !== '10') set('k', k.value.trim());
+      if (preset.value !== 'balanced') set('preset', preset.value);
+      set('weights', weights.value.trim());
+      if (coverage.value.trim() !== '0.5') set('min-coverage', coverage.value.trim());
+      if (allSeasons.checked) p.set('all-seasons', 'true');
+      return p;
+    },
+  };
+}

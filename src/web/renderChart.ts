@@ -1,0 +1,17 @@
+import { parse, View } from 'vega';
+import { compile, type TopLevelSpec } from 'vega-lite';
+
+const views = new WeakMap<HTMLElement, View>();
+
+/**
+ * Draws a vega-lite spec into an element as SVG (replacing what was drawn there before).
+ * Everything runs in the page: vega and vega-lite are bundled, nothing is fetched.
+ */
+export async function renderChart(container: HTMLElement, spec: TopLevelSpec, ariaLabel: string): Promise<void> {
+  views.get(container)?.finalize();
+  container.replaceChildren();
+  const view = new View(parse(compile(spec).spec), { renderer: 'svg', container, hover: true, logLevel: 1 });
+  views.set(container, view);
+  await view.runAsync();
+  container.querySelector('svg')?.setAttribute('aria-label', ariaLabel);
+}

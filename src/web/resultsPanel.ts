@@ -1,0 +1,147 @@
+import type { Comp, CompsResult } from '../query/types.ts';
+import type { DimensionInfo } from '../profiles/Dimension.ts';
+import { fetchMap } from './api.ts';
+import { h } from './dom.ts';
+import { download, toCsv } from './exportTable.ts';
+import { gradeChartSpec } from './gradeChartSpec.ts';
+import { poolMapSpec, type Highlight } from './poolMapSpec.ts';
+import { renderChart } from './renderChart.ts';
+
+/** A column the table shows and exports beside the common ones (salary, outcome...). */
+export interface ExtraColumn {
+  readonly title: string;
+  readonly value: (comp: Comp, index: number) => string | number | null;
+}
+
+export interface ResultsPanel {
+  readonly element: HTMLElement;
+  show(result: CompsResult, dims: readonly DimensionInfo[], extra?: readonly ExtraColumn[], raw?: unknown): Promise<void>;
+  clear(message: string): void;
+  /** A place under the table for a view's own chart. */
+  readonly extraChart: HTMLElement;
+}
+
+const fmt = (v: number | null, digits: number): string => (v === null ? '—' : v.toFixed(digits));
+
+/** The results of any comps-like job: summary, table, grade chart of the chosen comp, pool map, exports. */
+export function resultsPanel(fileStem: () => string): ResultsPanel {
+  const summary = h('div', { class: 'summary', id: 'summary' });
+  const csvButton = h('button', { type: 'button', id: 'export-csv', disabled: '' }, 'Download CSV');
+  const jsonButton = h('button', { type: 'button', id: 'export-json', disabled: '' }, 'Download JSON');
+  const table = h('table', { class: 'comps', id: 'comps-table' });
+  const gradeTitle = h('figcaption', {}, 'Grades by dimension');
+  const gradeChart = h('div', { class: 'chart', id: 'grade-chart' });
+  const mapChart = h('div', { class: 'chart', id: 'map-chart' });
+  const extraChart = h('div', { class: 'chart', id: 'extra-chart', hidden: '' });
+  const element = h(
+    'section',
+    { class: 'results', 'aria-live': 'polite' },
+    summary,
+    h('div', { class: 'toolbar' }, csvButton, jsonButton),
+    h('div', { class: 'table-wrap' }, table),
+    extraChart,
+    h(
+      'div',
+      { class: 'charts' },
+      h('figure', {}, gradeTitle, gradeChart),
+      h('figure', {}, h('figcaption', {}, 'The pool on its two main axes (PCA of the z-scores)'), mapChart),
+    ),
+  );
+  let current: { result: CompsResult; extra: readonly ExtraColumn[]; raw: unknown } | null = null;
+
+  const header = (extra: readonly ExtraColumn[]): string[] => [
+    'rank', 'player_id', 'name', 'season', 'level', 'position', 'age', 'likeness', 'distance', 'coverage', ...extra.map((c) => c.title), 'alike', 'apart',
+  ];
+  const cells = (c: Comp, i: number, extra: readonly ExtraColumn[]): (string | number | null)[] => [
+    c.rank, c.player_id, c.name, c.season, c.level, c.position, c.age, c.likeness, c.distance, c.coverage, ...extra.map((x) => x.value(c, i)), c.alike.join(' '), c.apart.join(' '),
+  ];
+
+  csvButton.addEventListener('click', () => {
+    if (!current) return;
+    const { result, extra } = current;
+    download(`${fileStem()}.csv`, 'text/csv', toCsv(header(extra), result.comps.map((c, i) => cells(c, i, extra))));
+  });
+  jsonButton.addEventListener('click', () => {
+    if (!current) return;
+    download(`${fileStem()}.json`, 'application/json', JSON.stringify(current.raw, null, 2) + '\n');
+  });
+
+  const targetLabel = (r: CompsResult): string => r.query.name ?? 'target profile';
+
+  async function selectComp(result: CompsResult, dims: readonly DimensionInfo[], index: number): Promise<void> {
+    const comp = result.comps[index];
+    if (!comp) return;
+    for (const [i, tr] of Array.from(table.querySelectorAll('tbody tr')).entries()) tr.classList.toggle('selected', i === index);
+    gradeTitle.textContent = `Grades: ${targetLabel(result)} and ${comp.name} (${comp.season} ${comp.level})`;
+    const label = (name: string): string => dims.find((d) => d.name === name)?.label ?? name;
+    await renderChart(gradeChart, gradeChartSpec(comp, targetLabel(result), label), `grades of ${targetLabel(result)} and ${comp.name} by dimension`);
+  }
+
+  return {
+    element,
+    extraChart,
+    clear(message: string): void {
+      current = null;
+      summary.replaceChildren(h('p', { class: 'message' }, message));
+      table.replaceChildren();
+      gradeChart.replaceChildren();
+      mapChart.replaceChildren();
+      extraChart.replaceChildren();
+      extraChart.hidden = true;
+      csvButton.disabled = true;
+      jsonButton.disabled = true;
+    },
+    async show(result, dims, extra = [], raw = result): Promise<void> {
+      current = { result, extra, raw };
+      const q = result.query;
+      const who = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''}, ${q.position}` : `a hand-built ${q.position} profile`;
+      summary.replaceChildren(
+        h('p', {}, h('strong', {}, `${result.comps.length} comps`), ` for ${who}`),
+        h('p', { class: 'meta' }, `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} player-seasons in the pool · searched ${q.method === 'hnsw' ? 'with the index' : 'exactly'}`),
+      );
+      const head = h('tr', {}, ...['#', 'Name', 'Season', 'Level', 'Pos', 'Age', 'Likeness', 'Coverage', ...extra.map((c) => c.title), 'Alike', 'Apart'].map((t) => h('th', { scope: 'col' }, t)));
+      const label = (name: string): string => dims.find((d) => d.name === name)?.label ?? name;
+      const body = result.comps.map((c, i) => {
+        const bar = h('span', { class: 'bar' });
+        bar.style.width = `${Math.max(0, Math.min(100, c.likeness))}%`;
+        const tr = h(
+          'tr',
+          { tabindex: '0' },
+          h('td', { class: 'num' }, String(c.rank)),
+          h('td', {}, c.name),
+          h('td', { class: 'num' }, String(c.season)),
+          h('td', {}, c.level),
+          h('td', {}, c.position),
+          h('td', { class: 'num' }, c.age === null ? '—' : String(c.age)),
+          h('td', { class: 'num likeness' }, h('span', { class: 'bar-track' }, bar), fmt(c.likeness, 1)),
+          h('td', { class: 'num' }, `${Math.round(c.coverage * 100)}%`),
+          ...extra.map((x) => {
+            const v = x.value(c, i);
+            return h('td', { class: typeof v === 'number' ? 'num' : '' }, v === null ? '—' : String(v));
+          }),
+          h('td', { class: 'alike' }, c.alike.map(label).join(', ')),
+          h('td', { class: 'apart' }, c.apart.map(label).join(', ')),
+        );
+        const pick = (): void => void selectComp(result, dims, i);
+        tr.addEventListener('click', pick);
+        tr.addEventListener('keydown', (ev) => {
+          if (ev.key === 'Enter' || ev.key === ' ') {
+            ev.preventDefault();
+            pick();
+          }
+        });
+        return tr;
+      });
+      table.replaceChildren(h('thead', {}, head), h('tbody', {}, ...body));
+      if (result.comps.length === 0) table.append(h('tbody', {}, h('tr', {}, h('td', { colspan: String(head.children.length) }, 'No comp passes the filters.'))));
+      csvButton.disabled = false;
+      jsonButton.disabled = false;
+      const highlights: Highlight[] = result.comps.map((c) => ({ playerId: c.player_id, season: c.season, level: c.level, role: 'comp', rank: c.rank }));
+      if (q.kind === 'player' && q.player_id !== null && q.season !== null && q.level !== null) {
+        highlights.push({ playerId: q.player_id, season: q.season, level: q.level, role: 'target', rank: null });
+      }
+      const drawMap = fetchMap(q.group).then((map) => renderChart(mapChart, poolMapSpec(map, highlights), `map of the ${q.group} pool with the target and comps`));
+      await Promise.all([selectComp(result, dims, 0), drawMap]);
+    },
+  };
+}
