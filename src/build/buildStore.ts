@@ -12,6 +12,10 @@ import { writeStore } from '../store/writeStore.ts';
 import { float32ToBytes } from '../store/float32Bytes.ts';
 import { indexVector } from '../query/indexVector.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
+import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.ts';
+import { embedProfiles, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
+import { stageCharts } from './stageCharts.ts';
+import { chartsFolderOf } from '../embed/groupEmbeddingFile.ts';
 
 export const DEFAULT_INDEX_PARAMS: IndexParams = { M: 16, efConstruction: 100, ef: 128, seed: 100 };
 
@@ -22,6 +26,8 @@ export interface BuildOptions {
   readonly rejectsPath?: string;
   readonly profile?: ProfileOptions;
   readonly index?: IndexParams;
+  /** The learned embedding to rank comps in (default none: the weighted input space). */
+  readonly embed?: EmbedSettingsInput;
   readonly onProgress?: (stage: string, done: number, total: number) => void;
 }
 
@@ -33,6 +39,12 @@ export interface BuildSummary {
   readonly profiles: Readonly<Partial<Record<PositionGroup, number>>>;
   readonly skipped: ProfileSet['skipped'];
   readonly seconds: number;
+  /** The ranking space, and per embedded group its code size and fitting time (absent for the input space). */
+  readonly embedding?: {
+    readonly space: 'pca' | 'autoencoder';
+    readonly groups: Readonly<Partial<Record<PositionGroup, { readonly dim: number; readonly seconds: number }>>>;
+    readonly chartsDir: string;
+  };
 }
 
 /**
@@ -60,36 +72,56 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
   files.set('players.json', JSON.stringify(playersFile(roster, playerIndex)));
   const indexParams = options.index ?? DEFAULT_INDEX_PARAMS;
   const counts: Partial<Record<PositionGroup, number>> = {};
+  const embed = resolveEmbedSettings(options.embed ?? {});
+  const charts = new Map<string, string>();
+  const embedded: Partial<Record<PositionGroup, { dim: number; seconds: number }>> = {};
   const scratch = await mkdtemp(join(tmpdir(), 'kindred-index-'));
   try {
     let done = 0;
     for (const [group, g] of profiles.groups) {
-      progress(`index ${group}`, done, profiles.groups.size);
       const names = groupFileNames(group);
-      const vectors = weightedVectors(g);
-      const d = g.dims.length;
+      let e: EmbeddedGroup | null = null;
+      if (embed.method !== 'none') {
+        progress(`embedding ${group}`, done, profiles.groups.size);
+        e = await embedProfiles(g, embed);
+        for (const [name, content] of e.files) files.set(name, content);
+        for (const [name, svg] of e.charts) charts.set(name, svg);
+        embedded[group] = { dim: e.dim, seconds: e.seconds };
+      }
+      progress(`index ${group}`, done, profiles.groups.size);
+      const vectors = e ? e.vectors : weightedVectors(g);
+      const d = e ? e.dim : g.dims.length;
       const index = GuardedIndex.build(vectors, d, indexParams);
       const indexPath = join(scratch, names.index);
       index.save(indexPath);
       files.set(names.index, await readFile(indexPath));
       files.set(names.raw, float32ToBytes(g.raw));
       files.set(names.z, float32ToBytes(g.z));
-      files.set(names.json, JSON.stringify(groupFile(g, playerIndex, roster.levels, { ...indexParams, dim: d, count: g.meta.length })));
+      const gf = groupFile(g, playerIndex, roster.levels, { ...indexParams, dim: d, count: g.meta.length });
+      files.set(names.json, JSON.stringify(e ? { ...gf, embedding: { space: e.space, dim: e.dim } } : gf));
       counts[group] = g.meta.length;
       done++;
     }
     progress('writing store', 0, 1);
-    await writeStore(storeDir, {
-      params: {
-        roster: rosterDir,
-        lenient: options.lenient,
-        profile: options.profile ?? DEFAULT_PROFILE_OPTIONS,
-        index: indexParams,
-        space: 'input',
-        groups: counts,
-      },
-      files,
-    });
+    const staged = await stageCharts(chartsFolderOf(storeDir), charts);
+    try {
+      await writeStore(storeDir, {
+        params: {
+          roster: rosterDir,
+          lenient: options.lenient,
+          profile: options.profile ?? DEFAULT_PROFILE_OPTIONS,
+          index: indexParams,
+          space: embed.method === 'none' ? 'input' : embed.method,
+          ...(embed.method === 'none' ? {} : { embedding: settingsRecord(embed) }),
+          groups: counts,
+        },
+        files,
+      });
+    } catch (error) {
+      await staged.discard();
+      throw error;
+    }
+    await staged.commit();
   } finally {
     await rm(scratch, { recursive: true, force: true });
   }
@@ -101,6 +133,7 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
     profiles: counts,
     skipped: profiles.skipped,
     seconds: (performance.now() - started) / 1000,
+    ...(embed.method === 'none' ? {} : { embedding: { space: embed.method, groups: embedded, chartsDir: chartsFolderOf(storeDir) } }),
   };
 }
 

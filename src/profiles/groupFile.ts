@@ -36,6 +36,11 @@ export const groupFileSchema = z.strictObject({
   /** Per dimension: [stratum key, mean, sd, n, first season, last season]. */
   strata: z.record(z.string(), z.array(z.tuple([z.string(), z.number(), z.number(), z.number(), z.number(), z.number()]))),
   index: z.strictObject({ M: z.number(), efConstruction: z.number(), ef: z.number(), seed: z.number(), dim: z.number(), count: z.number() }),
+  /**
+   * Present when comps are ranked in a learned space: its kind and code size (the index then holds the
+   * codes, `index.dim` = `dim`). The model, codes and summary are `group-<G>.{model.json,codes.f64,embedding.json}`.
+   */
+  embedding: z.strictObject({ space: z.enum(['pca', 'autoencoder']), dim: z.number().int().positive() }).optional(),
 });
 
 export type GroupFile = z.infer<typeof groupFileSchema>;

@@ -3,6 +3,7 @@ import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
 import type { GuardedIndex } from '../index/GuardedIndex.ts';
+import type { StoredEmbedding } from './StoredEmbedding.ts';
 
 export interface StoredPlayer {
   readonly playerId: string;
@@ -35,6 +36,8 @@ export interface StoredGroup {
   /** Per dimension, `${season}|${level}|${scope}` to stats. */
   readonly strata: ReadonlyMap<string, ReadonlyMap<string, StratumStats>>;
   readonly index: GuardedIndex;
+  /** The learned space comps are ranked in, when the store was built with one (the index then holds its codes). */
+  readonly embedding?: StoredEmbedding;
 }
 
 export interface ProfileStore {

@@ -9,6 +9,11 @@ import type { ProfileStore, StoredGroup } from './ProfileStore.ts';
 import type { Target } from './Target.ts';
 import type { Comp, CompsResult, QueryEcho } from './types.ts';
 import { userWeights, type WeightPreset } from './weightPresets.ts';
+import type { StoredEmbedding } from './StoredEmbedding.ts';
+import { attributeEmbedded } from './attributeEmbedded.ts';
+import { explainEmbeddedComp } from './explainEmbeddedComp.ts';
+import { codeDistance2 } from './codeDistance2.ts';
+import type { AttributedComp } from './AttributedComp.ts';
 
 export interface CompsOptions {
   readonly k: number;
@@ -23,6 +28,12 @@ export interface CompsOptions {
   readonly weighting: 'redundancy' | 'plain';
   /** Comps must share at least this much of the target's weight (0 to 1). */
   readonly minCoverage: number;
+  /**
+   * `store` (the default when absent): rank in the store's learned space when the group has one and the
+   * weighting is the default (a learned space cannot take per-dimension weights, so other weightings
+   * are answered in the input space, and say so in `query.space`); `input`: always the input space.
+   */
+  readonly space?: 'store' | 'input';
 }
 
 export const DEFAULT_COMPS_OPTIONS: CompsOptions = {
@@ -38,6 +49,8 @@ export const DEFAULT_COMPS_OPTIONS: CompsOptions = {
 
 /** Below this share of the group's weight the target is searched exactly: the index would mislead. */
 const INDEX_MIN_TARGET_COVERAGE = 0.75;
+/** Fewest candidates the index proposes for the exact re-rank. */
+const CANDIDATES_MIN = 200;
 /** A pool this small is scanned exactly: faster than a filtered index search, and exact. */
 const INDEX_MIN_POOL = 2000;
 
@@ -81,10 +94,15 @@ export function findCompsWithRows(
   }
   const defaultMetric = options.weighting === 'redundancy' && options.preset === 'balanced' && options.weightOverrides.size === 0;
   const groupWeight = weights.reduce((a, b) => a + b, 0);
-  const useIndex = !options.exact && defaultMetric && wT / groupWeight >= INDEX_MIN_TARGET_COVERAGE && count >= INDEX_MIN_POOL;
+  const emb = embeddedSpaceOf(g, options, defaultMetric);
+  const targetCode = emb ? emb.encode(target.z) : null;
+  const useIndex = emb
+    ? !options.exact && count >= INDEX_MIN_POOL
+    : !options.exact && defaultMetric && !g.embedding && wT / groupWeight >= INDEX_MIN_TARGET_COVERAGE && count >= INDEX_MIN_POOL;
 
   const score = (row: number): Scored => {
     const p = missingAwareDistance(target.z, g.z, row * g.d, weights, wT);
+    if (emb && targetCode) return { row, d2: codeDistance2(targetCode, emb.codes, row * emb.dim), coverage: p.coverage };
     return { row, d2: p.d2, coverage: p.coverage };
   };
   const rank = (rows: Iterable<number>): Scored[] => {
@@ -99,9 +117,9 @@ export function findCompsWithRows(
 
   let ranked: Scored[] = [];
   if (useIndex) {
-    const q = new Float32Array(g.d);
-    indexVector(target.z, 0, Float64Array.from(g.redundancy, Math.sqrt), q, 0);
-    let c = Math.min(count, Math.max(200, 20 * options.k));
+    const q = targetCode ? Float32Array.from(targetCode) : new Float32Array(g.d);
+    if (!targetCode) indexVector(target.z, 0, Float64Array.from(g.redundancy, Math.sqrt), q, 0);
+    let c = Math.min(count, options.candidates ?? Math.max(CANDIDATES_MIN, 20 * options.k));
     for (;;) {
       const hits = g.index.search(q, c, (label) => mask[label] === 1);
       ranked = rank(hits.labels);
@@ -115,11 +133,13 @@ export function findCompsWithRows(
   }
 
   const comps: Comp[] = ranked.slice(0, options.k).map((s, i) => {
-    const ex = explainComp(g.dims, weights, target.z, target.raw, g.z, g.raw, s.row * g.d);
+    const inputEx = explainComp(g.dims, weights, target.z, target.raw, g.z, g.raw, s.row * g.d);
     const player = store.players[g.player[s.row] as number];
     const distance = Math.sqrt(s.d2);
     const age = g.age[s.row] as number;
-    return {
+    const attribution = emb ? attributeEmbedded(emb.encode, target.z, Float64Array.from(g.z.subarray(s.row * g.d, (s.row + 1) * g.d)), s.row + 1) : null;
+    const ex = emb && attribution ? explainEmbeddedComp(inputEx, attribution, emb.drivers, g.dims) : inputEx;
+    const comp: Comp = {
       rank: i + 1,
       player_id: player?.playerId ?? '',
       name: player?.name ?? '',
@@ -127,17 +147,25 @@ export function findCompsWithRows(
       level: store.levels[g.level[s.row] as number] ?? '',
       position: g.position[s.row] ?? 'DH',
       age: Number.isNaN(age) ? null : age,
-      likeness: round(likeness(distance, wT), 1),
+      likeness: round(likeness(distance, emb ? emb.pairScale : wT), 1),
       distance: round(distance, 4),
       coverage: round(s.coverage, 3),
       dimensions: ex.dimensions,
       alike: ex.alike,
       apart: ex.apart,
     };
+    if (!attribution) return comp;
+    const attributed: AttributedComp = {
+      ...comp,
+      attribution_total: attribution.total,
+      attribution_method: attribution.method,
+      attribution_error: attribution.standardError.reduce((a, b) => Math.max(a, b), 0),
+    };
+    return attributed;
   });
 
   const result: CompsResult = {
-    query: echoTarget(store, g, target, options, useIndex),
+    query: echoTarget(store, g, target, options, useIndex, emb ? emb.space : 'input'),
     pool: {
       group_size: g.n,
       eligible: count,
@@ -163,7 +191,13 @@ function onePerPlayer(sorted: readonly Scored[], g: StoredGroup): Scored[] {
 
 const round = (x: number, digits: number): number => Number(x.toFixed(digits));
 
-function echoTarget(store: ProfileStore, g: StoredGroup, t: Target, options: CompsOptions, usedIndex: boolean): QueryEcho {
+/** The learned space a query is answered in, or null for the input space (see CompsOptions.space). */
+export function embeddedSpaceOf(g: StoredGroup, options: CompsOptions, defaultMetric: boolean): StoredEmbedding | null {
+  if (!g.embedding || options.space === 'input' || !defaultMetric) return null;
+  return g.embedding;
+}
+
+function echoTarget(store: ProfileStore, g: StoredGroup, t: Target, options: CompsOptions, usedIndex: boolean, space: QueryEcho['space']): QueryEcho {
   const profile: Record<string, number> = {};
   g.dims.forEach((d, j) => {
     const v = t.raw[j] as number;
@@ -182,7 +216,7 @@ function echoTarget(store: ProfileStore, g: StoredGroup, t: Target, options: Com
     profile,
     k: options.k,
     method: usedIndex ? 'hnsw' : 'exact',
-    space: 'input',
+    space,
   };
 }
 

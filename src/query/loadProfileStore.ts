@@ -7,6 +7,7 @@ import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.t
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
 import type { ProfileStore, StoredGroup, StoredPlayer } from './ProfileStore.ts';
 import type { z } from 'zod';
+import { loadGroupEmbedding } from './loadGroupEmbedding.ts';
 
 function parseJson<T>(text: string, schema: z.ZodType<T>, dir: string, name: string): T {
   let value: unknown;
@@ -60,7 +61,10 @@ export async function loadProfileStore(dir: string): Promise<ProfileStore> {
     if (raw.length !== gf.n * d || zz.length !== gf.n * d || lengths.some((l) => l !== gf.n) || gf.redundancy.length !== d || gf.reliability.length !== d) {
       throw new StoreError('kindred.store.corrupt', `${dir}/${names.json}: sizes do not match (${gf.n} rows x ${d} dimensions); rebuild the store`, { file: names.json });
     }
-    if (gf.index.dim !== d || gf.index.count !== gf.n) {
+    const embedding = gf.embedding
+      ? await loadGroupEmbedding(store, group, { space: gf.embedding.space, dim: gf.embedding.dim, d, n: gf.n, dims: gf.dims.map((x) => x.name) })
+      : undefined;
+    if (gf.index.dim !== (embedding ? embedding.dim : d) || gf.index.count !== gf.n) {
       throw new StoreError('kindred.store.corrupt', `${dir}/${names.json}: index metadata does not match the profiles; rebuild the store`, { file: names.json });
     }
     const index = GuardedIndex.load(store.path(names.index), gf.index);
@@ -86,6 +90,7 @@ export async function loadProfileStore(dir: string): Promise<ProfileStore> {
       z: zz,
       strata,
       index,
+      ...(embedding ? { embedding } : {}),
     });
   }
   return { dir, params: store.manifest.params, levels: pf.levels, players, playerById, salaries, groups };

@@ -6,12 +6,30 @@ import { loadColumnMap } from '../../ingest/loadColumnMap.ts';
 import { DEFAULT_STORE } from '../defaults.ts';
 import { z } from 'zod';
 import { UsageError } from '../../errors/KindredError.ts';
+import { addEmbedOptions, embedSettingsFrom } from './embedOptions.ts';
 
 const buildOptionsSchema = z.object({
   store: z.string(),
   lenient: z.boolean(),
   columns: z.string().optional(),
   rejects: z.string().optional(),
+  embed: z.enum(['none', 'pca', 'autoencoder']),
+  seed: z.number(),
+  pcaVariance: z.number(),
+  hidden: z.array(z.number()).optional(),
+  latent: z.union([z.number(), z.literal('search')]),
+  activation: z.enum(['tanh', 'relu', 'identity']),
+  learningRate: z.number(),
+  batch: z.number(),
+  maxEpochs: z.number(),
+  patience: z.number(),
+  minDelta: z.number(),
+  l2: z.number(),
+  l1: z.number(),
+  dropout: z.number(),
+  valFraction: z.number(),
+  margin: z.number(),
+  searchRows: z.number(),
 });
 
 /** The build summary: rows read and rejected per file, profiles per group, time. */
@@ -23,6 +41,10 @@ export function formatBuildSummary(s: BuildSummary): string {
   const groups = Object.entries(s.profiles).map(([g, n]) => `${g} ${n.toLocaleString('en-US')}`);
   lines.push(`Profiles: ${groups.join(', ')}`);
   const k = s.skipped;
+  if (s.embedding) {
+    const sizes = Object.entries(s.embedding.groups).map(([g, e]) => `${g} ${e.dim} (${e.seconds.toFixed(1)} s)`);
+    lines.push(`Embedding: ${s.embedding.space}, code size per group ${sizes.join(', ')}; charts in ${s.embedding.chartsDir}`);
+  }
   lines.push(
     `Not profiled: ${k.hittersBelowMinimum.toLocaleString('en-US')} hitter seasons under the PA minimum, ${k.pitchersBelowMinimum.toLocaleString('en-US')} pitcher seasons under the BF minimum, ${k.pitchersBatting.toLocaleString('en-US')} pitchers' batting lines`,
   );
@@ -30,14 +52,14 @@ export function formatBuildSummary(s: BuildSummary): string {
 }
 
 export function buildCommand(io: CliIo): Command {
-  return new Command('build')
+  const cmd = new Command('build')
     .description('read a roster folder of CSV files and write a store of profiles and indexes')
     .argument('<roster-dir>', 'folder with players.csv, batting.csv, fielding.csv, pitching.csv, contracts.csv')
     .option('--store <dir>', 'store folder to write (replaced only when the build succeeds)', DEFAULT_STORE)
     .option('--lenient', 'skip bad rows (each written with its reason to a rejects file) instead of stopping', false)
     .option('--columns <map.json>', 'map your export\u2019s file and column names to the canonical ones')
-    .option('--rejects <file>', 'where --lenient writes skipped rows (default <store>.rejects.csv)')
-    .action(async (rosterDir: string, raw: unknown) => {
+    .option('--rejects <file>', 'where --lenient writes skipped rows (default <store>.rejects.csv)');
+  return addEmbedOptions(cmd).action(async (rosterDir: string, raw: unknown) => {
       const parsed = buildOptionsSchema.safeParse(raw);
       if (!parsed.success) throw new UsageError(`bad build options: ${parsed.error.issues[0]?.message ?? ''}`);
       const o = parsed.data;
@@ -55,6 +77,7 @@ export function buildCommand(io: CliIo): Command {
           lenient: o.lenient,
           ...(columnMap ? { columnMap } : {}),
           ...(o.rejects !== undefined ? { rejectsPath: o.rejects } : {}),
+          embed: embedSettingsFrom(o),
           onProgress: (stage, done, total) => {
             if (bar) {
               bar.setTotal(Math.max(total, done, 1));
