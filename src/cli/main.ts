@@ -6,6 +6,7 @@ import { buildCommand } from './commands/buildCommand.ts';
 import { compsCommand } from './commands/compsCommand.ts';
 import { dimsCommand } from './commands/dimsCommand.ts';
 import { demoCommand } from './commands/demoCommand.ts';
+import { embeddingCommand } from './commands/embeddingCommand.ts';
 import { serveCommand } from './commands/serveCommand.ts';
 
 /** Most input problems printed one per line before "and N more". */
@@ -26,7 +27,7 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
   const setExit = (code: number): void => {
     exitCode = code;
   };
-  const commands = [buildCommand(io), compsCommand(io, setExit), dimsCommand(io), demoCommand(io), serveCommand(io)];
+  const commands = [buildCommand(io), compsCommand(io, setExit), dimsCommand(io), demoCommand(io), serveCommand(io), embeddingCommand(io)];
   for (const c of commands) {
     c.exitOverride().configureOutput({ writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s) });
     program.addCommand(c);

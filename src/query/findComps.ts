@@ -34,6 +34,8 @@ export interface CompsOptions {
    * are answered in the input space, and say so in `query.space`); `input`: always the input space.
    */
   readonly space?: 'store' | 'input';
+  /** Candidates the index proposes for the exact re-rank (default max(CANDIDATES_MIN, 20 k)). */
+  readonly candidates?: number;
 }
 
 export const DEFAULT_COMPS_OPTIONS: CompsOptions = {
