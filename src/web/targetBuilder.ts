@@ -36,7 +36,7 @@ export function targetBuilder(): TargetBuilder {
         const use = h('input', { type: 'checkbox', id: `want-use-${d.name}`, 'data-dim': d.name, class: 'want-use' });
         const grade = h('input', { type: 'range', min: '20', max: '80', step: '5', value: '50', id: `want-grade-${d.name}`, 'aria-label': `${d.label} grade` });
         const shown = h('output', { for: grade.id, class: 'grade-value' }, '50');
-        const natural = h('input', { type: 'text', inputmode: 'decimal', id: `want-value-${d.name}`, placeholder: d.unit, 'aria-label': `${d.label} in ${d.unit}`, class: 'want-value' });
+        const natural = h('input', { type: 'text', inputmode: 'decimal', id: `want-value-${d.name}`, placeholder: 'value', title: d.unit, 'aria-label': `${d.label} in ${d.unit}`, class: 'want-value' });
         grade.addEventListener('input', () => {
           shown.textContent = grade.value;
           use.checked = true;

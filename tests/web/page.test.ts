@@ -1,0 +1,186 @@
+/**
+ * The page end to end in headless Chromium (Debian's /usr/bin/chromium driven by playwright-core):
+ * search a player, run each job, check the table, the charts and the exports against the API.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { mkdir, readFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { createServer, type RunningServer } from '../../src/server/createServer.ts';
+import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import type { CompsResult } from '../../src/query/types.ts';
+import { buildDemoStore, tempDir } from '../server/serverFixture.ts';
+import { ensureWebBuilt } from './ensureWebBuilt.ts';
+
+const ARTIFACTS = join(process.cwd(), 'tests', '.artifacts');
+const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run', '--disable-sync', '--disable-quic'];
+
+let srv: RunningServer;
+let browser: Browser;
+let context: BrowserContext;
+let page: Page;
+let store: ProfileStore;
+let remove: () => Promise<void> = async () => {};
+const problems: string[] = [];
+
+async function api(path: string): Promise<CompsResult> {
+  const r = await fetch(new URL(path, srv.url));
+  expect(r.status).toBe(200);
+  return (await r.json()) as CompsResult;
+}
+
+/** A catcher whose name no other player has, and the first four letters of his last name. */
+function uniqueCatcher(): { id: string; name: string; part: string } {
+  const counts = new Map<string, number>();
+  for (const p of store.players) counts.set(p.name, (counts.get(p.name) ?? 0) + 1);
+  const g = store.groups.get('C');
+  const seasonsOf = (i: number): number => (g ? Array.from(g.player).filter((p) => p === i).length : 0);
+  const i = store.players.findIndex((p, idx) => counts.get(p.name) === 1 && seasonsOf(idx) >= 2);
+  const p = store.players[i];
+  if (!p) throw new Error('the demo store has no catcher with a unique name and two seasons');
+  return { id: p.playerId, name: p.name, part: (p.name.split(' ')[1] ?? p.name).slice(0, 4) };
+}
+
+async function marks(selector: string): Promise<number> {
+  return page.locator(`${selector} svg .role-mark path, ${selector} svg .role-mark line, ${selector} svg .role-mark text`).count();
+}
+
+beforeAll(async () => {
+  const t = await tempDir('kindred-web-');
+  remove = t.remove;
+  const storeDir = join(t.dir, 'store');
+  await Promise.all([ensureWebBuilt(), buildDemoStore(storeDir), mkdir(ARTIFACTS, { recursive: true })]);
+  store = await loadProfileStore(storeDir);
+  srv = await createServer({ storeDir, port: 0 });
+  browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS });
+  context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 1000 } });
+  page = await context.newPage();
+  page.on('console', (m) => {
+    if (m.type() === 'error') problems.push(`console: ${m.text()}`);
+  });
+  page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
+  page.on('requestfailed', (r) => problems.push(`request failed: ${r.url()}`));
+  page.on('request', (r) => {
+    if (!r.url().startsWith(srv.url) && !r.url().startsWith('blob:')) problems.push(`request off the server: ${r.url()}`);
+  });
+  await page.goto(srv.url);
+  await page.waitForSelector('body[data-ready="true"]');
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await srv?.close();
+  await remove();
+});
+
+describe('the comps view', () => {
+  it('suggests players as a name is typed and shows the chosen one\'s comps, table and charts', async () => {
+    const who = uniqueCatcher();
+    await page.fill('#player-input', who.part);
+    const option = page.locator('#player-suggestions li[role="option"]', { hasText: who.name });
+    await option.waitFor();
+    await option.click();
+    expect(await page.inputValue('#player-input')).toBe(who.name);
+    const seasons = await page.locator('#player-season option').allTextContents();
+    expect(seasons.length).toBeGreaterThanOrEqual(2);
+    const second = await page.locator('#player-season option').nth(1).getAttribute('value');
+    await page.selectOption('#player-season', second ?? '');
+    await page.click('#run');
+    await page.waitForSelector('#comps-table tbody tr');
+    await page.waitForSelector('#map-chart svg');
+    const [season, level, position] = (second ?? '').split('|');
+    const expected = await api(`/api/comps?player=${who.id}&season=${season}&level=${level}&position=${position}`);
+    const names = await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents();
+    expect(names).toEqual(expected.comps.map((c) => c.name));
+    expect(await page.textContent('#summary')).toContain(who.name);
+    const dimsShown = expected.comps[0]?.dimensions.filter((d) => d.target_grade !== null && d.comp_grade !== null).length ?? 0;
+    expect(await page.locator('#grade-chart svg .mark-symbol.role-mark path').count()).toBe(2 * dimsShown);
+    expect(await page.locator('#grade-chart svg .mark-text.role-mark text').count()).toBe((expected.comps[0]?.alike.length ?? 0) + (expected.comps[0]?.apart.length ?? 0));
+    const groupSize = store.groups.get('C')?.n ?? 0;
+    expect(await page.locator('#map-chart svg .mark-symbol.role-mark path').count()).toBe(groupSize);
+    await page.screenshot({ path: join(ARTIFACTS, 'comps.png'), fullPage: true });
+  });
+
+  it('draws the grades of the comp a row is clicked on', async () => {
+    const third = (await page.locator('#comps-table tbody tr').nth(2).locator('td').nth(1).textContent()) ?? '';
+    await page.locator('#comps-table tbody tr').nth(2).click();
+    await page.waitForFunction((name) => document.querySelector('#grade-chart')?.parentElement?.querySelector('figcaption')?.textContent?.includes(name), third);
+    expect(await page.locator('#comps-table tbody tr.selected td:nth-child(2)').textContent()).toBe(third);
+    expect(await marks('#grade-chart')).toBeGreaterThan(0);
+  });
+
+  it('applies the filters and k, and exports the table as CSV and the answer as JSON', async () => {
+    await page.fill('#opt-k', '5');
+    await page.check('input[name="pool-level"][value="AAA"]');
+    await page.check('input[name="pool-level"][value="MLB"]');
+    await page.fill('#opt-age-from', '22');
+    await page.fill('#opt-age-to', '30');
+    await page.click('#run');
+    await page.waitForFunction(() => document.querySelectorAll('#comps-table tbody tr').length === 5);
+    const levels = await page.locator('#comps-table tbody tr td:nth-child(4)').allTextContents();
+    for (const l of levels) expect(['AAA', 'MLB']).toContain(l);
+    const ages = (await page.locator('#comps-table tbody tr td:nth-child(6)').allTextContents()).map(Number);
+    for (const a of ages) expect(a >= 22 && a <= 30).toBe(true);
+
+    const [csvDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-csv')]);
+    expect(csvDownload.suggestedFilename()).toBe('kindred-comps.csv');
+    const csv = await readFile(await csvDownload.path(), 'utf8');
+    const lines = csv.trimEnd().split('\r\n');
+    expect(lines[0]).toBe('rank,player_id,name,season,level,position,age,likeness,distance,coverage,alike,apart');
+    expect(lines.length).toBe(6);
+
+    const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
+    const exported = JSON.parse(await readFile(await jsonDownload.path(), 'utf8')) as CompsResult;
+    expect(exported.comps.length).toBe(5);
+    expect(exported.pool.filters).toEqual({ levels: ['AAA', 'MLB'], age_min: 22, age_max: 30 });
+    expect(lines.slice(1).map((l) => l.split(',')[1])).toEqual(exported.comps.map((c) => c.player_id));
+  });
+
+  it('shows the API\'s message when a parameter is refused', async () => {
+    await page.fill('#opt-weights', 'obpp=2');
+    await page.click('#run');
+    await page.waitForSelector('.message.error');
+    expect(await page.textContent('.message.error')).toMatch(/no dimension "obpp" \(did you mean obp\?\).*kindred\.usage\.badOption/);
+    await page.fill('#opt-weights', '');
+  });
+
+  it('chooses a suggestion with the arrow keys and Enter', async () => {
+    const who = uniqueCatcher();
+    await page.fill('#player-input', '');
+    await page.type('#player-input', who.part);
+    await page.locator('#player-suggestions li[role="option"]').first().waitFor();
+    const firstName = await page.locator('#player-suggestions li[role="option"] .name').first().textContent();
+    await page.press('#player-input', 'ArrowDown');
+    await page.press('#player-input', 'Enter');
+    expect(await page.inputValue('#player-input')).toBe(firstName);
+    expect(await page.locator('#player-suggestions').isHidden()).toBe(true);
+  });
+});
+
+describe('the build-a-target view', () => {
+  it('finds comps for a profile set in grades and natural units', async () => {
+    await page.click('nav button[data-view="target"]');
+    await page.selectOption('#want-position', 'SS');
+    await page.waitForSelector('#want-grade-obp');
+    await page.locator('#want-grade-obp').fill('65');
+    await page.fill('#want-value-iso', '.180');
+    await page.locator('#want-grade-k_pct').fill('40');
+    await page.fill('#opt-k', '10');
+    await page.click('#run');
+    await page.waitForSelector('#comps-table tbody tr');
+    await page.waitForSelector('#map-chart svg');
+    const expected = await api(`/api/comps?want=${encodeURIComponent('k_pct=40g,obp=65g,iso=.180')}&position=SS&pool-level=AAA,MLB&age=22-30`);
+    const names = await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents();
+    expect(names).toEqual(expected.comps.map((c) => c.name));
+    expect(await page.textContent('#summary')).toContain('hand-built SS profile');
+    expect(await page.locator('#grade-chart svg .mark-symbol.role-mark path').count()).toBe(6);
+    await page.screenshot({ path: join(ARTIFACTS, 'target.png'), fullPage: true });
+  });
+});
+
+describe('the page as a whole', () => {
+  it('loaded nothing from outside the server and logged no error', () => {
+    expect(problems.filter((p) => !p.includes('status of 400'))).toEqual([]);
+  });
+});
