@@ -10,4 +10,6 @@ export interface EndpointContext {
 export interface Endpoint {
   readonly methods: readonly ('GET' | 'POST')[];
   readonly answer: (ctx: EndpointContext) => unknown;
+  /** The answer depends only on the store and the query string: kept in the store's answer cache. */
+  readonly cacheable: boolean;
 }

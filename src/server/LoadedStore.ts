@@ -2,19 +2,23 @@ import type { ProfileStore } from '../query/ProfileStore.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { TargetRow } from '../query/selectTargetRow.ts';
 import { poolMap, type PoolMap } from './poolMap.ts';
+import { AnswerCache } from './AnswerCache.ts';
 
 /** A store as the server holds it: the store, when it was loaded, and what is computed from it on demand. */
 export class LoadedStore {
   readonly store: ProfileStore;
   readonly loadedAt: Date;
   readonly generation: number;
+  /** Serialised answers of cacheable endpoints for this store. */
+  readonly answers: AnswerCache;
   readonly #maps = new Map<PositionGroup, PoolMap>();
   #rows: Map<number, TargetRow[]> | undefined;
 
-  constructor(store: ProfileStore, generation: number, loadedAt: Date = new Date()) {
+  constructor(store: ProfileStore, generation: number, cacheEntries: number, loadedAt: Date = new Date()) {
     this.store = store;
     this.generation = generation;
     this.loadedAt = loadedAt;
+    this.answers = new AnswerCache(cacheEntries);
   }
 
   /** The pool map of a group, computed once per loaded store; undefined when the store lacks the group. */

@@ -13,17 +13,20 @@ export type StoreLoader = (dir: string) => Promise<ProfileStore>;
 export class StoreHolder {
   readonly dir: string;
   readonly #load: StoreLoader;
+  readonly #cacheEntries: number;
   #current: LoadedStore;
   #queue: Promise<unknown> = Promise.resolve();
 
-  private constructor(dir: string, first: LoadedStore, load: StoreLoader) {
+  private constructor(dir: string, first: LoadedStore, load: StoreLoader, cacheEntries: number) {
     this.dir = dir;
     this.#current = first;
     this.#load = load;
+    this.#cacheEntries = cacheEntries;
   }
 
-  static async open(dir: string, load: StoreLoader = loadProfileStore): Promise<StoreHolder> {
-    return new StoreHolder(dir, new LoadedStore(await load(dir), 1), load);
+  /** Loads the store; `cacheEntries` answers are kept per loaded store (0: none). */
+  static async open(dir: string, load: StoreLoader = loadProfileStore, cacheEntries = 0): Promise<StoreHolder> {
+    return new StoreHolder(dir, new LoadedStore(await load(dir), 1, cacheEntries), load, cacheEntries);
   }
 
   get current(): LoadedStore {
@@ -33,7 +36,7 @@ export class StoreHolder {
   reload(): Promise<LoadedStore> {
     const next = this.#queue.then(async () => {
       const store = await this.#load(this.dir);
-      this.#current = new LoadedStore(store, this.#current.generation + 1);
+      this.#current = new LoadedStore(store, this.#current.generation + 1, this.#cacheEntries);
       return this.#current;
     });
     this.#queue = next.catch(() => undefined);

@@ -11,6 +11,7 @@ import { StoreHolder, type StoreLoader } from './StoreHolder.ts';
 import type { LoadedStore } from './LoadedStore.ts';
 import type { Endpoint } from './Endpoint.ts';
 import { API_ENDPOINTS } from './apiEndpoints.ts';
+import { cacheKey } from './AnswerCache.ts';
 
 /** Where `npm run build:web` writes the page. */
 export const DEFAULT_WEB_ROOT = fileURLToPath(new URL('../web/dist', import.meta.url));
@@ -47,7 +48,12 @@ export interface ServerOptions {
   /** Where unexpected failures are logged with their stack (default: stderr). */
   readonly log?: (line: string) => void;
   readonly loadStore?: StoreLoader;
+  /** Answers of comps-like queries kept per loaded store (default DEFAULT_CACHE_ENTRIES; 0: none). */
+  readonly cacheEntries?: number;
 }
+
+/** An answer is about 20 KB: some 20 MB at most. */
+export const DEFAULT_CACHE_ENTRIES = 1000;
 
 export interface RunningServer {
   readonly server: http.Server;
@@ -67,7 +73,7 @@ export interface RunningServer {
 export async function createServer(options: ServerOptions): Promise<RunningServer> {
   const limits: ServerLimits = { ...DEFAULT_LIMITS, ...options.limits };
   const log = options.log ?? ((line: string) => process.stderr.write(line + '\n'));
-  const holder = await StoreHolder.open(options.storeDir, options.loadStore);
+  const holder = await StoreHolder.open(options.storeDir, options.loadStore, options.cacheEntries ?? DEFAULT_CACHE_ENTRIES);
   const files = await loadStaticFiles(options.webRoot ?? DEFAULT_WEB_ROOT);
   let hosts: ReadonlySet<string> = new Set();
 
@@ -105,7 +111,18 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
         const allowed: readonly string[] = endpoint.methods;
         const ok = allowed.includes(method) || (method === 'HEAD' && allowed.includes('GET'));
         if (!ok) throw new HttpError(405, 'kindred.http.methodNotAllowed', `${path} takes ${allowed.join(', ')}, not ${method}`, { Allow: allowed.join(', ') });
-        sendJson(res, method, 200, await endpoint.answer({ holder, query }));
+        if (!endpoint.cacheable) {
+          sendJson(res, method, 200, JSON.stringify(await endpoint.answer({ holder, query })));
+          return;
+        }
+        const loaded = holder.current;
+        const key = cacheKey(path, query);
+        let text = loaded.answers.get(key);
+        if (text === undefined) {
+          text = JSON.stringify(await endpoint.answer({ holder, query }));
+          loaded.answers.set(key, text);
+        }
+        sendJson(res, method, 200, text);
         return;
       }
       if (path.startsWith('/api/')) throw new HttpError(404, 'kindred.http.notFound', `no endpoint ${path}; known: ${[...API_ENDPOINTS.keys()].join(', ')}`);
@@ -119,7 +136,7 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
       if (r.unexpected) log(`kindred serve: ${method} ${req.url ?? ''}: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
       for (const [k, v] of Object.entries(r.headers)) res.setHeader(k, v);
       if (!req.complete) res.setHeader('Connection', 'close');
-      sendJson(res, method, r.status, r.body);
+      sendJson(res, method, r.status, JSON.stringify(r.body));
     }
   }
 
@@ -150,8 +167,7 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
   };
 }
 
-function sendJson(res: ServerResponse, method: string, status: number, body: unknown): void {
-  const text = JSON.stringify(body);
+function sendJson(res: ServerResponse, method: string, status: number, text: string): void {
   res.writeHead(status, {
     'Content-Type': 'application/json; charset=utf-8',
     'Content-Length': Buffer.byteLength(text),

@@ -78,6 +78,9 @@ describe('POST /api/reload', () => {
     const host = new URL(srv.url).host;
     try {
       const info1 = json(await send(srv.url, '/api/info', { headers: { Host: host } }));
+      const compsPath = '/api/comps?want=obp%3D60g&position=SS';
+      const comps1 = json(await send(srv.url, compsPath, { headers: { Host: host } })) as { pool: { group_size: number } };
+      expect(comps1.pool.group_size).toBe(groupSize(info1));
       await rm(dir, { recursive: true });
       await cp(strictStore, dir, { recursive: true });
       const reloaded = await send(srv.url, '/api/reload', { method: 'POST', headers: { Host: host, Origin: `http://${host}` } });
@@ -85,6 +88,8 @@ describe('POST /api/reload', () => {
       expect(groupSize(json(reloaded))).toBeLessThan(groupSize(info1) ?? 0);
       const info2 = json(await send(srv.url, '/api/info', { headers: { Host: host } }));
       expect(groupSize(info2)).toBe(groupSize(json(reloaded)));
+      const comps2 = json(await send(srv.url, compsPath, { headers: { Host: host } })) as { pool: { group_size: number } };
+      expect(comps2.pool.group_size).toBe(groupSize(info2));
 
       await rm(join(dir, 'players.json'));
       const failed = await send(srv.url, '/api/reload', { method: 'POST', headers: { Host: host } });

@@ -1,13 +1,19 @@
 import { Command, InvalidArgumentError } from 'commander';
 import type { CliIo } from '../CliIo.ts';
 import { DEFAULT_STORE } from '../defaults.ts';
-import { createServer } from '../../server/createServer.ts';
+import { createServer, DEFAULT_CACHE_ENTRIES } from '../../server/createServer.ts';
+import * as parse from '../parseOptions.ts';
 
 /** A TCP port: 0 (any free port) to 65535. */
 export function port(value: string): number {
   const n = Number(value);
   if (!/^\d{1,5}$/.test(value.trim()) || n > 65535) throw new InvalidArgumentError(`expected a port from 0 to 65535, got "${value}"`);
   return n;
+}
+
+/** 0 or a positive whole number of cached answers. */
+export function cacheSize(value: string): number {
+  return value.trim() === '0' ? 0 : parse.positiveInt(value);
 }
 
 export interface ServeSignals {
@@ -32,8 +38,15 @@ export function serveCommand(io: CliIo, signals: ServeSignals = processSignals):
     .option('--store <dir>', 'store folder made by kindred build', DEFAULT_STORE)
     .option('--port <n>', 'TCP port (0: any free port)', port, 8080)
     .option('--host <address>', 'address to listen on (anything but loopback exposes the store to the network)', '127.0.0.1')
-    .action(async (raw: { store: string; port: number; host: string }) => {
-      const running = await createServer({ storeDir: raw.store, port: raw.port, host: raw.host, log: (line) => io.stderr.write(line + '\n') });
+    .option('--cache <n>', 'answers kept in memory per loaded store (0: none)', cacheSize, DEFAULT_CACHE_ENTRIES)
+    .action(async (raw: { store: string; port: number; host: string; cache: number }) => {
+      const running = await createServer({
+        storeDir: raw.store,
+        port: raw.port,
+        host: raw.host,
+        cacheEntries: raw.cache,
+        log: (line) => io.stderr.write(line + '\n'),
+      });
       io.stdout.write(`Kindred is serving ${running.url} from ${raw.store}\n`);
       io.stderr.write('Ctrl-C stops; SIGHUP or POST /api/reload reloads the store after a rebuild.\n');
       await new Promise<void>((resolve) => {

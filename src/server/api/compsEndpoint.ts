@@ -28,5 +28,6 @@ export function answerComps(store: ProfileStore, query: URLSearchParams): CompsR
 
 export const compsEndpoint: Endpoint = {
   methods: ['GET'],
+  cacheable: true,
   answer: ({ holder, query }) => answerComps(holder.current.store, query),
 };

@@ -19,5 +19,6 @@ export async function answerDims(query: URLSearchParams): Promise<unknown> {
 
 export const dimsEndpoint: Endpoint = {
   methods: ['GET'],
+  cacheable: false,
   answer: ({ query }) => answerDims(query),
 };

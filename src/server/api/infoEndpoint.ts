@@ -40,5 +40,6 @@ export function answerInfo(loaded: LoadedStore, query: URLSearchParams): StoreIn
 
 export const infoEndpoint: Endpoint = {
   methods: ['GET'],
+  cacheable: false,
   answer: ({ holder, query }) => answerInfo(holder.current, query),
 };

@@ -29,5 +29,6 @@ export function answerMap(loaded: LoadedStore, query: URLSearchParams): PoolMap 
 
 export const mapEndpoint: Endpoint = {
   methods: ['GET'],
+  cacheable: false,
   answer: ({ holder, query }) => answerMap(holder.current, query),
 };

@@ -69,5 +69,6 @@ export function answerPlayers(loaded: LoadedStore, query: URLSearchParams): { pl
 
 export const playersEndpoint: Endpoint = {
   methods: ['GET'],
+  cacheable: false,
   answer: ({ holder, query }) => answerPlayers(holder.current, query),
 };

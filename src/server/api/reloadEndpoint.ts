@@ -8,6 +8,7 @@ import { answerInfo, type StoreInfo } from './infoEndpoint.ts';
  */
 export const reloadEndpoint: Endpoint = {
   methods: ['POST'],
+  cacheable: false,
   answer: async ({ holder, query }): Promise<StoreInfo> => {
     parseParameters(query, { specs: new Map(), extra: [] });
     const loaded = await holder.reload();

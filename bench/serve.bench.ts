@@ -1,0 +1,93 @@
+/**
+ * Load test of `kindred serve`: GET /api/comps on the demo store, 20 connections for 20 seconds
+ * (autocannon), rotating over player-seasons of every position group. The server runs as its own
+ * process (`node bin/kindred.js serve --port 0`), as a user would start it; autocannon runs here.
+ * Runs twice: with the server's default answer cache (the 400 targets fit in it, so after the
+ * first round every answer is a hit) and with `--cache 0` (every request computed).
+ * Prints p50 and p99 latency, requests per second, errors and non-2xx answers.
+ * `node --import tsx bench/serve.bench.ts [connections] [seconds]`
+ */
+import { spawn } from 'node:child_process';
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import autocannon from 'autocannon';
+import { buildStore } from '../src/build/buildStore.ts';
+import { DEMO_ROSTER } from '../src/cli/commands/demoCommand.ts';
+import { loadProfileStore } from '../src/query/loadProfileStore.ts';
+
+const connections = Number(process.argv[2] ?? 20);
+const seconds = Number(process.argv[3] ?? 20);
+/** Distinct targets cycled through, spread over the groups in proportion to their size. */
+const TARGETS = 400;
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+const dir = await mkdtemp(join(tmpdir(), 'kindred-serve-bench-'));
+const storeDir = join(dir, 'store');
+await buildStore(DEMO_ROSTER, storeDir, { lenient: false });
+const store = await loadProfileStore(storeDir);
+const paths: string[] = [];
+const total = [...store.groups.values()].reduce((a, g) => a + g.n, 0);
+for (const g of store.groups.values()) {
+  const want = Math.max(1, Math.round((TARGETS * g.n) / total));
+  for (let i = 0; i < want; i++) {
+    const row = Math.floor(((i + 0.5) * g.n) / want);
+    const p = store.players[g.player[row] as number];
+    if (!p) continue;
+    const q = new URLSearchParams({
+      player: p.playerId,
+      season: String(g.season[row]),
+      level: store.levels[g.level[row] as number] ?? '',
+      position: g.position[row] ?? 'DH',
+    });
+    paths.push(`/api/comps?${q.toString()}`);
+  }
+}
+
+async function run(label: string, extraArgs: string[]): Promise<void> {
+  const child = spawn(process.execPath, [join(root, 'bin', 'kindred.js'), 'serve', '--store', storeDir, '--port', '0', ...extraArgs], {
+    stdio: ['ignore', 'pipe', 'ignore'],
+  });
+  const url = await new Promise<string>((resolve, reject) => {
+    let out = '';
+    child.stdout.on('data', (c: Buffer) => {
+      out += c.toString('utf8');
+      const m = /serving (http:\/\/\S+)/.exec(out);
+      if (m?.[1]) resolve(m[1]);
+    });
+    child.once('exit', (code) => reject(new Error(`kindred serve exited with ${code ?? 'a signal'} before listening`)));
+  });
+  try {
+    let next = 0;
+    const warm = await fetch(new URL(paths[0] ?? '/api/info', url));
+    if (warm.status !== 200) throw new Error(`warm-up answered ${warm.status}`);
+    const result = await autocannon({
+      url,
+      connections,
+      duration: seconds,
+      requests: [{ setupRequest: (req) => ({ ...req, path: paths[next++ % paths.length] ?? '/api/info' }) }],
+    });
+    const line = (k: string, v: string): void => console.log(`  ${k.padEnd(22)} ${v}`);
+    console.log(`${label}:`);
+    line('latency p50', `${result.latency.p50} ms`);
+    line('latency p99', `${result.latency.p99} ms`);
+    line('latency max', `${result.latency.max} ms`);
+    line('requests / s (mean)', result.requests.average.toFixed(0));
+    line('requests', String(result.requests.total));
+    line('errors', String(result.errors));
+    line('timeouts', String(result.timeouts));
+    line('non-2xx', String(result.non2xx));
+  } finally {
+    child.kill('SIGTERM');
+    await new Promise((r) => child.once('exit', r));
+  }
+}
+
+console.log(`kindred serve: GET /api/comps on the demo store (${total} player-seasons), ${paths.length} targets, ${connections} connections, ${seconds} s each`);
+try {
+  await run('default answer cache', []);
+  await run('no cache (--cache 0)', ['--cache', '0']);
+} finally {
+  await rm(dir, { recursive: true, force: true });
+}
