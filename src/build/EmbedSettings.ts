@@ -29,8 +29,14 @@ export interface AutoencoderSettings {
   readonly searchRows: number;
 }
 
+/** What the embedding is fitted on: the standardised profiles z, or the weighted ones sqrt(w) z (the input space's weights). */
+export type EmbedInput = 'z' | 'weighted';
+
+export const EMBED_INPUTS: readonly EmbedInput[] = ['z', 'weighted'];
+
 export interface EmbedSettings {
   readonly method: EmbedMethod;
+  readonly input: EmbedInput;
   /** Seed of every random choice of the embedding step (split, weights, batches, samples). */
   readonly seed: number;
   /** PCA: smallest cumulative share of variance the kept components reach. */
@@ -61,6 +67,7 @@ export const DEFAULT_AUTOENCODER_SETTINGS: AutoencoderSettings = {
 /** The library default is no embedding (the CLI's default is set in src/cli/commands/buildCommand.ts). */
 export const DEFAULT_EMBED_SETTINGS: EmbedSettings = {
   method: 'none',
+  input: 'weighted',
   seed: 1,
   pcaVariance: 0.9,
   autoencoder: DEFAULT_AUTOENCODER_SETTINGS,
@@ -85,6 +92,7 @@ export function resolveEmbedSettings(input: EmbedSettingsInput = {}): EmbedSetti
   };
   const isCount = (v: number): boolean => Number.isInteger(v) && v >= 0;
   if (!EMBED_METHODS.includes(s.method)) bad('method', s.method, EMBED_METHODS.join(', '));
+  if (!EMBED_INPUTS.includes(s.input)) bad('input', s.input, EMBED_INPUTS.join(', '));
   if (!Number.isFinite(s.seed)) bad('seed', s.seed, 'a finite number');
   if (!(s.pcaVariance > 0 && s.pcaVariance <= 1)) bad('pcaVariance', s.pcaVariance, '0 < share <= 1');
   if (!isCount(s.driverTargets)) bad('driverTargets', s.driverTargets, 'a whole number >= 0');

@@ -3,7 +3,7 @@ import { createRng, shuffleInPlace } from '../embed/createRng.ts';
 import type { Encoder } from '../embed/embeddedDistanceGame.ts';
 import type { EmbeddingDriver } from '../embed/groupEmbeddingFile.ts';
 import { quantileSorted } from '../embed/quantileSorted.ts';
-import { attributeEmbedded } from '../query/attributeEmbedded.ts';
+import { attributeEmbedded, DRIVER_ATTRIBUTION_EFFORT } from '../query/attributeEmbedded.ts';
 
 export interface DriverInput {
   readonly encode: Encoder;
@@ -33,7 +33,7 @@ export interface DriverSummary {
  * "What drives comps in this group": `targets` distinct rows drawn with a seeded generator, for each its
  * `comps` nearest rows in the embedded space (Euclidean between codes, other players only, each player
  * at his closest season, the query's own rule), and the Shapley attribution of every such comp
- * (attributeEmbedded). Per dimension: mean |attribution|, mean, min, quartiles (R-7), max over the comps
+ * (attributeEmbedded, at DRIVER_ATTRIBUTION_EFFORT). Per dimension: mean |attribution|, mean, min, quartiles (R-7), max over the comps
  * in which both sides have it. Cost: targets x (n x dim for the scan + comps attributions).
  */
 export function attributionDrivers(input: DriverInput, targets: number, comps: number, seed: number): DriverSummary {
@@ -62,7 +62,7 @@ export function attributionDrivers(input: DriverInput, targets: number, comps: n
     const nearest = [...best.values()].sort((a, b) => a.d2 - b.d2 || a.row - b.row).slice(0, comps);
     for (const c of nearest) {
       const compZ = Float64Array.from(z.subarray(c.row * d, (c.row + 1) * d));
-      const a = attributeEmbedded(input.encode, targetZ, compZ, c.row + 1);
+      const a = attributeEmbedded(input.encode, targetZ, compZ, c.row + 1, DRIVER_ATTRIBUTION_EFFORT);
       compsSeen++;
       for (let j = 0; j < d; j++) {
         if (Number.isNaN(targetZ[j] ?? NaN) || Number.isNaN(compZ[j] ?? NaN)) continue;

@@ -8,6 +8,7 @@ import { float64ToBytes } from '../store/float64Bytes.ts';
 import type { EmbeddingSpace } from '../embed/EmbeddingModel.ts';
 import { attributionDrivers } from './attributionDrivers.ts';
 import { embedGroup } from './embedGroup.ts';
+import { scaledEncoder } from '../embed/scaledEncoder.ts';
 import type { EmbedSettings } from './EmbedSettings.ts';
 
 /** Random pairs drawn for the likeness scale. */
@@ -27,8 +28,8 @@ export interface EmbeddedGroup {
 }
 
 /**
- * The embedding step of a build for one group: fits the embedding on the group's standardised profiles
- * (embedGroup), encodes every row, measures the likeness scale (pairScale), samples the pool-level
+ * The embedding step of a build for one group: fits the embedding on the group's standardised profiles,
+ * each dimension scaled by sqrt of its weight when `input` is 'weighted' (embedGroup), encodes every row, measures the likeness scale (pairScale), samples the pool-level
  * attribution summary (attributionDrivers), and renders the learning-curve (autoencoder) and driver
  * charts. Deterministic for the settings' seed (timings aside).
  */
@@ -37,10 +38,12 @@ export async function embedProfiles(g: GroupProfiles, settings: EmbedSettings): 
   const n = g.meta.length;
   const d = g.dims.length;
   const players = g.meta.map((m) => m.playerId);
-  const data: EmbedData = { x: Float64Array.from(g.z), n, d, groups: players };
+  const scale = settings.input === 'weighted' ? Float64Array.from(g.redundancy, Math.sqrt) : new Float64Array(d).fill(1);
+  const x = Float64Array.from(g.z, (v, i) => v * (scale[i % d] ?? 1));
+  const data: EmbedData = { x, n, d, groups: players };
   const fitted = embedGroup(data, settings);
   const { dim, codes } = fitted;
-  const encode = (x: Float64Array): Float64Array => fitted.model.model.encode(x);
+  const encode = scaledEncoder((v) => fitted.model.model.encode(v), scale);
   const names = g.dims.map((x) => x.name);
   const drivers = attributionDrivers({ encode, z: g.z, codes, n, d, dim, players, names }, settings.driverTargets, settings.driverComps, settings.seed);
   const chartNames = groupChartNames(g.group);
@@ -59,6 +62,7 @@ export async function embedProfiles(g: GroupProfiles, settings: EmbedSettings): 
     d,
     dim,
     n,
+    input_scale: Array.from(scale),
     pair_scale: n >= 2 ? pairScale(codes, n, dim, PAIR_SCALE_PAIRS, settings.seed) : 1,
     search: { rule: fitted.rule, rows: fitted.rows, chosen_size: dim, search_rows: fitted.searchRows },
     histories: fitted.histories.map((h) => ({
@@ -88,6 +92,7 @@ export async function embedProfiles(g: GroupProfiles, settings: EmbedSettings): 
 export function settingsRecord(s: EmbedSettings): Record<string, unknown> {
   return {
     method: s.method,
+    input: s.input,
     seed: s.seed,
     pcaVariance: s.pcaVariance,
     driverTargets: s.driverTargets,

@@ -1,7 +1,7 @@
 import { UsageError } from '../errors/KindredError.ts';
 import type { CoalitionValue } from './shapley.ts';
 
-/** Maps a profile (length d, NaN allowed) to its code. */
+/** Maps a profile (length d, NaN allowed) to a new code array; must not keep its argument (callers reuse it). */
 export type Encoder = (x: Float64Array) => Float64Array;
 
 function euclidean(a: Float64Array, b: Float64Array): number {
@@ -36,9 +36,10 @@ export function embeddedDistanceGame(encode: Encoder, target: Float64Array, comp
   const base = encode(target);
   const usable = new Uint8Array(d);
   for (let j = 0; j < d; j++) usable[j] = Number.isNaN(target[j] ?? NaN) || Number.isNaN(comp[j] ?? NaN) ? 0 : 1;
+  const mix = new Float64Array(d);
   return (coalition: Uint8Array): number => {
     if (coalition.length !== d) throw new UsageError(`embeddedDistanceGame: coalition of ${coalition.length} (expected ${d})`);
-    const mix = target.slice();
+    mix.set(target);
     for (let j = 0; j < d; j++) if (coalition[j] && usable[j]) mix[j] = comp[j] ?? NaN;
     return euclidean(encode(mix), base);
   };

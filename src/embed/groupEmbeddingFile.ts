@@ -59,6 +59,8 @@ export const groupEmbeddingSchema = z.strictObject({
   /** Code size. */
   dim: z.number().int().positive(),
   n: z.number().int().nonnegative(),
+  /** Multiplier of each input dimension before the model (sqrt of the weights, or all 1 for plain z); see scaledEncoder. */
+  input_scale: z.array(z.number().nonnegative()),
   /** Likeness scale s: half the mean squared embedded distance of random pairs (see src/embed/pairScale.ts). */
   pair_scale: z.number().positive(),
   search: z.strictObject({

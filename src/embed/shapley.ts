@@ -29,14 +29,13 @@ export function exactShapley(n: number, value: CoalitionValue): Float64Array {
   const size = 1 << n;
   const v = new Float64Array(size);
   const size_ = new Uint8Array(size);
+  const coalition = new Uint8Array(n);
   for (let mask = 0; mask < size; mask++) {
-    const coalition = new Uint8Array(n);
     let count = 0;
     for (let i = 0; i < n; i++) {
-      if (mask & (1 << i)) {
-        coalition[i] = 1;
-        count++;
-      }
+      const inside = mask & (1 << i) ? 1 : 0;
+      coalition[i] = inside;
+      count += inside;
     }
     size_[mask] = count;
     v[mask] = value(coalition);
@@ -106,7 +105,7 @@ export function permutationShapley(n: number, value: CoalitionValue, options: Pe
       const hit = memo.get(mask);
       if (hit !== undefined) return hit;
     }
-    const result = value(coalition.slice());
+    const result = value(coalition);
     if (memo && memo.size < MAX_MEMO_ENTRIES) memo.set(mask, result);
     return result;
   };

@@ -16,11 +16,24 @@ export const ATTRIBUTION_SAMPLES = 256;
  * target's; the empty coalition is worth 0, the full one the embedded distance with every dimension
  * that either side lacks left at the target's value). Exact up to EXACT_ATTRIBUTION_UP_TO dimensions in
  * play, else ATTRIBUTION_SAMPLES antithetic permutations seeded by `seed` (the comp's row, so a
- * query's answer is reproducible). The values add up to `total` either way (efficiency).
+ * query's answer is reproducible); `effort` overrides both. The values add up to `total` either way (efficiency).
  *
  * @example
  * attributeEmbedded((x) => x, Float64Array.of(0, 0), Float64Array.of(3, 4), 1).total; // => 5
  */
-export function attributeEmbedded(encode: Encoder, targetZ: Float64Array, compZ: Float64Array, seed: number): DistanceAttribution {
-  return attributeDistance(encode, targetZ, compZ, { exactUpTo: EXACT_ATTRIBUTION_UP_TO, samples: ATTRIBUTION_SAMPLES, seed });
+export function attributeEmbedded(
+  encode: Encoder,
+  targetZ: Float64Array,
+  compZ: Float64Array,
+  seed: number,
+  effort: { readonly exactUpTo: number; readonly samples: number } = { exactUpTo: EXACT_ATTRIBUTION_UP_TO, samples: ATTRIBUTION_SAMPLES },
+): DistanceAttribution {
+  return attributeDistance(encode, targetZ, compZ, { exactUpTo: effort.exactUpTo, samples: effort.samples, seed });
 }
+
+/**
+ * The lighter effort of the build's pool-level summary (attributionDrivers), which attributes about a
+ * thousand comps per group: exact up to 10 dimensions (1,024 encodings), else 128 permutations. A
+ * summary of spreads tolerates the larger sampling error (about 1.4 times that of a query's).
+ */
+export const DRIVER_ATTRIBUTION_EFFORT = { exactUpTo: 10, samples: 128 } as const;

@@ -36,6 +36,11 @@ export interface CompsOptions {
   readonly space?: 'store' | 'input';
   /** Candidates the index proposes for the exact re-rank (default max(CANDIDATES_MIN, 20 k)). */
   readonly candidates?: number;
+  /**
+   * In a learned space, attribute each comp's distance to the dimensions (default true). false skips
+   * it (same comps and distances; no `attribution` fields, and alike / apart from the input space).
+   */
+  readonly attributions?: boolean;
 }
 
 export const DEFAULT_COMPS_OPTIONS: CompsOptions = {
@@ -139,7 +144,7 @@ export function findCompsWithRows(
     const player = store.players[g.player[s.row] as number];
     const distance = Math.sqrt(s.d2);
     const age = g.age[s.row] as number;
-    const attribution = emb ? attributeEmbedded(emb.encode, target.z, Float64Array.from(g.z.subarray(s.row * g.d, (s.row + 1) * g.d)), s.row + 1) : null;
+    const attribution = emb && options.attributions !== false ? attributeEmbedded(emb.encode, target.z, Float64Array.from(g.z.subarray(s.row * g.d, (s.row + 1) * g.d)), s.row + 1) : null;
     const ex = emb && attribution ? explainEmbeddedComp(inputEx, attribution, emb.drivers, g.dims) : inputEx;
     const comp: Comp = {
       rank: i + 1,

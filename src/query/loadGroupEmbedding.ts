@@ -4,6 +4,7 @@ import { GROUP_EMBEDDING_VERSION, groupEmbeddingFileNames, groupEmbeddingSchema 
 import type { OpenStore } from '../store/openStore.ts';
 import { bytesToFloat64 } from '../store/float64Bytes.ts';
 import type { StoredEmbedding } from './StoredEmbedding.ts';
+import { scaledEncoder } from '../embed/scaledEncoder.ts';
 
 const corrupt = (dir: string, file: string, what: string): StoreError =>
   new StoreError('kindred.store.corrupt', `${dir}/${file}: ${what}; rebuild the store`, { file });
@@ -54,6 +55,7 @@ export async function loadGroupEmbedding(
   if (dim !== expected.dim || summary.dim !== expected.dim) problems.push(`code size ${dim} (expected ${expected.dim})`);
   if (codes.length !== expected.n * expected.dim || summary.n !== expected.n) problems.push(`${codes.length} code values (expected ${expected.n} x ${expected.dim})`);
   const driverNames = summary.drivers.dims.map((x) => x.name);
+  if (summary.input_scale.length !== expected.d) problems.push(`${summary.input_scale.length} input scales (expected ${expected.d})`);
   if (driverNames.join(',') !== expected.dims.join(',')) problems.push(`drivers for ${driverNames.join(',')} (expected ${expected.dims.join(',')})`);
   for (const v of codes) {
     if (!Number.isFinite(v)) {
@@ -67,7 +69,7 @@ export async function loadGroupEmbedding(
     space: model.space,
     d: expected.d,
     dim,
-    encode: (x: Float64Array) => encoder.encode(x),
+    encode: scaledEncoder((x) => encoder.encode(x), Float64Array.from(summary.input_scale)),
     codes,
     pairScale: summary.pair_scale,
     drivers: Float64Array.from(summary.drivers.dims, (x) => x.mean_abs),

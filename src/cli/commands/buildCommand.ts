@@ -30,6 +30,8 @@ const buildOptionsSchema = z.object({
   valFraction: z.number(),
   margin: z.number(),
   searchRows: z.number(),
+  embedInput: z.enum(['z', 'weighted']),
+  drivers: z.number(),
 });
 
 /** The build summary: rows read and rejected per file, profiles per group, time. */

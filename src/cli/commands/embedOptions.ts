@@ -1,5 +1,13 @@
 import { InvalidArgumentError, type Command } from 'commander';
-import { DEFAULT_AUTOENCODER_SETTINGS, DEFAULT_EMBED_SETTINGS, EMBED_METHODS, type EmbedMethod, type EmbedSettingsInput } from '../../build/EmbedSettings.ts';
+import {
+  DEFAULT_AUTOENCODER_SETTINGS,
+  DEFAULT_EMBED_SETTINGS,
+  EMBED_INPUTS,
+  EMBED_METHODS,
+  type EmbedInput,
+  type EmbedMethod,
+  type EmbedSettingsInput,
+} from '../../build/EmbedSettings.ts';
 import { ACTIVATIONS, type Activation } from '../../embed/activation.ts';
 
 /**
@@ -61,6 +69,12 @@ function latent(value: string): number | 'search' {
   return wholeNumber(1)(v);
 }
 
+function embedInput(value: string): EmbedInput {
+  const found = EMBED_INPUTS.find((x) => x === value.trim());
+  if (!found) throw new InvalidArgumentError(`expected ${EMBED_INPUTS.join(' or ')}, got "${value}"`);
+  return found;
+}
+
 function activation(value: string): Activation {
   const found = ACTIVATIONS.find((a) => a === value.trim());
   if (!found) throw new InvalidArgumentError(`expected ${ACTIVATIONS.join(', ')}, got "${value}"`);
@@ -87,7 +101,9 @@ export function addEmbedOptions(cmd: Command): Command {
     .option('--dropout <rate>', 'dropout on hidden layers while training', share(true), a.dropout)
     .option('--val-fraction <share>', 'share of rows (whole players) held out for validation', share(true), a.valFraction)
     .option('--margin <share>', 'capacity search: least relative validation gain for the next size', nonNegative, a.margin)
-    .option('--search-rows <n>', 'capacity search on at most this many rows (whole players)', wholeNumber(2), a.searchRows);
+    .option('--search-rows <n>', 'capacity search on at most this many rows (whole players)', wholeNumber(2), a.searchRows)
+    .option('--embed-input <input>', 'fit the embedding on weighted (sqrt of the comps weights times z) or plain z profiles', embedInput, DEFAULT_EMBED_SETTINGS.input)
+    .option('--drivers <targets>', 'random targets (x 10 comps each) for the "what drives comps" summary; 0 = none', wholeNumber(0), DEFAULT_EMBED_SETTINGS.driverTargets);
 }
 
 /** The values commander collected, as build settings. */
@@ -109,12 +125,16 @@ export interface EmbedOptionValues {
   readonly valFraction: number;
   readonly margin: number;
   readonly searchRows: number;
+  readonly embedInput: EmbedInput;
+  readonly drivers: number;
 }
 
 export function embedSettingsFrom(o: EmbedOptionValues): EmbedSettingsInput {
   return {
     method: o.embed,
+    input: o.embedInput,
     seed: o.seed,
+    driverTargets: o.drivers,
     pcaVariance: o.pcaVariance,
     autoencoder: {
       hidden: o.hidden ?? null,
