@@ -16,6 +16,8 @@ import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.t
 import { embedProfiles, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
 import { stageCharts } from './stageCharts.ts';
 import { chartsFolderOf } from '../embed/groupEmbeddingFile.ts';
+import { computeOutcomes } from '../outlook/computeOutcomes.ts';
+import { OUTCOMES_FILE } from '../outlook/outcomesFile.ts';
 
 export const DEFAULT_INDEX_PARAMS: IndexParams = { M: 16, efConstruction: 100, ef: 128, seed: 100 };
 
@@ -70,6 +72,7 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
   const files = new Map<string, Uint8Array | string>();
   const playerIndex = new Map<string, number>();
   files.set('players.json', JSON.stringify(playersFile(roster, playerIndex)));
+  files.set(OUTCOMES_FILE, JSON.stringify(computeOutcomes(roster)));
   const indexParams = options.index ?? DEFAULT_INDEX_PARAMS;
   const counts: Partial<Record<PositionGroup, number>> = {};
   const embed = resolveEmbedSettings(options.embed ?? {});

@@ -1,0 +1,98 @@
+import { QueryError, UsageError } from '../errors/KindredError.ts';
+import { eligibleRows } from '../query/eligibleRows.ts';
+import { findCompsWithRows, type CompsOptions } from '../query/findComps.ts';
+import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { Target } from '../query/Target.ts';
+import { likenessPerMillion } from './likenessPerMillion.ts';
+import type { CheaperComp, CheaperResult } from './types.ts';
+import { valueFrontier } from './valueFrontier.ts';
+
+/** The salary limit: an amount in USD, or a share of the target's salary in his season. */
+export type SalaryLimit = { readonly kind: 'max-salary'; readonly usd: number } | { readonly kind: 'max-share'; readonly share: number };
+
+export interface CheaperOptions {
+  readonly comps: CompsOptions;
+  readonly limit: SalaryLimit;
+}
+
+/** The default limit when none is given: half the target's salary. Project choice. */
+export const DEFAULT_SALARY_LIMIT: SalaryLimit = { kind: 'max-share', share: 0.5 };
+
+/** Salary of a player-season from the store (contracts.csv), or undefined. */
+export function salaryOf(store: ProfileStore, player: number, season: number): number | undefined {
+  return store.salaries.get(player)?.get(season);
+}
+
+/**
+ * Comps who do what the target does for less: the pool is the usual one restricted to player-seasons
+ * with a known salary (contracts.csv, one salary per player and season, whatever the level) at or under
+ * the limit. Player-seasons without a salary are left out and counted, as are those over the limit.
+ * Each comp carries its salary, its likeness per million USD and whether it is on the value frontier
+ * among the listed comps (valueFrontier, on the likeness as shown, in whichever space the comps were ranked).
+ */
+export function findCheaperComps(store: ProfileStore, target: Target, options: CheaperOptions): CheaperResult {
+  const g = store.groups.get(target.group);
+  if (!g) throw new QueryError('kindred.query.emptyPool', `the store has no ${target.group} profiles`, { group: target.group });
+  const targetSalary = target.player >= 0 && target.season !== null ? salaryOf(store, target.player, target.season) : undefined;
+  let limitUsd: number;
+  if (options.limit.kind === 'max-share') {
+    const share = options.limit.share;
+    if (!(share > 0)) throw new UsageError(`--max-share ${share}: expected a share above 0, e.g. 0.5`, { value: share });
+    if (targetSalary === undefined) {
+      const p = target.player >= 0 ? store.players[target.player] : undefined;
+      const who = p ? `${p.playerId} ${p.name} has no salary in ${target.season ?? '?'} (contracts.csv)` : 'a --want profile has no salary';
+      throw new UsageError(`--max-share needs the target's salary, but ${who}; give --max-salary USD instead`, { player_id: p?.playerId ?? '' });
+    }
+    limitUsd = share * targetSalary;
+  } else {
+    if (!(options.limit.usd >= 0)) throw new UsageError(`--max-salary ${options.limit.usd}: expected an amount in USD, 0 or more`, { value: options.limit.usd });
+    limitUsd = options.limit.usd;
+  }
+
+  const exclude = new Set<number>(target.player >= 0 ? [target.player] : []);
+  const before = eligibleRows(store, g, options.comps.filter, exclude);
+  let over = 0;
+  let without = 0;
+  const withoutPlayers = new Set<number>();
+  for (let i = 0; i < g.n; i++) {
+    if (before.mask[i] !== 1) continue;
+    const salary = salaryOf(store, g.player[i] as number, g.season[i] as number);
+    if (salary === undefined) {
+      without++;
+      withoutPlayers.add(g.player[i] as number);
+    } else if (salary > limitUsd) over++;
+  }
+  const callerInclude = options.comps.filter.include;
+  const underLimit = (row: number): boolean => {
+    const salary = salaryOf(store, g.player[row] as number, g.season[row] as number);
+    return salary !== undefined && salary <= limitUsd && (callerInclude === undefined || callerInclude(row));
+  };
+  const found = findCompsWithRows(store, target, { ...options.comps, filter: { ...options.comps.filter, include: underLimit } });
+
+  const shown = found.result.comps.map((c) => c.likeness);
+  const salaries = found.rows.map((row) => salaryOf(store, g.player[row] as number, g.season[row] as number) ?? NaN);
+  const frontier = valueFrontier(shown, salaries);
+  const comps: CheaperComp[] = found.result.comps.map((c, i) => ({
+    ...c,
+    salary_usd: salaries[i] as number,
+    likeness_per_million: Number(likenessPerMillion(c.likeness, salaries[i] as number).toFixed(2)),
+    frontier: frontier[i] as boolean,
+  }));
+  return {
+    query: found.result.query,
+    pool: {
+      ...found.result.pool,
+      salary: {
+        rule: options.limit.kind,
+        limit_usd: Math.round(limitUsd),
+        share: options.limit.kind === 'max-share' ? options.limit.share : null,
+        target_salary_usd: targetSalary ?? null,
+        under_limit: found.result.pool.eligible,
+        over_limit: over,
+        without_salary: without,
+        without_salary_players: withoutPlayers.size,
+      },
+    },
+    comps,
+  };
+}

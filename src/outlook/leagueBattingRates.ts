@@ -1,0 +1,36 @@
+import type { BattingSeason } from '../ingest/types.ts';
+import { onBasePercentage } from '../stats/onBasePercentage.ts';
+import { sluggingPercentage } from '../stats/sluggingPercentage.ts';
+import { totalBases } from '../stats/totalBases.ts';
+
+export interface LeagueBattingRates {
+  readonly OBP: number;
+  readonly SLG: number;
+  readonly PA: number;
+}
+
+/**
+ * A league's on-base and slugging percentages from the sum of its batting lines (not the mean of the
+ * players' rates): lgOBP = sum(H + BB + HBP) / sum(AB + BB + HBP + SF), lgSLG = sum(TB) / sum(AB).
+ *
+ * Source: common practice: league rates for OPS+ are the league's totals put through the rule 9.21
+ * formulas (src/stats/onBasePercentage.ts, sluggingPercentage.ts, totalBases.ts).
+ * Units: fractions; NaN when the lines hold no at-bat.
+ *
+ * @example
+ * leagueBattingRates([a, b]); // a: 100 AB, 30 H, 10 BB; b: 100 AB, 20 H, 0 BB (no HBP, SF, extra bases)
+ * // => OBP 60 / 210 = 0.2857..., SLG 50 / 200 = 0.25
+ */
+export function leagueBattingRates(lines: readonly BattingSeason[]): LeagueBattingRates {
+  let H = 0, BB = 0, HBP = 0, AB = 0, SF = 0, TB = 0, PA = 0;
+  for (const b of lines) {
+    H += b.H;
+    BB += b.BB;
+    HBP += b.HBP;
+    AB += b.AB;
+    SF += b.SF;
+    PA += b.PA;
+    TB += totalBases(b.H, b.doubles, b.triples, b.HR);
+  }
+  return { OBP: onBasePercentage(H, BB, HBP, AB, SF), SLG: sluggingPercentage(TB, AB), PA };
+}

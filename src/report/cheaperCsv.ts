@@ -1,0 +1,25 @@
+import { stringify } from 'csv-stringify/sync';
+import type { CheaperResult } from '../outlook/types.ts';
+import type { DimensionInfo } from '../profiles/Dimension.ts';
+
+/**
+ * The cheaper comps as a shortlist to hand out: readable column names, salary as a plain whole number
+ * of US dollars (no symbol or separators, so spreadsheets read it as a number), alike and apart by the
+ * dimensions' labels.
+ */
+export function cheaperCsv(result: CheaperResult, dims: readonly DimensionInfo[], header = true): string {
+  const q = result.query;
+  const byName = new Map(dims.map((d) => [d.name, d.label]));
+  const labels = (names: readonly string[]): string => names.map((n) => byName.get(n) ?? n).join(', ');
+  const head = [
+    'For player', 'For player ID', 'For season', 'Rank', 'Player', 'Player ID', 'Season', 'Level', 'Position', 'Age',
+    'Likeness (0-100)', 'Salary (USD)', 'Likeness per USD 1M', 'Value frontier', 'Alike on', 'Apart on',
+  ];
+  const rows = result.comps.map((c) => [
+    q.name ?? 'hand-built profile', q.player_id ?? '', q.season ?? '',
+    c.rank, c.name, c.player_id, c.season, c.level, c.position, c.age ?? '',
+    c.likeness.toFixed(1), String(Math.round(c.salary_usd)), c.likeness_per_million.toFixed(2), c.frontier ? 'yes' : 'no',
+    labels(c.alike), labels(c.apart),
+  ]);
+  return stringify(header ? [head, ...rows] : rows);
+}

@@ -1,0 +1,34 @@
+import type { CheaperResult } from '../outlook/types.ts';
+import { formatUsd } from './formatUsd.ts';
+import { plainTable } from './plainTable.ts';
+
+/** The cheaper comps as a terminal table within 100 columns, value-frontier comps marked. */
+export function cheaperTable(result: CheaperResult): string {
+  const q = result.query;
+  const s = result.pool.salary;
+  const lines: string[] = [];
+  const who = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
+  lines.push(`Cheaper comps for ${who}; salary ${formatUsd(s.target_salary_usd)}`);
+  const rule = s.rule === 'max-share' && s.share !== null ? `${Math.round(s.share * 100)}% of his salary` : '--max-salary';
+  lines.push(`Pool: ${s.under_limit.toLocaleString('en-US')} ${q.group} player-seasons paid up to ${formatUsd(s.limit_usd)} (${rule})`);
+  lines.push(
+    `Left out: ${s.over_limit.toLocaleString('en-US')} paid more, ${s.without_salary.toLocaleString('en-US')} without a known salary (${s.without_salary_players.toLocaleString('en-US')} players)`,
+  );
+  lines.push('');
+  if (result.comps.length === 0) {
+    lines.push('No comps under the limit share enough of the profile (see --max-salary, --max-share, --min-coverage).');
+    return lines.join('\n') + '\n';
+  }
+  const t = plainTable(
+    ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Like', 'Salary', 'Like/$1M', 'Front'],
+    ['right', 'left', 'left', 'left', 'left', 'right', 'right', 'right', 'left'],
+    [4, 34, 7, 5, 4, 5, 14, 9, 6],
+  );
+  for (const c of result.comps) {
+    t.push([String(c.rank), `${c.name} (${c.player_id})`, String(c.season), c.level, c.position, c.likeness.toFixed(0), formatUsd(c.salary_usd), c.likeness_per_million.toFixed(1), c.frontier ? 'yes' : '']);
+  }
+  lines.push(t.toString());
+  lines.push('Front: on the value frontier (no other comp listed is both at least as alike and at most as paid).');
+  lines.push('Salaries are as paid in their own seasons (not adjusted between seasons).');
+  return lines.join('\n') + '\n';
+}

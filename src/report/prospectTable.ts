@@ -1,0 +1,75 @@
+import type { ProspectResult, QuantileSummary } from '../outlook/types.ts';
+import { peakSummaryOf } from '../outlook/summariseOutlook.ts';
+import { plainTable } from './plainTable.ts';
+
+const pct = (x: number | null): string => (x === null ? '-' : `${Math.round(x * 100)}%`);
+const num = (x: number | null, digits = 0): string => (x === null ? '-' : x.toFixed(digits));
+const range = (q: QuantileSummary, digits = 0): string => (q.n === 0 ? '-' : `${num(q.p10, digits)} / ${num(q.p50, digits)} / ${num(q.p90, digits)}`);
+
+/**
+ * The prospect comps as a terminal table within 100 columns: the target and pool rules, the comps
+ * with what each did next, then the outlook beside the level-and-age base rate.
+ */
+export function prospectTable(result: ProspectResult): string {
+  const q = result.query;
+  const o = result.outlook;
+  const r = result.pool.rules;
+  const hitter = 'peak_ops_plus' in o;
+  const peakLabel = hitter ? 'Peak OPS+' : 'Best FIP-';
+  const lines: string[] = [];
+  lines.push(`Prospect comps for ${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}`);
+  if (q.path_seasons > 1) lines.push(`Path matched: ${q.path.map((s) => `${s.season} ${s.level}${s.age !== null ? ` (${s.age})` : ''}`).reverse().join(' -> ')}`);
+  lines.push(
+    `Pool: ${result.pool.eligible.toLocaleString('en-US')} ${q.group} player-seasons at ${r.level}, ages ${r.age_min}-${r.age_max}, before ${r.seasons_before}` +
+      ` (${result.pool.complete_window.toLocaleString('en-US')} with ${o.horizon_seasons} seasons of follow-up, ${result.pool.censored.toLocaleString('en-US')} censored)`,
+  );
+  lines.push('');
+  if (result.comps.length === 0) {
+    lines.push('No comps: nobody earlier at this level and age shares enough of the profile (see --min-coverage, --path).');
+  } else {
+    const t = plainTable(
+      ['#', 'Player', 'Season', 'Lvl', 'Age', 'Like', 'First MLB', 'MLB yrs', peakLabel],
+      ['right', 'left', 'left', 'left', 'right', 'right', 'right', 'right', 'right'],
+      [4, 34, 7, 5, 4, 5, 10, 8, 10],
+    );
+    for (const c of result.comps) {
+      const peak = c.outcome.kind === 'hitter' ? c.outcome.peak_ops_plus : c.outcome.peak_fip_minus;
+      t.push([
+        `${c.rank}${c.censored ? '*' : ''}`,
+        `${c.name} (${c.player_id})`,
+        String(c.season),
+        c.level,
+        c.age === null ? '-' : String(c.age),
+        c.likeness.toFixed(0),
+        c.outcome.first_mlb_season === null ? '-' : String(c.outcome.first_mlb_season),
+        String(c.outcome.mlb_seasons),
+        num(peak),
+      ]);
+    }
+    lines.push(t.toString());
+    if (result.comps.some((c) => c.censored)) lines.push('* follow-up incomplete (censored): listed, not in the outlook');
+  }
+  lines.push('');
+  lines.push(`Outlook: what the ${o.comps_used} comps did in the next ${o.horizon_seasons} seasons (data to ${o.as_of_season}), weighted by likeness`);
+  if (o.comps_censored > 0) {
+    lines.push(`${o.comps_censored} closer player${o.comps_censored === 1 ? '' : 's'} left out: follow-up runs past ${o.as_of_season}${q.include_censored ? '' : ' (--include-censored lists them)'}`);
+  }
+  const b = o.baseline;
+  const peak = peakSummaryOf(o);
+  const basePeak = peakSummaryOf(b);
+  const t = plainTable(['', 'Comps', `Base rate (${b.player_seasons.toLocaleString('en-US')} player-seasons)`], ['left', 'right', 'right'], [30, 18, 36]);
+  t.push(['Reached MLB', pct(o.reached_mlb), pct(b.reached_mlb)]);
+  t.push([`${peakLabel} (${hitter ? '300+ PA' : '50+ IP'}), players`, String(peak.n), String(basePeak.n)]);
+  t.push(['  p10 / p50 / p90', range(peak), range(basePeak)]);
+  t.push(['MLB seasons, mean', num(o.mlb_seasons.mean, 1), num(b.mlb_seasons.mean, 1)]);
+  t.push(['  p10 / p50 / p90', range(o.mlb_seasons), range(b.mlb_seasons)]);
+  lines.push(t.toString());
+  lines.push(
+    hitter
+      ? 'Peak OPS+: best OPS+ in an MLB season of 300+ PA, against that MLB season of this roster (no park factor; 100 average).'
+      : 'Best FIP-: lowest FIP- in an MLB season of 50+ IP, against that MLB season of this roster (no park factor; 100 average, lower better).',
+  );
+  lines.push('Base rate: every earlier player-season at this level and age with a complete follow-up, unweighted.');
+  lines.push('Comps describe what earlier players did, not what this one will do.');
+  return lines.join('\n') + '\n';
+}
