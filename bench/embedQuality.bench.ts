@@ -33,7 +33,8 @@ const SAMPLES: readonly (readonly [string, readonly [number, number] | undefined
 
 /**
  * A space to compare: `none`, `pca` or `autoencoder`, optionally `-z` (fitted on plain z instead of the
- * weighted profiles). Extra autoencoder settings from the environment as JSON, e.g. KINDRED_BENCH_AE='{"latent":6}'.
+ * weighted profiles). Extra settings from the environment as JSON: KINDRED_BENCH_SETTINGS for every
+ * embedding (e.g. '{"pcaVariance":0.8}'), KINDRED_BENCH_AE for the autoencoder (e.g. '{"latent":6}').
  */
 type Variant = string;
 
@@ -45,7 +46,8 @@ function methodOf(v: Variant): EmbedMethod {
 function settingsFor(v: Variant): EmbedSettingsInput {
   const method = methodOf(v);
   const extra = method === 'autoencoder' && process.env.KINDRED_BENCH_AE ? (JSON.parse(process.env.KINDRED_BENCH_AE) as Record<string, unknown>) : {};
-  return { method, input: v.endsWith('-z') ? 'z' : 'weighted', seed: 1, ...(method === 'autoencoder' ? { autoencoder: extra } : {}) };
+  const top = method !== 'none' && process.env.KINDRED_BENCH_SETTINGS ? (JSON.parse(process.env.KINDRED_BENCH_SETTINGS) as Record<string, unknown>) : {};
+  return { method, input: v.endsWith('-z') ? 'z' : 'weighted', seed: 1, ...top, ...(method === 'autoencoder' ? { autoencoder: extra } : {}) };
 }
 
 export async function runEmbedQuality(playerSeasons: number, spaces: readonly Variant[], seed = 7): Promise<string[]> {
