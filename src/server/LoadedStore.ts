@@ -3,10 +3,15 @@ import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { TargetRow } from '../query/selectTargetRow.ts';
 import { poolMap, type PoolMap } from './poolMap.ts';
 import { AnswerCache } from './AnswerCache.ts';
+import type { ServedStore } from './loadServedStore.ts';
+import type { Outcomes } from '../outlook/Outcomes.ts';
+import type { StoreError } from '../errors/KindredError.ts';
 
 /** A store as the server holds it: the store, when it was loaded, and what is computed from it on demand. */
 export class LoadedStore {
   readonly store: ProfileStore;
+  /** The top-level outcomes, or why the store has none. */
+  readonly outcomes: Outcomes | StoreError;
   readonly loadedAt: Date;
   readonly generation: number;
   /** Serialised answers of cacheable endpoints for this store. */
@@ -14,8 +19,9 @@ export class LoadedStore {
   readonly #maps = new Map<PositionGroup, PoolMap>();
   #rows: Map<number, TargetRow[]> | undefined;
 
-  constructor(store: ProfileStore, generation: number, cacheEntries: number, loadedAt: Date = new Date()) {
-    this.store = store;
+  constructor(served: ServedStore, generation: number, cacheEntries: number, loadedAt: Date = new Date()) {
+    this.store = served.store;
+    this.outcomes = served.outcomes;
     this.generation = generation;
     this.loadedAt = loadedAt;
     this.answers = new AnswerCache(cacheEntries);

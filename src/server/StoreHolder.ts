@@ -1,8 +1,7 @@
-import { loadProfileStore } from '../query/loadProfileStore.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
 import { LoadedStore } from './LoadedStore.ts';
+import { loadServedStore, type ServedStore } from './loadServedStore.ts';
 
-export type StoreLoader = (dir: string) => Promise<ProfileStore>;
+export type StoreLoader = (dir: string) => Promise<ServedStore>;
 
 /**
  * The store the server answers from. Queries read `current` and never wait; `reload` reads the
@@ -25,7 +24,7 @@ export class StoreHolder {
   }
 
   /** Loads the store; `cacheEntries` answers are kept per loaded store (0: none). */
-  static async open(dir: string, load: StoreLoader = loadProfileStore, cacheEntries = 0): Promise<StoreHolder> {
+  static async open(dir: string, load: StoreLoader = loadServedStore, cacheEntries = 0): Promise<StoreHolder> {
     return new StoreHolder(dir, new LoadedStore(await load(dir), 1, cacheEntries), load, cacheEntries);
   }
 
@@ -35,8 +34,8 @@ export class StoreHolder {
 
   reload(): Promise<LoadedStore> {
     const next = this.#queue.then(async () => {
-      const store = await this.#load(this.dir);
-      this.#current = new LoadedStore(store, this.#current.generation + 1, this.#cacheEntries);
+      const served = await this.#load(this.dir);
+      this.#current = new LoadedStore(served, this.#current.generation + 1, this.#cacheEntries);
       return this.#current;
     });
     this.#queue = next.catch(() => undefined);

@@ -5,10 +5,16 @@ import { infoEndpoint } from './api/infoEndpoint.ts';
 import { mapEndpoint } from './api/mapEndpoint.ts';
 import { playersEndpoint } from './api/playersEndpoint.ts';
 import { reloadEndpoint } from './api/reloadEndpoint.ts';
+import { prospectEndpoint } from './api/prospectEndpoint.ts';
+import { cheaperEndpoint } from './api/cheaperEndpoint.ts';
+import { matchEndpoint } from './api/matchEndpoint.ts';
 
 /** Every JSON endpoint by its exact path. */
 export const API_ENDPOINTS: ReadonlyMap<string, Endpoint> = new Map([
   ['/api/comps', compsEndpoint],
+  ['/api/prospect', prospectEndpoint],
+  ['/api/cheaper', cheaperEndpoint],
+  ['/api/match', matchEndpoint],
   ['/api/players', playersEndpoint],
   ['/api/dims', dimsEndpoint],
   ['/api/map', mapEndpoint],

@@ -3,6 +3,7 @@ import type { PlayerHit } from '../server/api/playersEndpoint.ts';
 import type { StoreInfo } from '../server/api/infoEndpoint.ts';
 import type { PoolMap } from '../server/poolMap.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
+import type { CheaperResult, MatchResult, ProspectResult } from '../outlook/types.ts';
 
 /** An error answered by the API: its stable code and message. */
 export class ApiError extends Error {
@@ -56,6 +57,24 @@ export async function fetchComps(path: string, params: URLSearchParams): Promise
   return v;
 }
 
+export async function fetchProspect(params: URLSearchParams): Promise<ProspectResult> {
+  const v = await getJson('/api/prospect', params);
+  if (!isProspect(v)) throw new ApiError(0, 'badAnswer', '/api/prospect answered an unexpected shape');
+  return v;
+}
+
+export async function fetchCheaper(params: URLSearchParams): Promise<CheaperResult> {
+  const v = await getJson('/api/cheaper', params);
+  if (!isCheaper(v)) throw new ApiError(0, 'badAnswer', '/api/cheaper answered an unexpected shape');
+  return v;
+}
+
+export async function fetchMatch(params: URLSearchParams): Promise<MatchResult> {
+  const v = await getJson('/api/match', params);
+  if (!isMatch(v)) throw new ApiError(0, 'badAnswer', '/api/match answered an unexpected shape');
+  return v;
+}
+
 export async function fetchMap(group: string): Promise<PoolMap> {
   const v = await getJson('/api/map', new URLSearchParams({ group }));
   if (!isPoolMap(v)) throw new ApiError(0, 'badAnswer', '/api/map answered an unexpected shape');
@@ -77,6 +96,15 @@ function isPlayerHit(v: unknown): v is PlayerHit {
 }
 function isCompsResult(v: unknown): v is CompsResult {
   return isRecord(v) && isRecord(v.query) && isRecord(v.pool) && Array.isArray(v.comps);
+}
+function isProspect(v: unknown): v is ProspectResult {
+  return isCompsResult(v) && 'outlook' in v && isRecord(v.outlook) && isRecord(v.outlook.baseline);
+}
+function isCheaper(v: unknown): v is CheaperResult {
+  return isCompsResult(v) && 'salary' in v.pool && isRecord(v.pool.salary);
+}
+function isMatch(v: unknown): v is MatchResult {
+  return isRecord(v) && isRecord(v.query) && isRecord(v.pool) && isRecord(v.candidate) && Array.isArray(v.candidate.dimensions);
 }
 function isPoolMap(v: unknown): v is PoolMap {
   return isRecord(v) && typeof v.group === 'string' && Array.isArray(v.x) && Array.isArray(v.y) && Array.isArray(v.player_id) && Array.isArray(v.season);

@@ -3,8 +3,10 @@ import { h } from './dom.ts';
 
 export interface FiltersForm {
   readonly element: HTMLElement;
-  /** The pool, weighting and k as API parameters (only those that differ from the defaults). */
+  /** The pool, weighting and k as API parameters (k always; the others when they differ from the defaults). */
   params(): URLSearchParams;
+  /** Sets the number of comps (each job has its own default). */
+  setK(k: number): void;
 }
 
 const checkboxes = (name: string, values: readonly string[]): HTMLElement =>
@@ -66,12 +68,15 @@ export function filtersForm(info: StoreInfo): FiltersForm {
       set('age', span(value('opt-age-from'), value('opt-age-to')));
       set('bats', checked('bats').join(','));
       set('throws', checked('throws').join(','));
-      if (k.value.trim() !== '10') set('k', k.value.trim());
+      set('k', k.value.trim());
       if (preset.value !== 'balanced') set('preset', preset.value);
       set('weights', weights.value.trim());
       if (coverage.value.trim() !== '0.5') set('min-coverage', coverage.value.trim());
       if (allSeasons.checked) p.set('all-seasons', 'true');
       return p;
+    },
+    setK(value: number): void {
+      k.value = String(value);
     },
   };
 }

@@ -55,6 +55,7 @@ async function start(): Promise<void> {
     runButton.textContent = next.runLabel;
     targetSlot.replaceChildren(...next.sections(ctx));
     filtersSlot.hidden = !next.usesFilters;
+    filters.setK(next.defaultK);
     results.clear(next.idle);
   };
   tabs.replaceChildren(

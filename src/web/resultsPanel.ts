@@ -6,19 +6,31 @@ import { download, toCsv } from './exportTable.ts';
 import { gradeChartSpec } from './gradeChartSpec.ts';
 import { poolMapSpec, type Highlight } from './poolMapSpec.ts';
 import { renderChart } from './renderChart.ts';
+import type { TopLevelSpec } from 'vega-lite';
 
 /** A column the table shows and exports beside the common ones (salary, outcome...). */
 export interface ExtraColumn {
   readonly title: string;
+  /** The value as exported (CSV) and, unless `shown` says otherwise, as shown. */
   readonly value: (comp: Comp, index: number) => string | number | null;
+  readonly shown?: (value: string | number) => string;
+}
+
+/** What a view adds to the common results: columns, a sentence, its own chart, the answer to export. */
+export interface ShowOptions {
+  readonly extra?: readonly ExtraColumn[];
+  /** The API's answer as it came (exported as JSON); default the result shown. */
+  readonly raw?: unknown;
+  readonly note?: string;
+  /** The first line of the summary (default: how many comps for whom). */
+  readonly headline?: string;
+  readonly chart?: { readonly title: string; readonly spec: TopLevelSpec; readonly label: string };
 }
 
 export interface ResultsPanel {
   readonly element: HTMLElement;
-  show(result: CompsResult, dims: readonly DimensionInfo[], extra?: readonly ExtraColumn[], raw?: unknown): Promise<void>;
+  show(result: CompsResult, dims: readonly DimensionInfo[], options?: ShowOptions): Promise<void>;
   clear(message: string): void;
-  /** A place under the table for a view's own chart. */
-  readonly extraChart: HTMLElement;
 }
 
 const fmt = (v: number | null, digits: number): string => (v === null ? '—' : v.toFixed(digits));
@@ -32,7 +44,9 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
   const gradeTitle = h('figcaption', {}, 'Grades by dimension');
   const gradeChart = h('div', { class: 'chart', id: 'grade-chart' });
   const mapChart = h('div', { class: 'chart', id: 'map-chart' });
-  const extraChart = h('div', { class: 'chart', id: 'extra-chart', hidden: '' });
+  const extraTitle = h('figcaption', {});
+  const extraChartBox = h('div', { class: 'chart', id: 'extra-chart' });
+  const extraChart = h('figure', { class: 'extra', hidden: '' }, extraTitle, extraChartBox);
   const element = h(
     'section',
     { class: 'results', 'aria-live': 'polite' },
@@ -79,25 +93,26 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
 
   return {
     element,
-    extraChart,
     clear(message: string): void {
       current = null;
       summary.replaceChildren(h('p', { class: 'message' }, message));
       table.replaceChildren();
       gradeChart.replaceChildren();
       mapChart.replaceChildren();
-      extraChart.replaceChildren();
+      extraChartBox.replaceChildren();
       extraChart.hidden = true;
       csvButton.disabled = true;
       jsonButton.disabled = true;
     },
-    async show(result, dims, extra = [], raw = result): Promise<void> {
-      current = { result, extra, raw };
+    async show(result, dims, options = {}): Promise<void> {
+      const extra = options.extra ?? [];
+      current = { result, extra, raw: options.raw ?? result };
       const q = result.query;
       const who = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''}, ${q.position}` : `a hand-built ${q.position} profile`;
       summary.replaceChildren(
-        h('p', {}, h('strong', {}, `${result.comps.length} comps`), ` for ${who}`),
+        options.headline !== undefined ? h('p', {}, h('strong', {}, options.headline)) : h('p', {}, h('strong', {}, `${result.comps.length} comps`), ` for ${who}`),
         h('p', { class: 'meta' }, `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} player-seasons in the pool · searched ${q.method === 'hnsw' ? 'with the index' : 'exactly'}`),
+        ...(options.note ? [h('p', { class: 'note', id: 'result-note' }, options.note)] : []),
       );
       const head = h('tr', {}, ...['#', 'Name', 'Season', 'Level', 'Pos', 'Age', 'Likeness', 'Coverage', ...extra.map((c) => c.title), 'Alike', 'Apart'].map((t) => h('th', { scope: 'col' }, t)));
       const label = (name: string): string => dims.find((d) => d.name === name)?.label ?? name;
@@ -117,7 +132,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
           h('td', { class: 'num' }, `${Math.round(c.coverage * 100)}%`),
           ...extra.map((x) => {
             const v = x.value(c, i);
-            return h('td', { class: typeof v === 'number' ? 'num' : '' }, v === null ? '—' : String(v));
+            return h('td', { class: typeof v === 'number' ? 'num' : '' }, v === null ? '—' : x.shown ? x.shown(v) : String(v));
           }),
           h('td', { class: 'alike' }, c.alike.map(label).join(', ')),
           h('td', { class: 'apart' }, c.apart.map(label).join(', ')),
@@ -141,7 +156,14 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
         highlights.push({ playerId: q.player_id, season: q.season, level: q.level, role: 'target', rank: null });
       }
       const drawMap = fetchMap(q.group).then((map) => renderChart(mapChart, poolMapSpec(map, highlights), `map of the ${q.group} pool with the target and comps`));
-      await Promise.all([selectComp(result, dims, 0), drawMap]);
+      const chart = options.chart;
+      const drawExtra = chart
+        ? renderChart(extraChartBox, chart.spec, chart.label).then(() => {
+            extraTitle.textContent = chart.title;
+            extraChart.hidden = false;
+          })
+        : Promise.resolve();
+      await Promise.all([selectComp(result, dims, 0), drawMap, drawExtra]);
     },
   };
 }

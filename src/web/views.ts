@@ -1,6 +1,11 @@
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { StoreInfo } from '../server/api/infoEndpoint.ts';
-import { fetchComps } from './api.ts';
+import { fetchCheaper, fetchComps, fetchMatch, fetchProspect } from './api.ts';
+import { h } from './dom.ts';
+import { frontierChartSpec } from './frontierChartSpec.ts';
+import { outcomeChartSpec, peakMeasure, peakOf } from './outcomeChartSpec.ts';
+import type { CheaperComp, MatchCandidate, ProspectComp } from '../outlook/types.ts';
+import type { Comp } from '../query/types.ts';
 import type { FiltersForm } from './filtersForm.ts';
 import type { PlayerPicker } from './playerPicker.ts';
 import type { ResultsPanel } from './resultsPanel.ts';
@@ -25,6 +30,8 @@ export interface ViewDef {
   readonly runLabel: string;
   readonly idle: string;
   readonly usesFilters: boolean;
+  /** The number of comps the job starts with (the CLI's default for it). */
+  readonly defaultK: number;
   sections(ctx: ViewContext): HTMLElement[];
   run(ctx: ViewContext): Promise<void>;
 }
@@ -59,6 +66,7 @@ const compsView: ViewDef = {
   runLabel: 'Find comps',
   idle: 'Choose a player and a season, then Find comps.',
   usesFilters: true,
+  defaultK: 10,
   sections: (ctx) => [ctx.first.element],
   async run(ctx) {
     needPlayer(ctx.first);
@@ -74,6 +82,7 @@ const targetView: ViewDef = {
   runLabel: 'Find comps for this profile',
   idle: 'Tick a few dimensions and set their grades, then run.',
   usesFilters: true,
+  defaultK: 10,
   sections: (ctx) => [ctx.builder.element],
   async run(ctx) {
     const want = ctx.builder.want();
@@ -83,5 +92,133 @@ const targetView: ViewDef = {
   },
 };
 
+/** A small labelled number or text input. */
+function input(id: string, label: string, attrs: Readonly<Record<string, string>>): { field: HTMLElement; el: HTMLInputElement } {
+  const el = h('input', { id, ...attrs });
+  return { el, field: h('div', { class: 'field' }, h('label', { for: id, class: 'field-label' }, label), el) };
+}
+
+const horizon = input('opt-horizon', 'Follow-up', { type: 'number', min: '1', max: '15', value: '6', title: 'seasons after each comp season' });
+const path = input('opt-path', 'Seasons matched', { type: 'number', min: '1', max: '5', value: '1', title: 'his last N seasons, aligned by age' });
+const censored = h('input', { id: 'opt-include-censored', type: 'checkbox' });
+const outlookBox = h(
+  'fieldset',
+  { class: 'outlook' },
+  h('legend', {}, 'Outlook'),
+  horizon.field,
+  path.field,
+  h('div', { class: 'field' }, h('label', { class: 'check' }, censored, 'also list comps whose follow-up is not over')),
+);
+
+const yesNo = (b: boolean): string => (b ? 'yes' : 'no');
+const isProspectComp = (c: Comp): c is ProspectComp => 'outcome' in c && 'censored' in c;
+const prospectOf = (c: Comp): ProspectComp | undefined => (isProspectComp(c) ? c : undefined);
+
+const prospectView: ViewDef = {
+  id: 'prospect',
+  label: 'Prospect outlook',
+  intro: 'Earlier players at his level and age who looked like him, and what became of them at the top level.',
+  runLabel: 'Show the outlook',
+  idle: 'Choose a prospect and a season, then Show the outlook.',
+  usesFilters: true,
+  defaultK: 25,
+  sections: (ctx) => [ctx.first.element, outlookBox],
+  async run(ctx) {
+    needPlayer(ctx.first);
+    const p = merge(playerParams(ctx.first), ctx.filters.params());
+    if (horizon.el.value.trim() !== '') p.set('horizon', horizon.el.value.trim());
+    if (path.el.value.trim() !== '') p.set('path', path.el.value.trim());
+    if (censored.checked) p.set('include-censored', 'true');
+    const result = await fetchProspect(p);
+    const m = peakMeasure(result);
+    const o = result.outlook;
+    const pct = (v: number | null): string => (v === null ? 'n/a' : `${Math.round(v * 100)}%`);
+    const note = `Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_mlb)} reached the top level, against a base rate of ${pct(o.baseline.reached_mlb)} for ${o.baseline.player_seasons} player-seasons at that level and age.`;
+    await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
+      note,
+      extra: [
+        { title: 'reached MLB', value: (c) => (prospectOf(c) ? yesNo(prospectOf(c)?.outcome.reached_mlb ?? false) : null) },
+        { title: 'MLB seasons', value: (c) => prospectOf(c)?.outcome.mlb_seasons ?? null },
+        { title: m.label, value: (c) => { const pc = prospectOf(c); return pc ? peakOf(pc) : null; } },
+        { title: 'follow-up over', value: (c) => { const pc = prospectOf(c); return pc ? yesNo(!pc.censored) : null; } },
+      ],
+      chart: { title: 'What became of the comps', spec: outcomeChartSpec(result), label: 'outcome distribution of the comps against the base rate' },
+    });
+  },
+};
+
+const maxSalary = input('opt-max-salary', 'Max salary', { type: 'text', inputmode: 'numeric', placeholder: 'USD, e.g. 2,000,000' });
+const maxShare = input('opt-max-share', 'or share', { type: 'number', min: '0', max: '1', step: '0.05', placeholder: '0.5', title: 'share of his salary' });
+const salaryBox = h('fieldset', { class: 'salary' }, h('legend', {}, 'Salary limit'), maxSalary.field, maxShare.field, h('p', { class: 'hint' }, 'Leave both empty for half his salary.'));
+const isCheaperComp = (c: Comp): c is CheaperComp => 'salary_usd' in c && 'frontier' in c;
+const cheaperOf = (c: Comp): CheaperComp | undefined => (isCheaperComp(c) ? c : undefined);
+const usd = (v: number): string => `$${Math.round(v).toLocaleString('en-US')}`;
+
+const cheaperView: ViewDef = {
+  id: 'cheaper',
+  label: 'Cheaper comps',
+  intro: 'Players who did what he does, paid less that season; the value frontier (no one more alike for less) is marked.',
+  runLabel: 'Find cheaper comps',
+  idle: 'Choose a player and a salary limit, then Find cheaper comps.',
+  usesFilters: true,
+  defaultK: 10,
+  sections: (ctx) => [ctx.first.element, salaryBox],
+  async run(ctx) {
+    needPlayer(ctx.first);
+    const p = merge(playerParams(ctx.first), ctx.filters.params());
+    if (maxSalary.el.value.trim() !== '') p.set('max-salary', maxSalary.el.value.trim());
+    if (maxShare.el.value.trim() !== '') p.set('max-share', maxShare.el.value.trim());
+    const result = await fetchCheaper(p);
+    const s = result.pool.salary;
+    const note = `Salary limit ${usd(s.limit_usd)}${s.target_salary_usd !== null ? ` (his salary ${usd(s.target_salary_usd)})` : ''}: ${s.under_limit} player-seasons under it, ${s.over_limit} over, ${s.without_salary} without a known salary.`;
+    await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
+      note,
+      extra: [
+        { title: 'salary (USD)', value: (c) => cheaperOf(c)?.salary_usd ?? null, shown: (v) => (typeof v === 'number' ? usd(v) : v) },
+        { title: 'likeness per $M', value: (c) => cheaperOf(c)?.likeness_per_million ?? null },
+        { title: 'frontier', value: (c) => { const cc = cheaperOf(c); return cc ? yesNo(cc.frontier) : null; } },
+      ],
+      chart: { title: 'Likeness against salary (the value frontier joined)', spec: frontierChartSpec(result), label: 'likeness against salary of the cheaper comps' },
+    });
+  },
+};
+
+const isCandidate = (c: Comp): c is MatchCandidate => 'percentile' in c && 'in_pool' in c;
+const candidateOf = (c: Comp): MatchCandidate | undefined => (isCandidate(c) ? c : undefined);
+
+const matchView: ViewDef = {
+  id: 'match',
+  label: 'One-to-one',
+  intro: 'One candidate against one target: how alike, dimension by dimension, and where he stands among the pool.',
+  runLabel: 'Compare',
+  idle: 'Choose the target and the candidate, then Compare.',
+  usesFilters: true,
+  defaultK: 10,
+  sections: (ctx) => [ctx.first.element, ctx.second.element],
+  async run(ctx) {
+    needPlayer(ctx.first);
+    const other = ctx.second.chosen();
+    if (!other) throw new Error('Choose the candidate too (the Versus box).');
+    const p = merge(playerParams(ctx.first), ctx.filters.params());
+    p.set('candidate', other.player_id);
+    const [season, level] = ctx.second.seasonChoice().split('|');
+    if (season) p.set('season-b', season);
+    if (level) p.set('level-b', level);
+    const result = await fetchMatch(p);
+    const c = result.candidate;
+    const comps: Comp[] = [c, ...(result.closest && result.closest.player_id !== c.player_id ? [result.closest] : [])];
+    const note = `${c.name} (${c.season} ${c.level}) is ${c.likeness.toFixed(1)} alike: more alike than ${c.percentile === null ? 'n/a' : `${c.percentile.toFixed(0)}%`} of the pool's ${c.pool_players} players${c.in_pool ? '' : ' (his season is outside the pool filters)'}.${result.closest ? ` The closest in the pool is ${result.closest.name} (${result.closest.likeness.toFixed(1)}).` : ''}`;
+    await ctx.results.show({ query: result.query, pool: result.pool, comps }, ctx.dimsByGroup.get(result.query.group) ?? [], {
+      raw: result,
+      headline: `${result.query.name ?? 'The target profile'} against ${c.name}`,
+      note,
+      extra: [
+        { title: 'role', value: (x) => (candidateOf(x) ? 'candidate' : 'closest in pool') },
+        { title: 'percentile', value: (x) => candidateOf(x)?.percentile ?? null },
+      ],
+    });
+  },
+};
+
 /** The page's jobs in tab order. */
-export const VIEWS: readonly ViewDef[] = [compsView, targetView];
+export const VIEWS: readonly ViewDef[] = [compsView, targetView, prospectView, cheaperView, matchView];

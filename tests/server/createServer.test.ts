@@ -5,6 +5,7 @@ import { createServer, type RunningServer } from '../../src/server/createServer.
 import { main } from '../../src/cli/main.ts';
 import { captureIo } from '../../src/server/captureIo.ts';
 import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { StoreError } from '../../src/errors/KindredError.ts';
 import { buildDemoStore, errorOf, json, rawExchange, send, tempDir, writeTinyPage } from './serverFixture.ts';
 
 let storeDir = '';
@@ -340,7 +341,7 @@ describe('failures inside the server', () => {
       }
     }
     logged = [];
-    const broken = await createServer({ storeDir, port: 0, webRoot: t.dir, loadStore: async () => ({ ...store, playerById: new BrokenLookup() }), log: (l) => logged.push(l) });
+    const broken = await createServer({ storeDir, port: 0, webRoot: t.dir, loadStore: async () => ({ store: { ...store, playerById: new BrokenLookup() }, outcomes: new StoreError('kindred.store.missing', 'no outcomes') }), log: (l) => logged.push(l) });
     try {
       const r = await send(broken.url, '/api/comps?player=p000002', { headers: { Host: new URL(broken.url).host } });
       expect(r.status).toBe(500);

@@ -42,6 +42,38 @@ function uniqueCatcher(): { id: string; name: string; part: string } {
   return { id: p.playerId, name: p.name, part: (p.name.split(' ')[1] ?? p.name).slice(0, 4) };
 }
 
+/** A player with a unique name among those with a season matching `accept`, and the first four letters of his last name. */
+function uniquePlayer(group: 'IF' | 'SP' | 'C', accept: (row: number) => boolean, skip = 0): { id: string; name: string; part: string; season: number; level: string } {
+  const counts = new Map<string, number>();
+  for (const p of store.players) counts.set(p.name, (counts.get(p.name) ?? 0) + 1);
+  const g = store.groups.get(group);
+  let seen = 0;
+  for (let i = 0; g && i < g.n; i++) {
+    const p = store.players[g.player[i] as number];
+    if (!p || counts.get(p.name) !== 1 || !accept(i)) continue;
+    if (seen++ < skip) continue;
+    return { id: p.playerId, name: p.name, part: p.name.slice(2), season: g.season[i] as number, level: store.levels[g.level[i] as number] ?? '' };
+  }
+  throw new Error(`no ${group} player to pick`);
+}
+
+/** Types part of a name into a picker, picks the player and his season. */
+async function pick(prefix: string, who: { name: string; part: string; season: number; level: string }): Promise<void> {
+  await page.fill(`#${prefix}-input`, who.part);
+  const option = page.locator(`#${prefix}-suggestions li[role="option"]`, { hasText: who.name });
+  await option.waitFor();
+  await option.click();
+  const value = await page.locator(`#${prefix}-season option`, { hasText: `${who.season} · ${who.level} ·` }).first().getAttribute('value');
+  await page.selectOption(`#${prefix}-season`, value ?? '');
+}
+
+/** A fresh page (no filters left from an earlier test) on one of the jobs. */
+async function openView(id: string): Promise<void> {
+  await page.goto(srv.url);
+  await page.waitForSelector('body[data-ready="true"]');
+  await page.click(`nav button[data-view="${id}"]`);
+}
+
 async function marks(selector: string): Promise<number> {
   return page.locator(`${selector} svg .role-mark path, ${selector} svg .role-mark line, ${selector} svg .role-mark text`).count();
 }
@@ -56,6 +88,7 @@ beforeAll(async () => {
   browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS });
   context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 1000 } });
   page = await context.newPage();
+  page.setDefaultTimeout(10_000);
   page.on('console', (m) => {
     if (m.type() === 'error') problems.push(`console: ${m.text()}`);
   });
@@ -176,6 +209,82 @@ describe('the build-a-target view', () => {
     expect(await page.textContent('#summary')).toContain('hand-built SS profile');
     expect(await page.locator('#grade-chart svg .mark-symbol.role-mark path').count()).toBe(6);
     await page.screenshot({ path: join(ARTIFACTS, 'target.png'), fullPage: true });
+  });
+});
+
+describe('the prospect view', () => {
+  it('shows the comps at his level and age, what became of them, and the outcome chart', async () => {
+    await openView('prospect');
+    const g = store.groups.get('IF');
+    const aa = store.levels.indexOf('AA');
+    const who = uniquePlayer('IF', (i) => g?.level[i] === aa && (g?.age[i] ?? 0) >= 19 && (g?.age[i] ?? 99) <= 22 && (g?.season[i] ?? 0) >= 2018);
+    await pick('player', who);
+    expect(await page.inputValue('#opt-k')).toBe('25');
+    await page.click('#run');
+    await page.waitForSelector('#comps-table tbody tr');
+    await page.waitForSelector('#extra-chart svg');
+    const expected = (await api(`/api/prospect?player=${who.id}&season=${who.season}&level=${who.level}&position=${''}`.replace('&position=', ''))) as CompsResult & { outlook: { comps_used: number } };
+    const names = await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents();
+    expect(names).toEqual(expected.comps.map((c) => c.name));
+    expect(await page.textContent('#result-note')).toContain(`from ${expected.outlook.comps_used} comps`);
+    // Two share bars, plus a median tick per distribution that has values (rect marks too).
+    expect(await page.locator('#extra-chart svg .mark-rect.role-mark path').count()).toBeGreaterThanOrEqual(2);
+    const peaks = (expected.comps as unknown[]).filter((c) => {
+      const o = typeof c === 'object' && c !== null && 'outcome' in c ? c.outcome : null;
+      const censored = typeof c === 'object' && c !== null && 'censored' in c && c.censored === true;
+      return !censored && typeof o === 'object' && o !== null && (('peak_ops_plus' in o && o.peak_ops_plus !== null) || ('peak_fip_minus' in o && o.peak_fip_minus !== null));
+    }).length;
+    expect(await page.locator('#extra-chart svg .mark-symbol.role-mark path').count()).toBe(peaks);
+    expect(await page.locator('#comps-table thead th').allTextContents()).toContain('reached MLB');
+    await page.screenshot({ path: join(ARTIFACTS, 'prospect.png'), fullPage: true });
+  });
+});
+
+describe('the cheaper comps view', () => {
+  it('lists comps under a salary limit with the value frontier chart', async () => {
+    await openView('cheaper');
+    const g = store.groups.get('IF');
+    const mlb = store.levels.indexOf('MLB');
+    const who = uniquePlayer('IF', (i) => g?.level[i] === mlb && (store.salaries.get(g.player[i] as number)?.get(g.season[i] as number) ?? 0) > 3e6);
+    await pick('player', who);
+    await page.fill('#opt-max-salary', '2,000,000');
+    await page.click('#run');
+    await page.waitForSelector('#comps-table tbody tr');
+    await page.waitForSelector('#extra-chart svg');
+    const expected = await api(`/api/cheaper?player=${who.id}&season=${who.season}&level=${who.level}&max-salary=2000000&k=10`);
+    const names = await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents();
+    expect(names).toEqual(expected.comps.map((c) => c.name));
+    expect(await page.textContent('#result-note')).toContain('Salary limit $2,000,000');
+    expect(await page.locator('#extra-chart svg .mark-symbol.role-mark path').count()).toBe(expected.comps.length);
+    const [csvDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-csv')]);
+    const header = (await readFile(await csvDownload.path(), 'utf8')).split('\r\n')[0];
+    expect(header).toBe('rank,player_id,name,season,level,position,age,likeness,distance,coverage,salary (USD),likeness per $M,frontier,alike,apart');
+    await page.screenshot({ path: join(ARTIFACTS, 'cheaper.png'), fullPage: true });
+  });
+});
+
+describe('the one-to-one view', () => {
+  it('compares a candidate with a target: percentile, grades and the closest in the pool', async () => {
+    await openView('match');
+    const g = store.groups.get('SP');
+    const mlb = store.levels.indexOf('MLB');
+    const a = uniquePlayer('SP', (i) => g?.level[i] === mlb);
+    const b = uniquePlayer('SP', (i) => g?.level[i] === mlb && store.players[g.player[i] as number]?.playerId !== a.id, 3);
+    await pick('player', a);
+    await pick('other', b);
+    await page.click('#run');
+    await page.waitForSelector('#comps-table tbody tr');
+    await page.waitForSelector('#grade-chart svg');
+    const r = await fetch(new URL(`/api/match?player=${a.id}&season=${a.season}&level=${a.level}&candidate=${b.id}&season-b=${b.season}&level-b=${b.level}&k=10`, srv.url));
+    const expected = (await r.json()) as { candidate: { name: string; percentile: number }; closest: { name: string } | null };
+    const names = await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents();
+    expect(names[0]).toBe(expected.candidate.name);
+    if (expected.closest && expected.closest.name !== expected.candidate.name) expect(names[1]).toBe(expected.closest.name);
+    expect(await page.textContent('#result-note')).toContain(`more alike than ${expected.candidate.percentile.toFixed(0)}%`);
+    expect(await page.locator('#grade-chart svg .mark-symbol.role-mark path').count()).toBeGreaterThan(2);
+    const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
+    expect(JSON.parse(await readFile(await jsonDownload.path(), 'utf8'))).toEqual(expected);
+    await page.screenshot({ path: join(ARTIFACTS, 'match.png'), fullPage: true });
   });
 });
 

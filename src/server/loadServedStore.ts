@@ -1,0 +1,40 @@
+import { readFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { StoreError } from '../errors/KindredError.ts';
+import { MANIFEST_NAME } from '../store/manifest.ts';
+import { loadProfileStore } from '../query/loadProfileStore.ts';
+import type { ProfileStore } from '../query/ProfileStore.ts';
+import { loadOutcomes } from '../outlook/loadOutcomes.ts';
+import type { Outcomes } from '../outlook/Outcomes.ts';
+
+/** What the server answers from: the profiles and, when the store has them, the top-level outcomes. */
+export interface ServedStore {
+  readonly store: ProfileStore;
+  /** The outcomes, or why they could not be read (the prospect endpoint answers with that error). */
+  readonly outcomes: Outcomes | StoreError;
+}
+
+/** Attempts before giving up on a store that keeps changing while it is read. */
+const ATTEMPTS = 3;
+
+const manifestText = (dir: string): Promise<string> => readFile(join(dir, MANIFEST_NAME), 'utf8').catch(() => '');
+
+/**
+ * Loads the profiles and the outcomes of one build of the store. Each is read through openStore
+ * (checksums verified); the manifest is read before and after, and a store swapped in between (a
+ * rebuild finishing meanwhile) is read again, so the two never come from different builds.
+ */
+export async function loadServedStore(dir: string): Promise<ServedStore> {
+  for (let attempt = 1; ; attempt++) {
+    const before = await manifestText(dir);
+    const store = await loadProfileStore(dir);
+    const outcomes = await loadOutcomes(dir, store).catch((e: unknown) => {
+      if (e instanceof StoreError) return e;
+      throw e;
+    });
+    if ((await manifestText(dir)) === before) return { store, outcomes };
+    if (attempt >= ATTEMPTS) {
+      throw new StoreError('kindred.store.corrupt', `${dir} changed ${ATTEMPTS} times while it was read; try the reload again when the build is done`, { dir });
+    }
+  }
+}
