@@ -28,7 +28,8 @@ export function salaryOf(store: ProfileStore, player: number, season: number): n
  * with a known salary (contracts.csv, one salary per player and season, whatever the level) at or under
  * the limit. Player-seasons without a salary are left out and counted, as are those over the limit.
  * Each comp carries its salary, its likeness per million USD and whether it is on the value frontier
- * among the listed comps (valueFrontier, on the likeness as shown, in whichever space the comps were ranked).
+ * among the listed comps (valueFrontier, with the comps' rank as the measure of likeness: no comp ranked
+ * above him is paid as little or less).
  */
 export function findCheaperComps(store: ProfileStore, target: Target, options: CheaperOptions): CheaperResult {
   const g = store.groups.get(target.group);
@@ -69,9 +70,11 @@ export function findCheaperComps(store: ProfileStore, target: Target, options: C
   };
   const found = findCompsWithRows(store, target, { ...options.comps, filter: { ...options.comps.filter, include: underLimit } });
 
-  const shown = found.result.comps.map((c) => c.likeness);
+  // "More alike" is the comps' own order (exact distance, whichever space ranked them): the rounded
+  // likeness would tie comps that the ranking tells apart.
+  const order = found.result.comps.map((c) => -c.rank);
   const salaries = found.rows.map((row) => salaryOf(store, g.player[row] as number, g.season[row] as number) ?? NaN);
-  const frontier = valueFrontier(shown, salaries);
+  const frontier = valueFrontier(order, salaries);
   const comps: CheaperComp[] = found.result.comps.map((c, i) => ({
     ...c,
     salary_usd: salaries[i] as number,

@@ -130,7 +130,7 @@ export interface CheaperComp extends Comp {
   readonly salary_usd: number;
   /** Likeness per million USD of salary. */
   readonly likeness_per_million: number;
-  /** No other listed comp is at least as alike and at most as expensive, and better on one of the two. */
+  /** On the value frontier: no listed comp ranked above him (more alike) is paid as little or less. */
   readonly frontier: boolean;
 }
 

@@ -28,7 +28,7 @@ export function cheaperTable(result: CheaperResult): string {
     t.push([String(c.rank), `${c.name} (${c.player_id})`, String(c.season), c.level, c.position, c.likeness.toFixed(0), formatUsd(c.salary_usd), c.likeness_per_million.toFixed(1), c.frontier ? 'yes' : '']);
   }
   lines.push(t.toString());
-  lines.push('Front: on the value frontier (no other comp listed is both at least as alike and at most as paid).');
+  lines.push('Front: on the value frontier (every comp listed above him, more alike, is paid more).');
   lines.push('Salaries are as paid in their own seasons (not adjusted between seasons).');
   return lines.join('\n') + '\n';
 }

@@ -24,3 +24,16 @@ export async function buildSimStore(options: SimOptions = TEST_LEAGUE): Promise<
   await buildStore(rosterDir, storeDir, { lenient: false });
   return { dir, rosterDir, storeDir, remove: () => rm(dir, { recursive: true, force: true }) };
 }
+
+import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import type { TargetRow } from '../../src/query/selectTargetRow.ts';
+import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
+
+/** Rows of a group that pass a test, in row order. */
+export function rowsWhere(store: ProfileStore, group: PositionGroup, test: (row: number) => boolean): TargetRow[] {
+  const g = store.groups.get(group);
+  const out: TargetRow[] = [];
+  if (!g) return out;
+  for (let i = 0; i < g.n; i++) if (test(i)) out.push({ group, row: i });
+  return out;
+}
