@@ -15,7 +15,9 @@ import { simulateLeague } from '../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
 import { buildStore } from '../src/build/buildStore.ts';
 import { loadProfileStore } from '../src/query/loadProfileStore.ts';
-import { DEFAULT_COMPS_OPTIONS } from '../src/query/findComps.ts';
+import { DEFAULT_COMPS_OPTIONS, findComps } from '../src/query/findComps.ts';
+import { playerTarget } from '../src/query/playerTarget.ts';
+import type { ProfileStore } from '../src/query/ProfileStore.ts';
 import { readRoster } from '../src/ingest/readRoster.ts';
 import { buildProfiles } from '../src/profiles/buildProfiles.ts';
 import { embedProfiles } from '../src/build/embedProfiles.ts';
@@ -84,6 +86,7 @@ export async function runEmbedQuality(playerSeasons: number, spaces: readonly Va
         }
       }
       results.set(space, cells);
+      lines.push(`  ${latency(store)}`);
       lines.push(`  queries ${((performance.now() - started) / 1000 - summary.seconds).toFixed(1)} s`);
     }
     lines.push(`comps quality, ${playerSeasons.toLocaleString('en-US')} simulated player-seasons, seed ${seed} (ratio to the ideal; 1.00 is perfect, lower is better)`);
@@ -100,6 +103,37 @@ export async function runEmbedQuality(playerSeasons: number, spaces: readonly Va
     await rm(dir, { recursive: true, force: true });
   }
   return lines;
+}
+
+/** Query latency with the default options (index when the pool is large, attributions on): p50 and p90 over 60 targets. */
+function latency(store: ProfileStore): string {
+  const times: number[] = [];
+  const methods = new Set<string>();
+  let sampled = 0;
+  let comps = 0;
+  let worstError = 0;
+  for (const group of GROUPS) {
+    const g = store.groups.get(group);
+    if (!g) continue;
+    for (let i = 0; i < 12; i++) {
+      const row = Math.floor(((i + 0.5) / 12) * g.n);
+      const target = playerTarget(store, { group, row });
+      const t = performance.now();
+      const r = findComps(store, target, DEFAULT_COMPS_OPTIONS);
+      times.push(performance.now() - t);
+      methods.add(r.query.method);
+      for (const c of r.comps) {
+        comps++;
+        if ('attribution_method' in c && c.attribution_method === 'sampled' && 'attribution_error' in c && typeof c.attribution_error === 'number') {
+          sampled++;
+          worstError = Math.max(worstError, c.attribution_error / Math.max(c.attribution_total ?? 1, 1e-9));
+        }
+      }
+    }
+  }
+  times.sort((a, b) => a - b);
+  const q = (p: number): number => times[Math.min(times.length - 1, Math.floor(p * times.length))] ?? NaN;
+  return `query latency (k 10, ${[...methods].join('/')}): p50 ${q(0.5).toFixed(1)} ms, p90 ${q(0.9).toFixed(1)} ms; ${sampled} of ${comps} comps with sampled attributions, largest standard error ${(worstError * 100).toFixed(2)}% of the comp's distance`;
 }
 
 /** Embedding time of the largest hitter group of a league of about `rows` / 0.29 player-seasons. */

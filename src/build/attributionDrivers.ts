@@ -42,24 +42,48 @@ export function attributionDrivers(input: DriverInput, targets: number, comps: n
   const picked = order.subarray(0, Math.min(targets, n));
   const values: number[][] = Array.from({ length: d }, () => []);
   const rows: AttributionRow[] = [];
+  const ids = new Map<string, number>();
+  const player = Int32Array.from(input.players, (p) => {
+    const known = ids.get(p);
+    if (known !== undefined) return known;
+    ids.set(p, ids.size);
+    return ids.size - 1;
+  });
+  const bestD2 = new Float64Array(ids.size);
+  const bestRow = new Int32Array(ids.size);
   let compsSeen = 0;
   for (const t of picked) {
     const targetZ = Float64Array.from(z.subarray(t * d, (t + 1) * d));
     const targetCode = codes.subarray(t * dim, (t + 1) * dim);
-    const own = input.players[t];
-    const best = new Map<string, { row: number; d2: number }>();
+    const own = player[t] ?? -1;
+    bestD2.fill(Infinity);
     for (let i = 0; i < n; i++) {
-      const p = input.players[i] ?? '';
+      const p = player[i] ?? 0;
       if (p === own) continue;
       let s = 0;
       for (let q = 0; q < dim; q++) {
         const e = (codes[i * dim + q] ?? 0) - (targetCode[q] ?? 0);
         s += e * e;
       }
-      const prev = best.get(p);
-      if (!prev || s < prev.d2) best.set(p, { row: i, d2: s });
+      if (s < (bestD2[p] ?? Infinity)) {
+        bestD2[p] = s;
+        bestRow[p] = i;
+      }
     }
-    const nearest = [...best.values()].sort((a, b) => a.d2 - b.d2 || a.row - b.row).slice(0, comps);
+    // the `comps` closest players, kept sorted by (d2, row) with insertion
+    const nearest: { row: number; d2: number }[] = [];
+    const before = (x: { row: number; d2: number }, y: { row: number; d2: number }): boolean => x.d2 < y.d2 || (x.d2 === y.d2 && x.row < y.row);
+    for (let p = 0; p < ids.size; p++) {
+      const d2 = bestD2[p] ?? Infinity;
+      if (p === own || !Number.isFinite(d2)) continue;
+      const item = { row: bestRow[p] ?? 0, d2 };
+      const last = nearest[nearest.length - 1];
+      if (nearest.length >= comps && last && !before(item, last)) continue;
+      let at = nearest.length;
+      while (at > 0 && before(item, nearest[at - 1] ?? item)) at--;
+      nearest.splice(at, 0, item);
+      if (nearest.length > comps) nearest.pop();
+    }
     for (const c of nearest) {
       const compZ = Float64Array.from(z.subarray(c.row * d, (c.row + 1) * d));
       const a = attributeEmbedded(input.encode, targetZ, compZ, c.row + 1, DRIVER_ATTRIBUTION_EFFORT);

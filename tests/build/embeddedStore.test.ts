@@ -21,6 +21,7 @@ const QUICK = ['--max-epochs', '4', '--patience', '2', '--drivers', '8', '--seed
 
 interface AttributedJson {
   readonly distance: number;
+  readonly likeness: number;
   readonly attribution_total?: number;
   readonly attribution_error?: number;
   readonly attribution_method?: string;
@@ -65,7 +66,7 @@ describe('kindred build --embed', () => {
     expect(r.comps.length).toBe(8);
     const distances = r.comps.map((c) => c.distance);
     expect(distances).toEqual([...distances].sort((a, b) => a - b));
-    const likeness = r.comps.map((c) => (c as unknown as { likeness: number }).likeness);
+    const likeness = r.comps.map((c) => c.likeness);
     for (const l of likeness) expect(l).toBeGreaterThanOrEqual(0);
     for (const l of likeness) expect(l).toBeLessThanOrEqual(100);
     expect(likeness).toEqual([...likeness].sort((a, b) => b - a));
