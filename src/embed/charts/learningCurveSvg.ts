@@ -15,6 +15,7 @@ export function learningCurveSvg(history: LearningHistory, bestEpoch: number, ti
   history.train.forEach((loss, i) => values.push({ epoch: i + 1, loss, series: 'training' }));
   history.val.forEach((loss, i) => values.push({ epoch: i + 1, loss, series: 'validation' }));
   const best = history.val[bestEpoch - 1];
+  const late = bestEpoch > Math.max(history.train.length, history.val.length) / 2;
   const spec: TopLevelSpec = {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     title: { text: title, font: CHART_STYLE.font },
@@ -33,7 +34,7 @@ export function learningCurveSvg(history: LearningHistory, bestEpoch: number, ti
             type: 'nominal',
             title: null,
             scale: { domain: ['validation', 'training'], range: [CHART_STYLE.primary, CHART_STYLE.secondary] },
-            legend: { orient: 'top-right' },
+            legend: { orient: 'top', direction: 'horizontal' },
           },
           strokeDash: {
             field: 'series',
@@ -47,7 +48,8 @@ export function learningCurveSvg(history: LearningHistory, bestEpoch: number, ti
         layer: [
           { mark: { type: 'rule', color: CHART_STYLE.reference, strokeDash: [2, 2] }, encoding: { x: { field: 'epoch', type: 'quantitative' } } },
           {
-            mark: { type: 'text', align: 'left', baseline: 'top', dx: 4, dy: 4, y: 0, color: CHART_STYLE.reference },
+            // the label sits on the side of the rule with more room, so it never runs off the chart
+            mark: { type: 'text', align: late ? 'right' : 'left', baseline: 'top', dx: late ? -4 : 4, dy: 4, y: 0, color: CHART_STYLE.reference },
             encoding: { x: { field: 'epoch', type: 'quantitative' }, text: { field: 'label', type: 'nominal' } },
           },
         ],
