@@ -13,7 +13,7 @@ import { float32ToBytes } from '../store/float32Bytes.ts';
 import { indexVector } from '../query/indexVector.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.ts';
-import { embedProfiles, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
+import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
 import { stageCharts } from './stageCharts.ts';
 import { chartsFolderOf } from '../embed/groupEmbeddingFile.ts';
 import { computeOutcomes } from '../outlook/computeOutcomes.ts';
@@ -84,7 +84,7 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
     for (const [group, g] of profiles.groups) {
       const names = groupFileNames(group);
       let e: EmbeddedGroup | null = null;
-      if (embed.method !== 'none') {
+      if (embed.method !== 'none' && g.meta.length >= MIN_EMBED_ROWS && g.dims.length >= 2) {
         progress(`embedding ${group}`, done, profiles.groups.size);
         e = await embedProfiles(g, embed);
         for (const [name, content] of e.files) files.set(name, content);

@@ -11,6 +11,12 @@ import { embedGroup } from './embedGroup.ts';
 import { scaledEncoder } from '../embed/scaledEncoder.ts';
 import type { EmbedSettings } from './EmbedSettings.ts';
 
+/**
+ * Fewest rows a group needs to be embedded (a validation split, a PCA and a likeness scale need a
+ * few dozen at least; a project choice). Smaller groups stay in the input space, and their queries say so.
+ */
+export const MIN_EMBED_ROWS = 40;
+
 /** Random pairs drawn for the likeness scale. */
 const PAIR_SCALE_PAIRS = 20_000;
 
