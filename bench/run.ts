@@ -1,0 +1,38 @@
+/**
+ * `npm run bench`: every bench of the project, one after another, each in its own process so that
+ * memory figures are its own. Pass names to run a subset: `npm run bench -- core quality`.
+ * Figures are printed, never asserted: speed and memory goals are read, not tested.
+ */
+import { spawnSync } from 'node:child_process';
+import { join } from 'node:path';
+
+const BENCHES: readonly { name: string; file: string; args: readonly string[]; what: string }[] = [
+  { name: 'core', file: 'core.bench.ts', args: ['100000', '1000000'], what: 'build, load, comps latency and recall at 100k and 1M player-seasons' },
+  { name: 'quality', file: 'compsQuality.bench.ts', args: ['30000'], what: 'comps quality: plain z-scores against the default weights' },
+  { name: 'index', file: 'index.bench.ts', args: [], what: 'HNSW against brute force on random vectors' },
+  { name: 'embed', file: 'embed.bench.ts', args: [], what: 'autoencoder training time at 100,000 rows' },
+  { name: 'embed-quality', file: 'embedQuality.bench.ts', args: ['30000', 'none,pca,autoencoder'], what: 'comps quality in the input, PCA and autoencoder spaces' },
+  { name: 'outlook', file: 'outlook.bench.ts', args: [], what: 'prospect outlook calibration, Brier score and rank correlation against the base rate' },
+  { name: 'serve', file: 'serve.bench.ts', args: ['20', '20'], what: 'HTTP load on the comps endpoint (20 connections, 20 s)' },
+];
+
+const wanted = process.argv.slice(2);
+const unknown = wanted.filter((w) => !BENCHES.some((b) => b.name === w));
+if (unknown.length > 0) {
+  console.error(`unknown bench ${unknown.join(', ')}; known: ${BENCHES.map((b) => b.name).join(', ')}`);
+  process.exitCode = 2;
+} else {
+  let failed = 0;
+  for (const b of BENCHES) {
+    if (wanted.length > 0 && !wanted.includes(b.name)) continue;
+    console.log(`\n== ${b.name}: ${b.what}`);
+    const started = performance.now();
+    const run = spawnSync(process.execPath, ['--import', 'tsx', join(import.meta.dirname, b.file), ...b.args], { stdio: 'inherit' });
+    const seconds = ((performance.now() - started) / 1000).toFixed(0);
+    if (run.status !== 0) {
+      failed++;
+      console.log(`-- ${b.name} failed (exit ${run.status ?? run.signal}) after ${seconds} s`);
+    } else console.log(`-- ${b.name} done in ${seconds} s`);
+  }
+  if (failed > 0) process.exitCode = 1;
+}
