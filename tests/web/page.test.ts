@@ -93,6 +93,9 @@ beforeAll(async () => {
     if (m.type() === 'error') problems.push(`console: ${m.text()}`);
   });
   page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
+  await page.addInitScript(() => {
+    document.addEventListener('securitypolicyviolation', (e) => console.error(`content security policy blocked ${e.blockedURI} (${e.violatedDirective})`));
+  });
   page.on('requestfailed', (r) => problems.push(`request failed: ${r.url()}`));
   page.on('request', (r) => {
     if (!r.url().startsWith(srv.url) && !r.url().startsWith('blob:')) problems.push(`request off the server: ${r.url()}`);
