@@ -179,7 +179,10 @@ function groupFile(
   const levelIdx = new Map(levels.map((l, i) => [l, i]));
   const strata: GroupFile['strata'] = {};
   for (const [dim, map] of g.strata) {
-    strata[dim] = [...map].map(([key, s]) => [key, s.mean, s.sd, s.n, s.seasons[0], s.seasons[1]]);
+    // A stratum with a single value has no spread (sd NaN): it standardises nothing, so it is not kept.
+    strata[dim] = [...map]
+      .filter(([, s]) => Number.isFinite(s.mean) && Number.isFinite(s.sd))
+      .map(([key, s]) => [key, s.mean, s.sd, s.n, s.seasons[0], s.seasons[1]]);
   }
   return {
     group: g.group,
