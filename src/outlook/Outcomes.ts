@@ -104,7 +104,7 @@ export class Outcomes {
       peak_season: peakSeason,
     };
     const value = Number.isNaN(peak) ? null : peak;
-    return kind === 'hitter' ? { ...base, kind, peak_ops_plus: value } : { ...base, kind, peak_fip_minus: value };
+    return kind === 'hitter' ? { kind, ...base, peak_ops_plus: value } : { kind, ...base, peak_fip_minus: value };
   }
 }
 

@@ -66,7 +66,8 @@ const nan = (x: number | null): number => (x === null ? NaN : x);
  * (s + 1 .. s + horizon) is complete in the data; it is forecast from comps with outcomes cut off at s
  * (asOf = s: only comp seasons up to s - horizon, whose windows ended by s, as a club would have had),
  * and the forecast is compared with what the target then did. The same is done with the level-and-age
- * base rate (the pool's unweighted figures). One target per player: a fixed pseudo-random choice among
+ * base rate (the pool's unweighted figures). With a path of N seasons, only targets with the N - 1
+ * seasons before theirs profiled in the group qualify. One target per player: a fixed pseudo-random choice among
  * his qualifying seasons (Knuth's multiplicative hash of the player index), so players with long
  * minor-league careers do not count more.
  */
@@ -77,10 +78,16 @@ export function evaluateOutlook(store: ProfileStore, outcomes: Outcomes, options
   const candidates: { group: PositionGroup; row: number }[] = [];
   for (const [group, g] of store.groups) {
     if (options.groups && !options.groups.includes(group)) continue;
+    const seasonsOf = new Set<string>();
+    for (let i = 0; i < g.n; i++) seasonsOf.add(`${g.player[i]}|${g.season[i]}`);
+    const hasPath = (player: number, season: number): boolean => {
+      for (let j = 1; j < options.prospect.path; j++) if (!seasonsOf.has(`${player}|${season - j}`)) return false;
+      return true;
+    };
     const byPlayer = new Map<number, number[]>();
     for (let i = 0; i < g.n; i++) {
       const s = g.season[i] as number;
-      if (g.level[i] === top || Number.isNaN(g.age[i] as number)) continue;
+      if (g.level[i] === top || Number.isNaN(g.age[i] as number) || !hasPath(g.player[i] as number, s)) continue;
       if (s + horizon > outcomes.lastSeason || s - minHistory < outcomes.firstSeason) continue;
       const p = g.player[i] as number;
       const list = byPlayer.get(p);

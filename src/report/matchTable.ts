@@ -16,8 +16,9 @@ export function matchTable(result: MatchResult, dims: readonly DimensionInfo[]):
   const standing =
     c.percentile === null
       ? 'the pool is empty after the filters'
-      : `rank ${c.rank.toLocaleString('en-US')} of ${(c.pool_players + 1).toLocaleString('en-US')} pool players: more alike than ${c.percentile.toFixed(1)}% of the others`;
+      : `rank ${c.rank.toLocaleString('en-US')} of ${(c.pool_players + 1).toLocaleString('en-US')} players, more alike than ${c.percentile.toFixed(1)}% of the others`;
   lines.push(`In the pool: ${standing}${c.in_pool ? '' : ' (his season is outside the pool filters)'}`);
+  lines.push('(each player at his closest season; players sharing less than --min-coverage of the profile are not counted)');
   if (result.closest) lines.push(`Closest in the pool: ${result.closest.name} (${result.closest.player_id}), ${result.closest.season} ${result.closest.level}, likeness ${result.closest.likeness.toFixed(0)}`);
   lines.push('');
   const byName = new Map(dims.map((d) => [d.name, d]));

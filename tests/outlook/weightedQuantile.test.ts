@@ -12,6 +12,11 @@ describe('weightedQuantile(values, weights, p)', () => {
     expect(weightedQuantile([10, 20, 30], [1, 2, 1], 0.8)).toBeCloseTo(28, 12);
   });
 
+  it('gives the worked example of docs/jobs.md: 95 and 120 weighted 50 and 90 => p10 95, p50 111.07, p90 120', () => {
+    // positions (50 - 25) / 140 = 0.1786 and (140 - 45) / 140 = 0.6786 (by hand)
+    expect(weightedQuantiles([120, 95], [90, 50], [0.1, 0.5, 0.9])).toEqual([95, expect.closeTo(95 + ((0.5 - 25 / 140) / 0.5) * 25, 10), 120]);
+  });
+
   it('with equal weights is definition 5 of Hyndman and Fan (1996), R quantile(type = 5)', () => {
     // Definition 5: j = floor(n p + 1/2), g = n p + 1/2 - j, Q = x_j + g (x_{j+1} - x_j); for x = 1..10
     // p = .25 => n p + .5 = 3 => 3; p = .1 => 1.5; p = .9 => 9.5; p = .37 => 4.2 (by hand).
