@@ -19,8 +19,10 @@ const round = (x: number, digits: number): number | null => (Number.isNaN(x) ? n
  * Per-dimension breakdown of one comp: natural values (observed), grades (from the regressed,
  * standardised values), and each dimension's share of the weighted squared distance (the shares of
  * the dimensions in play sum to 1; when the profiles are identical the shares follow the weights).
- * `alike`: up to three of the heaviest-weighted dimensions that differ by at most CLOSE_MATCH_SD,
- * then the closest others; `apart`: up to three dimensions with the largest shares.
+ * `alike`: up to three of the dimensions that differ by at most CLOSE_MATCH_SD, heaviest weight first,
+ * a match away from the average counting more (score w * (1 + |mean of the two z-scores|): two
+ * catchers who both throw far better than average are more alike in a telling way than two average
+ * throwers); then the closest others. `apart`: up to three dimensions with the largest shares.
  */
 export function explainComp(
   dims: readonly DimensionInfo[],
@@ -63,7 +65,8 @@ export function explainComp(
   });
   const shared = dims.map((_, j) => j).filter((j) => inPlay[j]);
   const diff = (j: number): number => Math.abs((targetZ[j] as number) - (compZ[offset + j] as number));
-  const close = shared.filter((j) => diff(j) <= CLOSE_MATCH_SD).sort((a, b) => (weights[b] as number) - (weights[a] as number) || diff(a) - diff(b));
+  const telling = (j: number): number => (weights[j] as number) * (1 + Math.abs(((targetZ[j] as number) + (compZ[offset + j] as number)) / 2));
+  const close = shared.filter((j) => diff(j) <= CLOSE_MATCH_SD).sort((a, b) => telling(b) - telling(a) || diff(a) - diff(b));
   const rest = shared.filter((j) => diff(j) > CLOSE_MATCH_SD).sort((a, b) => diff(a) - diff(b));
   const alikeIdx = [...close, ...rest].slice(0, 3);
   const apartIdx = shared

@@ -50,3 +50,13 @@ describe('explainComp(dims, weights, target, comp)', () => {
     expect(ex.dimensions[1]?.share).toBeCloseTo(0.75, 12);
   });
 });
+
+describe('explainComp alike', () => {
+  it('ranks a close match far from average above an equally weighted close match at average', () => {
+    const w = Float64Array.from([1, 1, 1, 1, 1]);
+    const tz = Float64Array.from([0, 2, 0, 0, 0]);
+    const cz = Float32Array.from([0.1, 2.1, 3, 3, 3]);
+    const ex = explainComp(dims, w, tz, tz, cz, cz, 0);
+    expect(ex.alike.slice(0, 2)).toEqual(['b', 'a']);
+  });
+});
