@@ -1,5 +1,6 @@
 import { StoreError } from '../errors/KindredError.ts';
 import type { ProfileStore } from '../query/ProfileStore.ts';
+import { resolve } from 'node:path';
 import { openStore } from '../store/openStore.ts';
 import { Outcomes } from './Outcomes.ts';
 import { OUTCOMES_FILE, OUTCOMES_FORMAT, OUTCOMES_VERSION, outcomesFileSchema, type OutcomesFile } from './outcomesFile.ts';
@@ -31,12 +32,13 @@ export function parseOutcomesFile(text: string, where: string): OutcomesFile {
 }
 
 /**
- * The top-level outcomes of the store in `dir`, read through openStore (manifest and checksums
- * verified). A store built before outcomes were kept has no outcomes.json: StoreError
+ * The top-level outcomes of the store in `dir`, read through the store's verified OpenStore (the
+ * one the profiles were loaded from, when `dir` is that store's folder, so that both come from one
+ * build and the checksums are not verified twice). A store built before outcomes were kept has no outcomes.json: StoreError
  * `kindred.store.missing`, asking for a rebuild.
  */
 export async function loadOutcomes(dir: string, store: ProfileStore): Promise<Outcomes> {
-  const opened = await openStore(dir);
+  const opened = resolve(store.opened.dir) === resolve(dir) ? store.opened : await openStore(dir);
   if (!(OUTCOMES_FILE in opened.manifest.files)) {
     throw new StoreError('kindred.store.missing', `store at ${opened.dir} has no ${OUTCOMES_FILE} (built by an older kindred); rebuild it with kindred build`, {
       dir: opened.dir,

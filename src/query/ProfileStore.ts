@@ -3,6 +3,7 @@ import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
 import type { GuardedIndex } from '../index/GuardedIndex.ts';
+import type { OpenStore } from '../store/openStore.ts';
 import type { StoredEmbedding } from './StoredEmbedding.ts';
 
 export interface StoredPlayer {
@@ -42,6 +43,8 @@ export interface StoredGroup {
 
 export interface ProfileStore {
   readonly dir: string;
+  /** The verified store it was read from, for readers of further files (outcomes, embeddings). */
+  readonly opened: OpenStore;
   readonly params: Readonly<Record<string, unknown>>;
   readonly levels: readonly string[];
   readonly players: readonly StoredPlayer[];

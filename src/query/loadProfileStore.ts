@@ -93,5 +93,5 @@ export async function loadProfileStore(dir: string): Promise<ProfileStore> {
       ...(embedding ? { embedding } : {}),
     });
   }
-  return { dir, params: store.manifest.params, levels: pf.levels, players, playerById, salaries, groups };
+  return { dir, opened: store, params: store.manifest.params, levels: pf.levels, players, playerById, salaries, groups };
 }
