@@ -79,6 +79,13 @@ export function effectiveWeights(g: StoredGroup, options: CompsOptions): Float64
  * at his closest season, unless `allSeasons`. Falls back to a full scan of the pool when the
  * weighting differs from the one the index was built with, when the target lacks much of the
  * group's dimensions, when the pool is small, or on `exact`.
+ *
+ * In a store built with a learned space for the group (and the default weighting, see
+ * CompsOptions.space), the index holds the codes: candidates come from it (or a scan when the pool is
+ * small or on `exact`), the exact re-rank is by the Euclidean distance between codes (codeDistance2),
+ * likeness uses the group's pair scale, coverage and the per-dimension breakdown stay in the input
+ * space, and each comp's distance is attributed to the dimensions (attributeEmbedded,
+ * explainEmbeddedComp). docs/embedding.md has the whole story.
  */
 export function findComps(store: ProfileStore, target: Target, options: CompsOptions): CompsResult {
   return findCompsWithRows(store, target, options).result;
