@@ -11,6 +11,7 @@ import type { IndexParams } from '../index/types.ts';
 import { writeStore } from '../store/writeStore.ts';
 import { float32ToBytes } from '../store/float32Bytes.ts';
 import { indexVector } from '../query/indexVector.ts';
+import { partitionByCoverage, type CoveragePartition } from '../index/partitionByCoverage.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.ts';
 import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
@@ -50,7 +51,8 @@ export interface BuildSummary {
 }
 
 /**
- * Reads a roster folder, builds the profiles and one HNSW index per position group, and writes the
+ * Reads a roster folder, builds the profiles and HNSW indexes per position group (one per coverage
+ * pattern in the input space, one on the codes of a learned space), and writes the
  * store (temporary folder, then renamed into place). On bad input in strict mode nothing is written and
  * an existing store is left as it was.
  */
@@ -92,15 +94,27 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
         embedded[group] = { dim: e.dim, seconds: e.seconds };
       }
       progress(`index ${group}`, done, profiles.groups.size);
-      const vectors = e ? e.vectors : weightedVectors(g);
-      const d = e ? e.dim : g.dims.length;
-      const index = GuardedIndex.build(vectors, d, indexParams);
-      const indexPath = join(scratch, names.index);
-      index.save(indexPath);
-      files.set(names.index, await readFile(indexPath));
+      let mainIndex: GroupFile['index'] = null;
+      const partitions: GroupFile['partitions'] = [];
+      if (e) {
+        const index = GuardedIndex.build(e.vectors, e.dim, indexParams);
+        files.set(names.index, await savedIndex(index, join(scratch, names.index)));
+        mainIndex = { ...indexParams, dim: e.dim, count: g.meta.length };
+      } else {
+        const sqrtW = Float64Array.from(g.redundancy, Math.sqrt);
+        for (const [i, part] of partitionByCoverage(g.z, g.meta.length, g.dims.length).entries()) {
+          let meta: GroupFile['index'] = null;
+          if (part.rows.length >= PARTITION_INDEX_MIN_ROWS) {
+            const index = GuardedIndex.build(partitionVectors(g.z, g.dims.length, part, sqrtW), part.dims.length, indexParams);
+            files.set(names.partitionIndex(i), await savedIndex(index, join(scratch, names.partitionIndex(i))));
+            meta = { ...indexParams, dim: part.dims.length, count: part.rows.length };
+          }
+          partitions.push({ dims: [...part.dims], rows: [...part.rows], index: meta });
+        }
+      }
       files.set(names.raw, float32ToBytes(g.raw));
       files.set(names.z, float32ToBytes(g.z));
-      const gf = groupFile(g, playerIndex, roster.levels, { ...indexParams, dim: d, count: g.meta.length });
+      const gf = groupFile(g, playerIndex, roster.levels, mainIndex, partitions);
       files.set(names.json, JSON.stringify(e ? { ...gf, embedding: { space: e.space, dim: e.dim } } : gf));
       counts[group] = g.meta.length;
       done++;
@@ -140,6 +154,27 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
   };
 }
 
+/** A partition with fewer rows is scanned at query time instead of indexed (scanning is as fast, and exact). */
+export const PARTITION_INDEX_MIN_ROWS = 2000;
+
+async function savedIndex(index: GuardedIndex, path: string): Promise<Uint8Array> {
+  index.save(path);
+  return readFile(path);
+}
+
+/** A partition's index vectors: sqrt(weight) * z on the partition's dimensions, a rare missing value as 0. */
+export function partitionVectors(z: Float32Array, d: number, part: CoveragePartition, sqrtW: Float64Array): Float32Array {
+  const width = part.dims.length;
+  const out = new Float32Array(part.rows.length * width);
+  part.rows.forEach((row, r) => {
+    part.dims.forEach((j, k) => {
+      const v = z[row * d + j] as number;
+      out[r * width + k] = Number.isNaN(v) ? 0 : v * (sqrtW[j] as number);
+    });
+  });
+  return out;
+}
+
 /** Index vectors: sqrt(redundancy weight) * z, missing as 0 (see indexVector). */
 export function weightedVectors(g: GroupProfiles): Float32Array {
   const d = g.dims.length;
@@ -175,6 +210,7 @@ function groupFile(
   playerIndex: ReadonlyMap<string, number>,
   levels: readonly string[],
   index: GroupFile['index'],
+  partitions: GroupFile['partitions'],
 ): GroupFile {
   const levelIdx = new Map(levels.map((l, i) => [l, i]));
   const strata: GroupFile['strata'] = {};
@@ -201,5 +237,6 @@ function groupFile(
     },
     strata,
     index,
+    partitions,
   };
 }

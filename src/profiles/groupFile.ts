@@ -18,6 +18,8 @@ const dimensionInfoSchema = z.strictObject({
   stabilisation: z.number(),
 });
 
+const indexSchema = z.strictObject({ M: z.number(), efConstruction: z.number(), ef: z.number(), seed: z.number(), dim: z.number(), count: z.number() });
+
 export const groupFileSchema = z.strictObject({
   group: z.enum(POSITION_GROUPS),
   n: z.number().int().nonnegative(),
@@ -35,7 +37,19 @@ export const groupFileSchema = z.strictObject({
   }),
   /** Per dimension: [stratum key, mean, sd, n, first season, last season]. */
   strata: z.record(z.string(), z.array(z.tuple([z.string(), z.number(), z.number(), z.number(), z.number(), z.number()]))),
-  index: z.strictObject({ M: z.number(), efConstruction: z.number(), ef: z.number(), seed: z.number(), dim: z.number(), count: z.number() }),
+  /** The index of `group-<G>.hnsw` over all rows (the codes of a learned space); null in the input space. */
+  index: indexSchema.nullable(),
+  /**
+   * Input space: the rows split by coverage pattern (src/index/partitionByCoverage.ts), each with the
+   * dimensions its vectors hold and, when it is large enough, its own index `group-<G>.p<i>.hnsw`.
+   */
+  partitions: z.array(
+    z.strictObject({
+      dims: z.array(z.number().int().nonnegative()),
+      rows: z.array(z.number().int().nonnegative()),
+      index: indexSchema.nullable(),
+    }),
+  ),
   /**
    * Present when comps are ranked in a learned space: its kind and code size (the index then holds the
    * codes, `index.dim` = `dim`). The model, codes and summary are `group-<G>.{model.json,codes.f64,embedding.json}`.
@@ -62,9 +76,12 @@ export const playersFileSchema = z.strictObject({
 
 export type PlayersFile = z.infer<typeof playersFileSchema>;
 
-export const groupFileNames = (group: string): { json: string; raw: string; z: string; index: string } => ({
+export const groupFileNames = (
+  group: string,
+): { json: string; raw: string; z: string; index: string; partitionIndex: (i: number) => string } => ({
   json: `group-${group}.json`,
   raw: `group-${group}.raw.f32`,
   z: `group-${group}.z.f32`,
   index: `group-${group}.hnsw`,
+  partitionIndex: (i: number) => `group-${group}.p${i}.hnsw`,
 });

@@ -14,6 +14,15 @@ export interface StoredPlayer {
   readonly throws: Throws | null;
 }
 
+/** Rows that have the same dimensions, and the index on them (null when few enough to scan). */
+export interface StoredPartition {
+  /** Dimensions (column indices) of the index vectors. */
+  readonly dims: Int32Array;
+  /** Group rows; index label i is row rows[i]. */
+  readonly rows: Int32Array;
+  readonly index: GuardedIndex | null;
+}
+
 /** One position group as queries see it: columns of row metadata, the matrices, the index. */
 export interface StoredGroup {
   readonly group: PositionGroup;
@@ -36,7 +45,10 @@ export interface StoredGroup {
   readonly z: Float32Array;
   /** Per dimension, `${season}|${level}|${scope}` to stats. */
   readonly strata: ReadonlyMap<string, ReadonlyMap<string, StratumStats>>;
-  readonly index: GuardedIndex;
+  /** The index over all rows on the codes of a learned space; null in the input space (see partitions). */
+  readonly index: GuardedIndex | null;
+  /** Input space: the rows by coverage pattern, each with its index (null: scanned). Empty with a learned space. */
+  readonly partitions: readonly StoredPartition[];
   /** The learned space comps are ranked in, when the store was built with one (the index then holds its codes). */
   readonly embedding?: StoredEmbedding;
 }

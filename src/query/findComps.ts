@@ -1,7 +1,6 @@
 import { QueryError } from '../errors/KindredError.ts';
 import { eligibleRows } from './eligibleRows.ts';
 import { explainComp } from './explainComp.ts';
-import { indexVector } from './indexVector.ts';
 import { likeness } from './likeness.ts';
 import { missingAwareDistance, targetWeight } from './missingAwareDistance.ts';
 import type { PoolFilter } from './PoolFilter.ts';
@@ -75,7 +74,9 @@ export function effectiveWeights(g: StoredGroup, options: CompsOptions): Float64
 
 /**
  * Ranked comps for a target: HNSW proposes candidates from the pool (the target's own player is
- * never in it), an exact missing-aware distance orders them, and each comp player appears once,
+ * never in it; in the input space each coverage partition's index proposes its own, on the
+ * dimensions its rows have, so that seasons without tracking are not crowded out by seasons with it),
+ * an exact missing-aware distance orders them, and each comp player appears once,
  * at his closest season, unless `allSeasons`. Falls back to a full scan of the pool when the
  * weighting differs from the one the index was built with, when the target lacks much of the
  * group's dimensions, when the pool is small, or on `exact`.
@@ -129,21 +130,45 @@ export function findCompsWithRows(
     return options.allSeasons ? out : onePerPlayer(out, g);
   };
 
+  const sqrtW = Float64Array.from(g.redundancy, Math.sqrt);
+  /** Up to `c` candidates per index: from the codes' index, or from each coverage partition. */
+  const candidates = (c: number): number[] => {
+    if (targetCode) {
+      if (!g.index) return allEligible();
+      return g.index.search(Float32Array.from(targetCode), c, (label) => mask[label] === 1).labels;
+    }
+    const out: number[] = [];
+    for (const p of g.partitions) {
+      if (!p.index) {
+        for (const r of p.rows) if (mask[r] === 1) out.push(r);
+        continue;
+      }
+      const q = new Float32Array(p.dims.length);
+      p.dims.forEach((j, k) => {
+        const t = target.z[j] as number;
+        q[k] = Number.isNaN(t) ? 0 : t * (sqrtW[j] as number);
+      });
+      const rows = p.rows;
+      for (const label of p.index.search(q, Math.min(c, rows.length), (l) => mask[rows[l] as number] === 1).labels) out.push(rows[label] as number);
+    }
+    return out;
+  };
+  const allEligible = (): number[] => {
+    const rows: number[] = [];
+    for (let i = 0; i < g.n; i++) if (mask[i] === 1) rows.push(i);
+    return rows;
+  };
+
   let ranked: Scored[] = [];
   if (useIndex) {
-    const q = targetCode ? Float32Array.from(targetCode) : new Float32Array(g.d);
-    if (!targetCode) indexVector(target.z, 0, Float64Array.from(g.redundancy, Math.sqrt), q, 0);
     let c = Math.min(count, options.candidates ?? Math.max(CANDIDATES_MIN, 20 * options.k));
     for (;;) {
-      const hits = g.index.search(q, c, (label) => mask[label] === 1);
-      ranked = rank(hits.labels);
+      ranked = rank(candidates(c));
       if (ranked.length >= options.k || c >= count) break;
       c = Math.min(count, c * 4);
     }
   } else {
-    const rows: number[] = [];
-    for (let i = 0; i < g.n; i++) if (mask[i] === 1) rows.push(i);
-    ranked = rank(rows);
+    ranked = rank(allEligible());
   }
 
   const comps: Comp[] = ranked.slice(0, options.k).map((s, i) => {

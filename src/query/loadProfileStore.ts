@@ -5,7 +5,7 @@ import { StoreError } from '../errors/KindredError.ts';
 import { groupFileNames, groupFileSchema, playersFileSchema } from '../profiles/groupFile.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
-import type { ProfileStore, StoredGroup, StoredPlayer } from './ProfileStore.ts';
+import type { ProfileStore, StoredGroup, StoredPartition, StoredPlayer } from './ProfileStore.ts';
 import type { z } from 'zod';
 import { loadGroupEmbedding } from './loadGroupEmbedding.ts';
 
@@ -64,10 +64,26 @@ export async function loadProfileStore(dir: string): Promise<ProfileStore> {
     const embedding = gf.embedding
       ? await loadGroupEmbedding(store, group, { space: gf.embedding.space, dim: gf.embedding.dim, d, n: gf.n, dims: gf.dims.map((x) => x.name) })
       : undefined;
-    if (gf.index.dim !== (embedding ? embedding.dim : d) || gf.index.count !== gf.n) {
-      throw new StoreError('kindred.store.corrupt', `${dir}/${names.json}: index metadata does not match the profiles; rebuild the store`, { file: names.json });
+    const bad = (what: string): StoreError =>
+      new StoreError('kindred.store.corrupt', `${dir}/${names.json}: ${what}; rebuild the store`, { file: names.json });
+    let index: GuardedIndex | null = null;
+    if (embedding) {
+      if (!gf.index || gf.index.dim !== embedding.dim || gf.index.count !== gf.n) throw bad('index metadata does not match the codes');
+      index = GuardedIndex.load(store.path(names.index), gf.index);
     }
-    const index = GuardedIndex.load(store.path(names.index), gf.index);
+    const partitions: StoredPartition[] = [];
+    let covered = 0;
+    for (const [i, p] of gf.partitions.entries()) {
+      if (p.dims.some((j) => j >= d) || p.rows.some((r) => r >= gf.n)) throw bad(`partition ${i} points past the profiles`);
+      if (p.index && (p.index.dim !== p.dims.length || p.index.count !== p.rows.length)) throw bad(`partition ${i} index metadata does not match`);
+      covered += p.rows.length;
+      partitions.push({
+        dims: Int32Array.from(p.dims),
+        rows: Int32Array.from(p.rows),
+        index: p.index ? GuardedIndex.load(store.path(names.partitionIndex(i)), p.index) : null,
+      });
+    }
+    if (!embedding && covered !== gf.n) throw bad(`partitions hold ${covered} of ${gf.n} rows`);
     const strata = new Map<string, Map<string, StratumStats>>();
     for (const [dim, list] of Object.entries(gf.strata)) {
       strata.set(dim, new Map(list.map(([key, mean, sd, n, from, to]) => [key, { mean, sd, n, seasons: [from, to] as const }])));
@@ -90,6 +106,7 @@ export async function loadProfileStore(dir: string): Promise<ProfileStore> {
       z: zz,
       strata,
       index,
+      partitions,
       ...(embedding ? { embedding } : {}),
     });
   }
