@@ -13,6 +13,19 @@ export function eligibleRows(
   excludePlayers: ReadonlySet<number>,
 ): { mask: Uint8Array; count: number } {
   const mask = new Uint8Array(g.n);
+  if (isEmptyFilter(filter)) {
+    // the common case, a pool of everyone but the target: a fill and the excluded players' rows
+    mask.fill(1);
+    let count = g.n;
+    const byPlayer = rowsByPlayer(g);
+    for (const p of excludePlayers) {
+      for (const r of byPlayer.get(p) ?? []) {
+        mask[r] = 0;
+        count--;
+      }
+    }
+    return { mask, count };
+  }
   const levelSet = filter.levels ? new Set(filter.levels.map((l) => store.levels.indexOf(l))) : null;
   const posSet = filter.positions ? new Set(filter.positions) : null;
   const batsSet = filter.bats ? new Set(filter.bats) : null;
@@ -39,4 +52,36 @@ export function eligibleRows(
     count++;
   }
   return { mask, count };
+}
+
+function isEmptyFilter(f: PoolFilter): boolean {
+  return (
+    f.levels === undefined &&
+    f.seasonFrom === undefined &&
+    f.seasonTo === undefined &&
+    f.ageMin === undefined &&
+    f.ageMax === undefined &&
+    f.bats === undefined &&
+    f.throws === undefined &&
+    f.positions === undefined &&
+    f.include === undefined
+  );
+}
+
+const byPlayerCache = new WeakMap<StoredGroup, Map<number, number[]>>();
+
+/** A group's rows per player, built once per loaded group. */
+function rowsByPlayer(g: StoredGroup): Map<number, number[]> {
+  let m = byPlayerCache.get(g);
+  if (!m) {
+    m = new Map();
+    for (let i = 0; i < g.n; i++) {
+      const p = g.player[i] as number;
+      const list = m.get(p);
+      if (list) list.push(i);
+      else m.set(p, [i]);
+    }
+    byPlayerCache.set(g, m);
+  }
+  return m;
 }
