@@ -1,3 +1,5 @@
+import { PearsonSums } from '../stats/PearsonSums.ts';
+
 /**
  * Dimension weights that count each lasting skill about once:
  *
@@ -42,25 +44,14 @@ export function correlationMatrix(z: Float64Array, n: number, d: number, minPair
   for (let i = 0; i < d; i++) {
     r[i * d + i] = 1;
     for (let j = i + 1; j < d; j++) {
-      let c = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0;
+      const sums = new PearsonSums();
       for (let row = 0; row < n; row += step) {
         const x = z[row * d + i] as number;
         const y = z[row * d + j] as number;
-        if (Number.isNaN(x) || Number.isNaN(y)) continue;
-        c++;
-        sx += x;
-        sy += y;
-        sxx += x * x;
-        syy += y * y;
-        sxy += x * y;
+        if (!Number.isNaN(x) && !Number.isNaN(y)) sums.add(x, y);
       }
-      let v = 0;
-      if (c >= minPairs) {
-        const cov = sxy - (sx * sy) / c;
-        const vx = sxx - (sx * sx) / c;
-        const vy = syy - (sy * sy) / c;
-        v = vx > 0 && vy > 0 ? cov / Math.sqrt(vx * vy) : 0;
-      }
+      const rho = sums.correlation();
+      const v = sums.n >= minPairs && !Number.isNaN(rho) ? rho : 0;
       r[i * d + j] = v;
       r[j * d + i] = v;
     }

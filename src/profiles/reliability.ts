@@ -1,3 +1,5 @@
+import { PearsonSums } from '../stats/PearsonSums.ts';
+
 /**
  * Season-to-season reliability of each standardised dimension: the Pearson correlation between a
  * player's value in one season and in his next (or at a second level the same season), over every
@@ -31,22 +33,14 @@ export function reliability(
   }
   const out = new Float64Array(d);
   for (let j = 0; j < d; j++) {
-    let c = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0;
+    const sums = new PearsonSums();
     for (const [a, b] of pairs) {
       const x = z[a * d + j] as number;
       const y = z[b * d + j] as number;
-      if (Number.isNaN(x) || Number.isNaN(y)) continue;
-      c++;
-      sx += x;
-      sy += y;
-      sxx += x * x;
-      syy += y * y;
-      sxy += x * y;
+      if (!Number.isNaN(x) && !Number.isNaN(y)) sums.add(x, y);
     }
-    const cov = sxy - (sx * sy) / c;
-    const vx = sxx - (sx * sx) / c;
-    const vy = syy - (sy * sy) / c;
-    out[j] = c >= minPairs && vx > 0 && vy > 0 ? Math.min(1, Math.max(0.02, cov / Math.sqrt(vx * vy))) : fallback;
+    const rho = sums.correlation();
+    out[j] = sums.n >= minPairs && !Number.isNaN(rho) ? Math.min(1, Math.max(0.02, rho)) : fallback;
   }
   return out;
 }
