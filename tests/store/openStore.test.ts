@@ -1,3 +1,4 @@
+import { STORE_FORMAT_VERSION } from '../../src/store/manifest.ts';
 import { readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
@@ -89,11 +90,11 @@ describe('openStore(dir)', () => {
 
   it('refuses a wrong version, saying which was found and which is expected', async () => {
     editManifest((m) => {
-      m['version'] = 2;
+      m['version'] = STORE_FORMAT_VERSION + 1;
     });
     await expect(openStore(dir)).rejects.toMatchObject({
       code: 'kindred.store.version',
-      message: expect.stringMatching(/version 2, expected kindred-store version 1; rebuild the store/),
+      message: expect.stringContaining(`version ${STORE_FORMAT_VERSION + 1}, expected kindred-store version ${STORE_FORMAT_VERSION}; rebuild the store`),
     });
   });
 
