@@ -123,14 +123,27 @@ export function findCompsWithRows(
     if (emb && targetCode) return { row, d2: codeDistance2(targetCode, emb.codes, row * emb.dim), coverage: p.coverage };
     return { row, d2: p.d2, coverage: p.coverage };
   };
+  /** Closer first; between equal distances the later season. */
+  const before = (a: Scored, b: Scored): number => a.d2 - b.d2 || (g.season[b.row] as number) - (g.season[a.row] as number);
+  /** The k best scored rows, each player once (at his closest season) unless allSeasons. */
   const rank = (rows: Iterable<number>): Scored[] => {
-    const out: Scored[] = [];
+    const kept: Scored[] = [];
+    const bestOf = new Map<number, number>();
     for (const r of rows) {
       const s = score(r);
-      if (s.coverage >= options.minCoverage && Number.isFinite(s.d2)) out.push(s);
+      if (!(s.coverage >= options.minCoverage) || !Number.isFinite(s.d2)) continue;
+      if (options.allSeasons) {
+        kept.push(s);
+        continue;
+      }
+      const p = g.player[r] as number;
+      const at = bestOf.get(p);
+      if (at === undefined) {
+        bestOf.set(p, kept.length);
+        kept.push(s);
+      } else if (before(s, kept[at] as Scored) < 0) kept[at] = s;
     }
-    out.sort((a, b) => a.d2 - b.d2 || (g.season[b.row] as number) - (g.season[a.row] as number));
-    return options.allSeasons ? out : onePerPlayer(out, g);
+    return topK(kept, options.k, before);
   };
 
   const sqrtW = Float64Array.from(g.redundancy, Math.sqrt);
@@ -229,16 +242,17 @@ export function findCompsWithRows(
   return { result, rows: ranked.slice(0, options.k).map((s) => s.row) };
 }
 
-function onePerPlayer(sorted: readonly Scored[], g: StoredGroup): Scored[] {
-  const seen = new Set<number>();
-  const out: Scored[] = [];
-  for (const s of sorted) {
-    const p = g.player[s.row] as number;
-    if (seen.has(p)) continue;
-    seen.add(p);
-    out.push(s);
+/**
+ * The k first items in the given order, without sorting them all: the k-th smallest distance (a native
+ * numeric sort of the distances) bounds the few that need the full comparison.
+ */
+function topK(items: Scored[], k: number, order: (a: Scored, b: Scored) => number): Scored[] {
+  if (items.length > 4 * k) {
+    const d = Float64Array.from(items, (s) => s.d2).sort();
+    const bound = d[k - 1] as number;
+    items = items.filter((s) => s.d2 <= bound);
   }
-  return out;
+  return items.sort(order).slice(0, k);
 }
 
 const round = (x: number, digits: number): number => Number(x.toFixed(digits));
