@@ -1,7 +1,8 @@
 /**
  * Keeps the documentation's examples true: re-runs every command shown in a ```text block of the given
  * Markdown files (lines starting with "$ ") from the repository root and writes back what it printed
- * (stdout and stderr, in order). `npx kindred` runs as `node bin/kindred.js`. A line "$ ..." whose
+ * (stdout and stderr, in order). `npx kindred` runs as `node bin/kindred.js`, so that a command
+ * started in the background (`&`, `$!`) is the server itself. A line "$ ..." whose
  * block should keep only its first lines can end in "  # first N lines".
  *
  *   node --import tsx tools/refreshExamples.ts README.md docs/jobs.md
@@ -12,9 +13,9 @@ import { readFile, rename, writeFile } from 'node:fs/promises';
 const root = new URL('..', import.meta.url).pathname;
 
 function run(command: string): string {
-  const shell = command.replace(/\s+#\s*first \d+ lines\s*$/, '').replace(/^npx kindred\b/, 'node bin/kindred.js').replace(/\| *npx kindred\b/g, '| node bin/kindred.js');
+  const shell = command.replace(/\s+#\s*first \d+ lines\s*$/, '').replaceAll('npx kindred', 'node bin/kindred.js');
   try {
-    return execFileSync('bash', ['-c', `${shell} 2>&1`], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 26 });
+    return execFileSync('bash', ['-c', `{ ${shell} ; } 2>&1`], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 26 });
   } catch (e) {
     // a command that exits non-zero (an error example) still prints; keep what it printed
     if (typeof e === 'object' && e !== null && 'stdout' in e && typeof e.stdout === 'string') return e.stdout;
@@ -36,7 +37,8 @@ for (const file of process.argv.slice(2)) {
       if (!line.startsWith('$ ')) continue;
       const command = line.slice(2);
       const keep = /#\s*first (\d+) lines\s*$/.exec(command);
-      let printed = run(command).replace(/\s+$/, '').split('\n');
+      const text = run(command).replace(/\s+$/, '');
+      let printed = text === '' ? [] : text.split('\n');
       if (keep) printed = [...printed.slice(0, Number(keep[1])), '...'];
       out.push(line, ...printed.map((l) => l.trimEnd()));
     }
