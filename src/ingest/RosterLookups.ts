@@ -39,6 +39,14 @@ export class RosterLookups {
     return id;
   }
 
+  /** Reads whose season row it is: a known player_id, the season, a known level and the optional team. */
+  stintOf(
+    row: RowReader,
+    c: { readonly playerId: Column; readonly season: Column; readonly level: Column; readonly team: Column },
+  ): { readonly playerId: string; readonly season: number; readonly level: string; readonly team: string | undefined } {
+    return { playerId: this.player(row, c.playerId), season: row.season(c.season), level: this.level(row, c.level), team: row.textOpt(c.team) };
+  }
+
   /** Reads a level that must be in the known order. */
   level(row: RowReader, col: Column): string {
     const level = row.text(col);

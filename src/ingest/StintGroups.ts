@@ -1,6 +1,18 @@
 import type { RowReader } from './RowReader.ts';
 
 /**
+ * Who a stint row belongs to: the season key (player, season, level, and a further `part` such as the
+ * position; `part: null` when that part could not be read) and the team that tells stints apart.
+ */
+export interface StintKey {
+  readonly playerId: string;
+  readonly season: number;
+  readonly level: string;
+  readonly team: string | undefined;
+  readonly part?: string | null;
+}
+
+/**
  * The stints of each player-season key, in file order, with the line of each.
  * Finds same-key duplicates (same season key and the same `sub` key, e.g.
  * the team) and names both lines, also when the earlier row was rejected.
@@ -32,6 +44,26 @@ export class StintGroups<S> {
     if (first === undefined) return;
     row.report('kindred.input.duplicateKey', undefined, shown,
       `one row per ${this.describe} (line ${first} has the same key; this is line ${row.line})`);
+  }
+
+  /**
+   * Checks a stint row's key for a duplicate, then settles the row (`settle` reports its issues).
+   * Returns the season key when the row is clean; null when it is left out, its key remembered so a
+   * later duplicate still names its line. A key that could not be read is not checked.
+   */
+  settleRow(row: RowReader, k: StintKey, settle: () => boolean, subOf: (s: S) => string): string | null {
+    const keyed = k.playerId !== '' && !Number.isNaN(k.season) && k.level !== '' && k.part !== null;
+    const key = k.part === undefined || k.part === null
+      ? `${k.playerId}\u0000${k.season}\u0000${k.level}`
+      : `${k.playerId}\u0000${k.season}\u0000${k.level}\u0000${k.part}`;
+    const sub = k.team ?? '';
+    if (keyed) {
+      const shown = `${k.playerId} ${k.season} ${k.level} ${k.team ?? '(no team)'}${k.part ? ` ${k.part}` : ''}`;
+      this.checkDuplicate(row, key, sub, shown, subOf);
+    }
+    if (settle()) return key;
+    if (keyed) this.rejectedRow(key, sub, row.line);
+    return null;
   }
 
   /** Remembers a rejected row's key so a later row with the same key is still reported. */

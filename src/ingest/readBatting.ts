@@ -32,10 +32,7 @@ export async function readBatting(
     return (cells, line) => {
       const { row } = ctx;
       row.start(line, cells);
-      const playerId = lookups.player(row, c.playerId);
-      const season = row.season(c.season);
-      const level = lookups.level(row, c.level);
-      const team = row.textOpt(c.team);
+      const { playerId, season, level, team } = lookups.stintOf(row, c);
       const G = row.countOpt(c.G);
       const PA = row.count(c.PA);
       const AB = row.count(c.AB);
@@ -68,14 +65,8 @@ export async function readBatting(
       hardHitWatch.see(hardHitPct, line);
       sweetSpotWatch.see(sweetSpotPct, line);
 
-      const keyed = playerId !== '' && !Number.isNaN(season) && level !== '';
-      const key = `${playerId}\u0000${season}\u0000${level}`;
-      const sub = team ?? '';
-      if (keyed) groups.checkDuplicate(row, key, sub, `${playerId} ${season} ${level} ${team ?? '(no team)'}`, teamOf);
-      if (!ctx.settle()) {
-        if (keyed) groups.rejectedRow(key, sub, line);
-        return;
-      }
+      const key = groups.settleRow(row, { playerId, season, level, team }, () => ctx.settle(), teamOf);
+      if (key === null) return;
       const stint: Writable<BattingSeason> = {
         playerId, season, level, teams: team === undefined ? [] : [team],
         PA, AB, H, doubles, triples, HR, BB, HBP, SF, SO,

@@ -36,10 +36,7 @@ export async function readFielding(
     return (cells, line) => {
       const { row } = ctx;
       row.start(line, cells);
-      const playerId = lookups.player(row, c.playerId);
-      const season = row.season(c.season);
-      const level = lookups.level(row, c.level);
-      const team = row.textOpt(c.team);
+      const { playerId, season, level, team } = lookups.stintOf(row, c);
       const pos = row.oneOf(c.pos, POSITIONS, 'a position: C, 1B, 2B, 3B, SS, LF, CF, RF (or P, read and skipped)');
       const G = row.countOpt(c.G);
       const outs = row.thirds(c.inn);
@@ -53,17 +50,9 @@ export async function readFielding(
       const csCaught = row.countOpt(c.csCaught);
       row.atMost(c.csCaught, 'cs_caught', csCaught, 'sb_against', sbAgainst);
 
-      const keyed = playerId !== '' && !Number.isNaN(season) && level !== '' && pos !== undefined;
-      const key = `${playerId}\u0000${season}\u0000${level}\u0000${pos ?? ''}`;
-      const sub = team ?? '';
       const target = pos === 'P' ? pitcherTeams : groups;
-      if (keyed) {
-        target.checkDuplicate(row, key, sub, `${playerId} ${season} ${level} ${team ?? '(no team)'} ${pos}`, teamOf);
-      }
-      if (!ctx.settle() || pos === undefined) {
-        if (keyed) target.rejectedRow(key, sub, line);
-        return;
-      }
+      const key = target.settleRow(row, { playerId, season, level, team, part: pos ?? null }, () => ctx.settle(), teamOf);
+      if (key === null || pos === undefined) return;
       const teams = team === undefined ? [] : [team];
       if (pos === 'P') {
         pitcherRows += 1;

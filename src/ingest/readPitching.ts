@@ -30,10 +30,7 @@ export async function readPitching(
     return (cells, line) => {
       const { row } = ctx;
       row.start(line, cells);
-      const playerId = lookups.player(row, c.playerId);
-      const season = row.season(c.season);
-      const level = lookups.level(row, c.level);
-      const team = row.textOpt(c.team);
+      const { playerId, season, level, team } = lookups.stintOf(row, c);
       const G = row.count(c.G);
       const GS = row.count(c.GS);
       const outs = row.thirds(c.IP);
@@ -56,14 +53,8 @@ export async function readPitching(
       whiffWatch.see(whiffPct, line);
       gbWatch.see(gbPct, line);
 
-      const keyed = playerId !== '' && !Number.isNaN(season) && level !== '';
-      const key = `${playerId}\u0000${season}\u0000${level}`;
-      const sub = team ?? '';
-      if (keyed) groups.checkDuplicate(row, key, sub, `${playerId} ${season} ${level} ${team ?? '(no team)'}`, teamOf);
-      if (!ctx.settle()) {
-        if (keyed) groups.rejectedRow(key, sub, line);
-        return;
-      }
+      const key = groups.settleRow(row, { playerId, season, level, team }, () => ctx.settle(), teamOf);
+      if (key === null) return;
       const stint: Writable<PitchingSeason> = {
         playerId, season, level, teams: team === undefined ? [] : [team],
         G, GS, outs, BF, H, HR, BB, HBP, SO, ER,
