@@ -1,28 +1,23 @@
 import { UsageError } from '../errors/KindredError.ts';
-import type { Activation } from '../embed/activation.ts';
-import { DEFAULT_TRAIN_OPTIONS, resolveTrainOptions } from '../embed/TrainOptions.ts';
+import { DEFAULT_TRAIN_OPTIONS, resolveTrainOptions, type TrainOptions } from '../embed/TrainOptions.ts';
 
 /** Which space a store's comps are ranked in. */
 export type EmbedMethod = 'none' | 'pca' | 'autoencoder';
 
 export const EMBED_METHODS: readonly EmbedMethod[] = ['none', 'pca', 'autoencoder'];
 
-/** Autoencoder settings of a build (see src/embed/TrainOptions.ts for each training setting). */
-export interface AutoencoderSettings {
+/** Training settings a build passes on as they are (each documented in src/embed/TrainOptions.ts). */
+type PassedTrainOptions = Pick<
+  TrainOptions,
+  'activation' | 'learningRate' | 'batchSize' | 'maxEpochs' | 'patience' | 'minDelta' | 'l2' | 'l1' | 'dropout' | 'valFraction'
+>;
+
+/** Autoencoder settings of a build: the training settings plus the network size and the capacity search. */
+export interface AutoencoderSettings extends PassedTrainOptions {
   /** Encoder hidden widths; null = the capacity ladder's widths (DEFAULT_CAPACITY_STEPS) or [16] for a fixed latent. */
   readonly hidden: readonly number[] | null;
   /** Code size, or 'search' for the capacity search. */
   readonly latent: number | 'search';
-  readonly activation: Activation;
-  readonly learningRate: number;
-  readonly batchSize: number;
-  readonly maxEpochs: number;
-  readonly patience: number;
-  readonly minDelta: number;
-  readonly l2: number;
-  readonly l1: number;
-  readonly dropout: number;
-  readonly valFraction: number;
   /** Capacity search: least relative gain in validation loss that justifies the next size. */
   readonly margin: number;
   /** Capacity search on a sample of whole players of at most this many rows; the chosen size is then trained on every row. */
