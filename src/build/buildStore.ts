@@ -10,8 +10,8 @@ import { GuardedIndex } from '../index/GuardedIndex.ts';
 import type { IndexParams } from '../index/types.ts';
 import { writeStore } from '../store/writeStore.ts';
 import { float32ToBytes } from '../store/float32Bytes.ts';
-import { indexVector } from '../query/indexVector.ts';
 import { partitionByCoverage, type CoveragePartition } from '../index/partitionByCoverage.ts';
+import { partitionVector } from '../index/partitionVector.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.ts';
 import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
@@ -162,26 +162,11 @@ async function savedIndex(index: GuardedIndex, path: string): Promise<Uint8Array
   return readFile(path);
 }
 
-/** A partition's index vectors: sqrt(weight) * z on the partition's dimensions, a rare missing value as 0. */
+/** A partition's index vectors, one partitionVector per row. */
 export function partitionVectors(z: Float32Array, d: number, part: CoveragePartition, sqrtW: Float64Array): Float32Array {
   const width = part.dims.length;
   const out = new Float32Array(part.rows.length * width);
-  part.rows.forEach((row, r) => {
-    part.dims.forEach((j, k) => {
-      const v = z[row * d + j] as number;
-      out[r * width + k] = Number.isNaN(v) ? 0 : v * (sqrtW[j] as number);
-    });
-  });
-  return out;
-}
-
-/** Index vectors: sqrt(redundancy weight) * z, missing as 0 (see indexVector). */
-export function weightedVectors(g: GroupProfiles): Float32Array {
-  const d = g.dims.length;
-  const n = g.meta.length;
-  const sqrtW = Float64Array.from(g.redundancy, Math.sqrt);
-  const out = new Float32Array(n * d);
-  for (let i = 0; i < n; i++) indexVector(g.z, i * d, sqrtW, out, i * d);
+  part.rows.forEach((row, r) => partitionVector(z, row * d, part.dims, sqrtW, out, r * width));
   return out;
 }
 

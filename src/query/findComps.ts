@@ -7,6 +7,7 @@ import type { PoolFilter } from './PoolFilter.ts';
 import type { ProfileStore, StoredGroup } from './ProfileStore.ts';
 import type { Target } from './Target.ts';
 import type { GuardedIndex } from '../index/GuardedIndex.ts';
+import { partitionVector } from '../index/partitionVector.ts';
 import type { Comp, CompsResult, QueryEcho } from './types.ts';
 import { userWeights, type WeightPreset } from './weightPresets.ts';
 import type { StoredEmbedding } from './StoredEmbedding.ts';
@@ -170,10 +171,7 @@ export function findCompsWithRows(
         continue;
       }
       const q = new Float32Array(p.dims.length);
-      p.dims.forEach((j, k) => {
-        const t = target.z[j] as number;
-        q[k] = Number.isNaN(t) ? 0 : t * (sqrtW[j] as number);
-      });
+      partitionVector(target.z, 0, p.dims, sqrtW, q, 0);
       const rows = p.rows;
       for (const r of searchPool(p.index, q, c, (label) => rows[label] as number, rows.length)) out.push(r);
     }
