@@ -12,6 +12,9 @@
  * (weaker opposition at lower levels); physical measurements (exit velocity,
  * sprint speed) use the talent alone. Batted-ball averages carry noise
  * sd / sqrt(bbe).
+ * `era` (talent units, default 0) moves the league's run environment: more
+ * power and less contact when positive (more home runs and strikeouts), at
+ * every level alike; the simulator's eraDrift option sets it by season.
  * Centre: a talent at MLB_CENTRE (a typical top-level regular) gives
  * top-level rates near OBP .320, K% 22, BB% 8.5, HR/PA 3%, EV 88.5 mph,
  * hard-hit 39%, sprint 27 ft/s (common practice, from memory).
@@ -45,16 +48,22 @@ const EV_SD = 14, LA_SD = 26;
 export function battingLine(
   rng: SeededRandom,
   t: Float64Array,
+  /** Row of the default level table (levelTable.ts), for the opposition shift. */
   level: number,
   pa: number,
   games: number,
   battedBall: boolean,
   sprint: boolean,
   row: Float64Array,
+  era = 0,
 ): void {
   const shift = LEVEL_SHIFT[level] ?? 0;
-  const contact = (t[H_CONTACT] ?? 0) - MLB_CENTRE.contact;
-  const power = (t[H_POWER] ?? 0) - MLB_CENTRE.power;
+  let contact = (t[H_CONTACT] ?? 0) - MLB_CENTRE.contact;
+  let power = (t[H_POWER] ?? 0) - MLB_CENTRE.power;
+  if (era !== 0) {
+    contact -= era;
+    power += era;
+  }
   const eye = (t[H_EYE] ?? 0) - MLB_CENTRE.eye;
   const speed = (t[H_SPEED] ?? 0) - MLB_CENTRE.speed;
   const xc = contact + shift, xp = power + shift, xe = eye + shift, xs = speed + shift * 0.5;

@@ -30,6 +30,11 @@
  *   lastSeason - 15 at every level. `sb_against` counts stolen-base attempts
  *   against a catcher (stolen plus caught), so cs_caught <= sb_against.
  * - Salaries (salary): top-level seasons only, for about 92% of them.
+ * - League parameters (SimOptions, all defaulting to the demo league's): the
+ *   level count (minorLevels, simLadder), promotion margin and chance, the
+ *   noise of a season's showing and of its stat lines, era drift of the run
+ *   environment, and a first season for minor-league records. bench/leagues.ts
+ *   holds the standard set of varied leagues the modelling benches use.
  * Everything is a pure function of the seed (SeededRandom).
  */
 export { simulateLeague, resolveSimOptions } from './simulateLeague.ts';
@@ -40,6 +45,7 @@ export { ColumnTable, type ColumnSpec, type ColumnFormat } from './ColumnTable.t
 export { SeededRandom } from './random.ts';
 export { HITTER_TALENTS, PITCHER_TALENTS, TALENT_NAMES, type SimKind } from './talentNames.ts';
 export { SIM_LEVELS } from './levelTable.ts';
+export { simLadder, type SimLadder } from './simLadder.ts';
 export { SIM_POSITIONS } from './simPositions.ts';
 export { DEMO_OPTIONS } from './demoOptions.ts';
 export type { SimOptions, ResolvedSimOptions, SimLeague, SimPlayers, MeasuredFrom } from './simTypes.ts';

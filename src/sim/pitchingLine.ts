@@ -8,7 +8,9 @@
  * linear-weights style estimate of the events with overdispersed noise.
  * Outcome rates get the level shift; the fastball's speed and spin are
  * physical (talent only). Whiff% is a binomial share of swings; GB% a
- * binomial share of batted balls. Centre: a typical top-level pitcher gives
+ * binomial share of batted balls. `era` (default 0) adds to stuff (more
+ * strikeouts when positive, at every level alike), the pitching side of the
+ * simulator's eraDrift. Centre: a typical top-level pitcher gives
  * K% ~22, BB% ~8, HR/BF ~3%, ERA ~4.2, FB ~93.5 mph, spin ~2290 rpm, whiff
  * ~25%, GB ~43% (common practice, from memory).
  *
@@ -37,6 +39,7 @@ const L_WHIFF = logit(0.25), L_GB = logit(0.43);
 export function pitchingLine(
   rng: SeededRandom,
   t: Float64Array,
+  /** Row of the default level table (levelTable.ts), for the opposition shift. */
   level: number,
   games: number,
   starts: number,
@@ -45,10 +48,11 @@ export function pitchingLine(
   tracking: boolean,
   groundball: boolean,
   row: Float64Array,
+  era = 0,
 ): void {
   // Pitchers climb the ladder further below the top level's talent than hitters, so their shift is larger.
   const shift = PITCHER_SHIFT_SCALE * (LEVEL_SHIFT[level] ?? 0);
-  const stuff = (t[P_STUFF] ?? 0) - MLB_PITCH_CENTRE.stuff;
+  const stuff = (t[P_STUFF] ?? 0) - MLB_PITCH_CENTRE.stuff + (era !== 0 ? era : 0);
   const control = (t[P_CONTROL] ?? 0) - MLB_PITCH_CENTRE.control;
   const gb = (t[P_GROUNDBALL] ?? 0) - MLB_PITCH_CENTRE.groundball;
   const velo = (t[P_VELOCITY] ?? 0) - MLB_PITCH_CENTRE.velocity;

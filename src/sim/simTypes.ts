@@ -34,6 +34,24 @@ export interface SimOptions {
   readonly measuredFrom?: Partial<MeasuredFrom>;
   /** Lowest level with tracking measurements (every column of MeasuredFrom but groundball; default 'AA'). */
   readonly trackedFromLevel?: string;
+  /** Minor levels below the top level: 5 (Rk, A, A+, AA, AAA; default), 4 (no A+) or 3 (A, AA, AAA); see simLadder. */
+  readonly minorLevels?: number;
+  /** Showing above the next level's bar needed for a promotion between seasons (default 0.05; higher promotes fewer). */
+  readonly promotionMargin?: number;
+  /** Chance that a good enough showing earns the promotion (default 1). */
+  readonly promotionChance?: number;
+  /** Standard deviation of a season's showing around true value, which drives promotion and release (default 0.3). */
+  readonly showingNoise?: number;
+  /** Standard deviation of a season's form (talent units, per talent), added to the talents behind the batting and pitching lines only (default 0). */
+  readonly statNoise?: number;
+  /**
+   * Change per season of the league's run environment, in talent units (default 0): at season s the stat lines
+   * get era = eraDrift * (s - midpoint of firstSeason..lastSeason): hitters more power and less contact, pitchers more
+   * stuff (battingLine, pitchingLine). The same at every level; true talents and careers are unaffected.
+   */
+  readonly eraDrift?: number;
+  /** Stat lines below the top level are recorded only from this season (default firstSeason: all). */
+  readonly minorsRecordedFrom?: number;
 }
 
 export interface ResolvedSimOptions {
@@ -45,6 +63,13 @@ export interface ResolvedSimOptions {
   readonly pitcherShare: number;
   readonly measuredFrom: MeasuredFrom;
   readonly trackedFromLevel: string;
+  readonly minorLevels: number;
+  readonly promotionMargin: number;
+  readonly promotionChance: number;
+  readonly showingNoise: number;
+  readonly statNoise: number;
+  readonly eraDrift: number;
+  readonly minorsRecordedFrom: number;
 }
 
 /** The players of a league, as parallel arrays indexed by player (id "p000001" is index 0). */

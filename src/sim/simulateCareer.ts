@@ -22,7 +22,7 @@ import type { Bats, Throws } from '../ingest/types.ts';
 import { ageOffset } from './ageCurve.ts';
 import { choosePosition, secondaryPosition, type HitterPosition } from './choosePosition.ts';
 import { drawHitterTalents, drawPitcherTalents } from './drawTalents.ts';
-import { LEVEL_BAR, LEVEL_MLB, LEVEL_RK, TYPICAL_AGE } from './levelTable.ts';
+import { simLadder, type SimLadder } from './simLadder.ts';
 import { hitterValue, pitcherValue } from './playerValue.ts';
 import type { SeededRandom } from './random.ts';
 import { HITTER_CURVES, PITCHER_CURVES } from './talentCurves.ts';
@@ -66,11 +66,23 @@ export interface Career {
   readonly active: boolean;
 }
 
+/** What drives movement on the ladder; the defaults are those of the demo league. */
+export interface CareerRules {
+  readonly ladder: SimLadder;
+  /** How far above the next level's bar a season's showing must be for a promotion (default 0.05). */
+  readonly promotionMargin: number;
+  /** Chance that a showing good enough earns the promotion (default 1: always). */
+  readonly promotionChance: number;
+  /** Standard deviation of a season's showing around the player's true value (default 0.3). */
+  readonly showingNoise: number;
+}
+
+export const DEFAULT_CAREER_RULES: CareerRules = { ladder: simLadder(), promotionMargin: 0.05, promotionChance: 1, showingNoise: 0.3 };
+
 const ENTRY_AGES = [17, 18, 19, 20, 21, 22, 23] as const;
 const ENTRY_WEIGHTS = [0.12, 0.25, 0.1, 0.1, 0.26, 0.13, 0.04] as const;
 const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31] as const;
 const WALK_SD = 0.06;
-const SHOWING_SD = 0.3;
 const LAST_AGE = 41;
 /** Value a Rk player is measured against (Rk itself has no bar). */
 const RK_FLOOR = -1.7;
@@ -84,8 +96,20 @@ function drawEntryAge(rng: SeededRandom): number {
   return 21;
 }
 
-function bar(level: number): number {
-  return level === LEVEL_RK ? RK_FLOOR : (LEVEL_BAR[level] ?? 0);
+/** The bar a player at `level` is measured against: the rookie level has none (RK_FLOOR). */
+function barOf(ladder: SimLadder, level: number): number {
+  return ladder.base[level] === 0 ? RK_FLOOR : (ladder.bar[level] ?? 0);
+}
+
+/** Entry level: the youngest start at the bottom, older entrants where their value fits (rows of the default table). */
+function entryLevel(ladder: SimLadder, entryAge: number, value: number): number {
+  const defaultBar = simLadder().bar;
+  let row = 0;
+  if ((entryAge >= 19 && value > (defaultBar[1] ?? 0) - 0.2) || entryAge >= 21) row = 1;
+  if (entryAge >= 21 && value > (defaultBar[2] ?? 0)) row = 2;
+  let level = 0;
+  for (let l = 0; l < ladder.base.length; l++) if ((ladder.base[l] ?? 99) <= row) level = l;
+  return level;
 }
 
 function drawBats(rng: SeededRandom, throws: Throws): Bats {
@@ -116,7 +140,11 @@ export function simulateCareer(
   lastSeason: number,
   teamsPerLevel: number,
   pitcherShare: number,
+  rules: CareerRules = DEFAULT_CAREER_RULES,
 ): Career {
+  const { ladder, promotionMargin, promotionChance, showingNoise } = rules;
+  const top = ladder.top;
+  const bar = (level: number): number => barOf(ladder, level);
   const kind: SimKind = rng.chance(pitcherShare) ? 'pitcher' : 'hitter';
   const width = kind === 'hitter' ? HITTER_TALENTS.length : PITCHER_TALENTS.length;
   const peak = new Float64Array(width);
@@ -152,7 +180,7 @@ export function simulateCareer(
   const peakValue = valueNow(peak);
   const walk = new Float64Array(width);
   const seasons: CareerSeason[] = [];
-  let level = LEVEL_RK;
+  let level = 0;
   let club = rng.int(teamsPerLevel);
   let active = true;
   for (let season = entrySeason; season <= lastSeason; season++) {
@@ -166,12 +194,9 @@ export function simulateCareer(
     if (kind === 'hitter' && position !== 'SP' && position !== 'RP') position = slidePosition(rng, position, age, talents);
     const value = valueNow(talents);
     if (season === entrySeason) {
-      // Entry level: the youngest start at Rk, older entrants where their value fits.
-      level = LEVEL_RK;
-      if ((entryAge >= 19 && value > (LEVEL_BAR[1] ?? 0) - 0.2) || entryAge >= 21) level = 1;
-      if (entryAge >= 21 && value > (LEVEL_BAR[2] ?? 0)) level = 2;
+      level = entryLevel(ladder, entryAge, value);
     }
-    const showing = value + SHOWING_SD * rng.normal();
+    const showing = value + showingNoise * rng.normal();
     const regular = value - bar(level) + 0.3 * rng.normal() > 0.15;
     let share = regular ? rng.uniform(0.75, 1.05) : rng.uniform(0.15, 0.65);
     if (rng.chance(0.1)) share *= rng.uniform(0.15, 0.7);
@@ -188,7 +213,7 @@ export function simulateCareer(
         stints.push({ level: lv, club: cl, share: sh });
       }
     };
-    if (level < LEVEL_MLB && season > entrySeason && showing > bar(level + 1) + 0.35 && rng.chance(0.45)) {
+    if (level < top && season > entrySeason && showing > bar(level + 1) + 0.35 && rng.chance(0.45)) {
       const first = rng.uniform(0.3, 0.7);
       push(level, club, share * first);
       level++;
@@ -201,9 +226,9 @@ export function simulateCareer(
 
     // Next season: retire or release, then promotion or demotion.
     const gap = bar(level) - showing;
-    const old = Math.max(0, age - (TYPICAL_AGE[level] ?? 27) - 1);
+    const old = Math.max(0, age - (ladder.typicalAge[level] ?? 27) - 1);
     let leave = 1 / (1 + Math.exp(3.2 - 2.0 * gap - 0.8 * old));
-    if (level === LEVEL_MLB) leave = (age >= 33 ? 0.12 + 0.07 * (age - 33) : 0.02) + (gap > 0.6 ? 0.2 : 0);
+    if (level === top) leave = (age >= 33 ? 0.12 + 0.07 * (age - 33) : 0.02) + (gap > 0.6 ? 0.2 : 0);
     if (age >= LAST_AGE) {
       active = false;
       break;
@@ -214,10 +239,10 @@ export function simulateCareer(
       break;
     }
     const before = level;
-    if (level < LEVEL_MLB && showing > bar(level + 1) + 0.05) level++;
-    else if (level > LEVEL_RK && gap > 0.45 && rng.chance(level === LEVEL_MLB ? 0.75 : 0.35)) level--;
+    if (level < top && showing > bar(level + 1) + promotionMargin && (promotionChance >= 1 || rng.chance(promotionChance))) level++;
+    else if (level > 0 && gap > 0.45 && rng.chance(level === top ? 0.75 : 0.35)) level--;
     if (level !== before || !rng.chance(0.85)) club = rng.int(teamsPerLevel);
-    if (kind === 'pitcher' && position === 'SP' && level >= 3 && gap > 0 && rng.chance(0.25)) position = 'RP';
+    if (kind === 'pitcher' && position === 'SP' && (ladder.base[level] ?? 0) >= 3 && gap > 0 && rng.chance(0.25)) position = 'RP';
   }
   return { kind, bats, throws, birthDate, entrySeason, entryAge, peak, peakValue, seasons, active };
 }

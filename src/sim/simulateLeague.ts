@@ -24,13 +24,11 @@ import { fieldingLine } from './fieldingLine.ts';
 import { BATTING_COLUMNS, CONTRACT_COLUMNS, FIELDING_COLUMNS, PITCHING_COLUMNS } from './fileSchemas.ts';
 import { inventClubs } from './inventClubs.ts';
 import { inventName } from './inventName.ts';
-import {
-  FULL_PA, FULL_RELIEF_GAMES, FULL_STARTS, LEVEL_BAR, LEVEL_MLB, SEASON_GAMES, SIM_LEVELS,
-} from './levelTable.ts';
+import { simLadder, type SimLadder } from './simLadder.ts';
 import { pitchingLine } from './pitchingLine.ts';
 import { SeededRandom } from './random.ts';
 import { salaryThousands } from './salary.ts';
-import { simulateCareer, type Career, type CareerSeason } from './simulateCareer.ts';
+import { DEFAULT_CAREER_RULES, simulateCareer, type Career, type CareerRules, type CareerSeason } from './simulateCareer.ts';
 import { positionIndex } from './simPositions.ts';
 import { SimTruth } from './SimTruth.ts';
 import type { MeasuredFrom, ResolvedSimOptions, SimLeague, SimOptions } from './simTypes.ts';
@@ -53,19 +51,37 @@ export function resolveSimOptions(options: SimOptions): ResolvedSimOptions {
   const pitcherShare = options.pitcherShare ?? 0.4;
   if (!(pitcherShare >= 0 && pitcherShare <= 1)) throw new UsageError(`pitcherShare ${pitcherShare}: expected 0 to 1`, { pitcherShare });
   const seasons = lastSeason - firstSeason + 1;
+  const minorLevels = options.minorLevels ?? 5;
+  const ladder = simLadder(minorLevels);
+  const promotionMargin = options.promotionMargin ?? DEFAULT_CAREER_RULES.promotionMargin;
+  const promotionChance = options.promotionChance ?? DEFAULT_CAREER_RULES.promotionChance;
+  const showingNoise = options.showingNoise ?? DEFAULT_CAREER_RULES.showingNoise;
+  const statNoise = options.statNoise ?? 0;
+  const eraDrift = options.eraDrift ?? 0;
+  const minorsRecordedFrom = options.minorsRecordedFrom ?? firstSeason;
+  const finite = (name: string, v: number, ok: boolean): void => {
+    if (!Number.isFinite(v) || !ok) throw new UsageError(`${name} ${v}: out of range`, { [name]: v });
+  };
+  finite('promotionMargin', promotionMargin, promotionMargin > -1 && promotionMargin < 2);
+  finite('promotionChance', promotionChance, promotionChance > 0 && promotionChance <= 1);
+  finite('showingNoise', showingNoise, showingNoise >= 0 && showingNoise <= 2);
+  finite('statNoise', statNoise, statNoise >= 0 && statNoise <= 2);
+  finite('eraDrift', eraDrift, Math.abs(eraDrift) <= 0.2);
+  finite('minorsRecordedFrom', minorsRecordedFrom, Number.isInteger(minorsRecordedFrom));
+  const rules: CareerRules = { ladder, promotionMargin, promotionChance, showingNoise };
   let intake = options.playersPerSeasonIntake;
   if (intake === undefined) {
     const target = options.targetPlayerSeasons ?? DEFAULT_TARGET;
     if (!(target > 0)) throw new UsageError(`targetPlayerSeasons ${target}: expected a positive number`, { target });
-    intake = Math.max(1, Math.round(target / (seasons * meanCareerLength(seed, pitcherShare))));
+    intake = Math.max(1, Math.round(target / (seasons * meanCareerLength(seed, pitcherShare, rules))));
   }
   if (!Number.isInteger(intake) || intake < 1) throw new UsageError(`playersPerSeasonIntake ${intake}: expected a positive integer`, { intake });
   const perSeason = intake * 5;
-  const teamsPerLevel = options.teamsPerLevel ?? Math.max(4, Math.round(perSeason / (SIM_LEVELS.length * PLAYERS_PER_CLUB)));
+  const teamsPerLevel = options.teamsPerLevel ?? Math.max(4, Math.round(perSeason / (ladder.names.length * PLAYERS_PER_CLUB)));
   if (!Number.isInteger(teamsPerLevel) || teamsPerLevel < 2) throw new UsageError(`teamsPerLevel ${teamsPerLevel}: expected an integer >= 2`, { teamsPerLevel });
   const trackedFromLevel = options.trackedFromLevel ?? 'AA';
-  if (!SIM_LEVELS.some((l) => l === trackedFromLevel)) {
-    throw new UsageError(`trackedFromLevel ${JSON.stringify(trackedFromLevel)}: expected one of ${SIM_LEVELS.join(', ')}`, { trackedFromLevel });
+  if (!ladder.names.some((l) => l === trackedFromLevel)) {
+    throw new UsageError(`trackedFromLevel ${JSON.stringify(trackedFromLevel)}: expected one of ${ladder.names.join(', ')}`, { trackedFromLevel });
   }
   const m = options.measuredFrom ?? {};
   const measuredFrom: MeasuredFrom = {
@@ -76,17 +92,24 @@ export function resolveSimOptions(options: SimOptions): ResolvedSimOptions {
     pitchTracking: m.pitchTracking ?? lastSeason - 9,
     groundball: m.groundball ?? lastSeason - 15,
   };
-  return { seed, firstSeason, lastSeason, playersPerSeasonIntake: intake, teamsPerLevel, pitcherShare, measuredFrom, trackedFromLevel };
+  return {
+    seed, firstSeason, lastSeason, playersPerSeasonIntake: intake, teamsPerLevel, pitcherShare, measuredFrom, trackedFromLevel,
+    minorLevels, promotionMargin, promotionChance, showingNoise, statNoise, eraDrift, minorsRecordedFrom,
+  };
+}
+
+function careerRulesOf(o: ResolvedSimOptions): CareerRules {
+  return { ladder: simLadder(o.minorLevels), promotionMargin: o.promotionMargin, promotionChance: o.promotionChance, showingNoise: o.showingNoise };
 }
 
 /** Mean number of seasons in a career, from a pilot sample drawn with a seed-derived stream. */
-function meanCareerLength(seed: number, pitcherShare: number): number {
-  const key = `${seed}|${pitcherShare}`;
+function meanCareerLength(seed: number, pitcherShare: number, rules: CareerRules): number {
+  const key = `${seed}|${pitcherShare}|${rules.ladder.names.length}|${rules.promotionMargin}|${rules.promotionChance}|${rules.showingNoise}`;
   const known = pilotCache.get(key);
   if (known !== undefined) return known;
   const rng = new SeededRandom((seed ^ 0x5eed5eed) >>> 0);
   let total = 0;
-  for (let i = 0; i < PILOT_CAREERS; i++) total += simulateCareer(rng, 0, 60, 8, pitcherShare).seasons.length;
+  for (let i = 0; i < PILOT_CAREERS; i++) total += simulateCareer(rng, 0, 60, 8, pitcherShare, rules).seasons.length;
   const mean = total / PILOT_CAREERS;
   if (pilotCache.size > 100) pilotCache.clear();
   pilotCache.set(key, mean);
@@ -99,11 +122,23 @@ const pilotCache = new Map<string, number>();
 export function simulateLeague(options: SimOptions): SimLeague {
   const o = resolveSimOptions(options);
   const rng = new SeededRandom(o.seed);
-  const levels: readonly string[] = SIM_LEVELS;
+  const rules = careerRulesOf(o);
+  const ladder: SimLadder = rules.ladder;
+  const levels: readonly string[] = ladder.names;
+  const midSeason = (o.firstSeason + o.lastSeason) / 2;
+  const eraOf = (season: number): number => o.eraDrift * (season - midSeason);
+  const recorded = (season: number, level: number): boolean => level === ladder.top || season >= o.minorsRecordedFrom;
+  /** The talents behind this season's stat lines: true talents, plus a season's form when statNoise > 0. */
+  const lineTalents = (t: Float64Array): Float64Array => {
+    if (o.statNoise <= 0) return t;
+    const form = new Float64Array(t.length);
+    for (let k = 0; k < t.length; k++) form[k] = (t[k] ?? 0) + o.statNoise * rng.normal();
+    return form;
+  };
   const teams = inventClubs(rng, levels.length, o.teamsPerLevel);
   const seasons = o.lastSeason - o.firstSeason + 1;
   // Capacities from the expected size (steady state), so tables rarely grow.
-  const expected = Math.ceil(1.04 * o.playersPerSeasonIntake * seasons * meanCareerLength(o.seed, o.pitcherShare));
+  const expected = Math.ceil(1.04 * o.playersPerSeasonIntake * seasons * meanCareerLength(o.seed, o.pitcherShare, rules));
   const hitterRows = Math.ceil(expected * (1 - o.pitcherShare) * 1.1);
   const batting = new ColumnTable(BATTING_COLUMNS, hitterRows);
   const fielding = new ColumnTable(FIELDING_COLUMNS, Math.ceil(hitterRows * 1.2));
@@ -131,13 +166,15 @@ export function simulateLeague(options: SimOptions): SimLeague {
 
   const emitHitterSeason = (player: number, cs: CareerSeason): void => {
     const pos = cs.position;
+    const talents = lineTalents(cs.talents);
     for (const stint of cs.stints) {
       const lv = stint.level;
+      if (!recorded(cs.season, lv)) continue;
       const team = lv * o.teamsPerLevel + stint.club;
       const catcherLoad = pos === 'C' ? 0.82 : 1;
-      const pa = Math.max(1, Math.round((FULL_PA[lv] ?? 500) * stint.share * catcherLoad));
+      const pa = Math.max(1, Math.round((ladder.fullPa[lv] ?? 500) * stint.share * catcherLoad));
       const perGame = cs.regular ? rng.uniform(3.9, 4.4) : rng.uniform(2.6, 3.8);
-      const maxGames = Math.max(1, Math.round((SEASON_GAMES[lv] ?? 140) * Math.min(1, stint.share + 0.05)));
+      const maxGames = Math.max(1, Math.round((ladder.seasonGames[lv] ?? 140) * Math.min(1, stint.share + 0.05)));
       const games = Math.max(1, Math.min(maxGames, Math.ceil(pa / perGame)));
       const bb = cs.season >= o.measuredFrom.battedBall && lv >= tracked;
       const sprint = cs.season >= o.measuredFrom.sprint && lv >= tracked;
@@ -145,7 +182,7 @@ export function simulateLeague(options: SimOptions): SimLeague {
       bRow[1] = cs.season;
       bRow[2] = lv;
       bRow[3] = team;
-      battingLine(rng, cs.talents, lv, pa, games, bb, sprint, bRow);
+      battingLine(rng, talents, ladder.base[lv] ?? lv, pa, games, bb, sprint, bRow, eraOf(cs.season));
       batting.push(bRow);
 
       const arm = cs.season >= o.measuredFrom.arm && lv >= tracked;
@@ -178,18 +215,20 @@ export function simulateLeague(options: SimOptions): SimLeague {
   const emitPitcherSeason = (player: number, cs: CareerSeason): void => {
     const reliever = cs.position === 'RP';
     const stamina = cs.talents[P_STAMINA] ?? 0;
+    const talents = lineTalents(cs.talents);
     for (const stint of cs.stints) {
       const lv = stint.level;
+      if (!recorded(cs.season, lv)) continue;
       const team = lv * o.teamsPerLevel + stint.club;
       let games: number, starts: number, outs: number;
       if (!reliever) {
-        starts = Math.max(1, Math.round((FULL_STARTS[lv] ?? 25) * stint.share));
+        starts = Math.max(1, Math.round((ladder.fullStarts[lv] ?? 25) * stint.share));
         const extra = rng.chance(0.3) ? rng.binomial(4, 0.4) : 0;
         games = starts + extra;
-        const perStart = Math.min(22, Math.max(8, 3 * (5.0 + 0.6 * stamina + 0.4 * (cs.value - (LEVEL_BAR[lv] ?? 0))) + 2 * rng.normal()));
+        const perStart = Math.min(22, Math.max(8, 3 * (5.0 + 0.6 * stamina + 0.4 * (cs.value - (ladder.bar[lv] ?? 0))) + 2 * rng.normal()));
         outs = Math.max(1, Math.round(starts * perStart * rng.uniform(0.9, 1.1) + extra * 3));
       } else {
-        games = Math.max(1, Math.round((FULL_RELIEF_GAMES[lv] ?? 40) * stint.share));
+        games = Math.max(1, Math.round((ladder.fullReliefGames[lv] ?? 40) * stint.share));
         starts = rng.chance(0.05) ? 1 : 0;
         outs = Math.max(1, Math.round(games * (3.1 + 0.25 * stamina) * rng.uniform(0.85, 1.15) + starts * 9));
       }
@@ -199,14 +238,14 @@ export function simulateLeague(options: SimOptions): SimLeague {
       pRow[1] = cs.season;
       pRow[2] = lv;
       pRow[3] = team;
-      pitchingLine(rng, cs.talents, lv, games, starts, outs, reliever, trackedNow, gb, pRow);
+      pitchingLine(rng, talents, ladder.base[lv] ?? lv, games, starts, outs, reliever, trackedNow, gb, pRow, eraOf(cs.season));
       pitching.push(pRow);
     }
   };
 
   for (let entry = o.firstSeason - WARM_UP; entry <= o.lastSeason; entry++) {
     for (let k = 0; k < o.playersPerSeasonIntake; k++) {
-      const career = simulateCareer(rng, entry, o.lastSeason, o.teamsPerLevel, o.pitcherShare);
+      const career = simulateCareer(rng, entry, o.lastSeason, o.teamsPerLevel, o.pitcherShare, rules);
       const last = career.seasons[career.seasons.length - 1];
       if (last === undefined || last.season < o.firstSeason) continue;
       const player = names.length;
@@ -216,7 +255,7 @@ export function simulateLeague(options: SimOptions): SimLeague {
       for (const cs of career.seasons) {
         let mask = 0;
         for (const s of cs.stints) mask |= 1 << s.level;
-        const atTop = (mask & (1 << LEVEL_MLB)) !== 0;
+        const atTop = (mask & (1 << ladder.top)) !== 0;
         top = Math.max(top, Math.floor(Math.log2(mask)));
         if (cs.season >= o.firstSeason) {
           truth.push(player, cs.season, career.kind, positionIndex(cs.position), mask, cs.age, cs.talents);

@@ -205,5 +205,87 @@ describe('simulateLeague(options)', () => {
     expect(() => simulateLeague({ seed: 1, firstSeason: 2010, lastSeason: 2005 })).toThrow(UsageError);
     expect(() => simulateLeague({ seed: 1.5, firstSeason: 2003, lastSeason: 2005 })).toThrow(UsageError);
     expect(() => simulateLeague({ seed: 1, firstSeason: 2003, lastSeason: 2005, trackedFromLevel: 'X' })).toThrow(UsageError);
+    expect(() => simulateLeague({ seed: 1, firstSeason: 2003, lastSeason: 2005, minorLevels: 7 })).toThrow(UsageError);
+    expect(() => simulateLeague({ seed: 1, firstSeason: 2003, lastSeason: 2005, promotionChance: 0 })).toThrow(UsageError);
+    expect(() => simulateLeague({ seed: 1, firstSeason: 2003, lastSeason: 2005, eraDrift: Number.NaN })).toThrow(UsageError);
+  });
+});
+
+describe('simulateLeague(options) with league parameters varied', () => {
+  const base = { seed: 777, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: 5000 } as const;
+  const plain = simulateLeague(base);
+
+  /** Share of players whose highest level is the top one. */
+  const reachedTop = (l: ReturnType<typeof simulateLeague>): number => {
+    let n = 0;
+    for (let i = 0; i < l.players.count; i++) if (l.players.highestLevel[i] === l.levels.length - 1) n++;
+    return n / l.players.count;
+  };
+
+  /** League strikeout rate (SO / PA) of the top-level batting rows in a season range. */
+  const topKRate = (l: ReturnType<typeof simulateLeague>, from: number, to: number): number => {
+    const b = l.batting, iS = b.columnIndex('season'), iL = b.columnIndex('level'), iPA = b.columnIndex('PA'), iSO = b.columnIndex('SO');
+    if (iS < 0 || iL < 0) throw new Error('batting table without season or level');
+    let pa = 0, so = 0;
+    for (let r = 0; r < b.length; r++) {
+      const s = b.get(r, iS);
+      if (b.get(r, iL) !== l.levels.length - 1 || s < from || s > to) continue;
+      pa += b.get(r, iPA);
+      so += b.get(r, iSO);
+    }
+    return so / pa;
+  };
+
+  it('uses the shorter ladder for 3 or 4 minor levels, in levels and in every stat row', () => {
+    const short = simulateLeague({ ...base, minorLevels: 3 });
+    expect(short.levels).toEqual(['A', 'AA', 'AAA', 'MLB']);
+    let maxLevel = 0;
+    for (let r = 0; r < short.batting.length; r++) maxLevel = Math.max(maxLevel, short.batting.get(r, short.batting.columnIndex('level')));
+    expect(maxLevel).toBe(3);
+    expect(reachedTop(short)).toBeGreaterThan(0.05);
+  });
+
+  it('promotes fewer players to the top level with a higher promotion margin and a promotion chance below 1', () => {
+    const hard = simulateLeague({ ...base, promotionMargin: 0.4, promotionChance: 0.6 });
+    expect(reachedTop(hard)).toBeLessThan(0.8 * reachedTop(plain));
+  });
+
+  it('raises the top-level strikeout rate over the years with a positive era drift, and not without', () => {
+    const drift = simulateLeague({ ...base, eraDrift: 0.04 });
+    expect(topKRate(drift, 2021, 2026) - topKRate(drift, 2003, 2008)).toBeGreaterThan(0.03);
+    expect(Math.abs(topKRate(plain, 2021, 2026) - topKRate(plain, 2003, 2008))).toBeLessThan(0.015);
+  });
+
+  it('records no minor-league stat line before minorsRecordedFrom, but top-level lines from the first season', () => {
+    const late = simulateLeague({ ...base, minorsRecordedFrom: 2012 });
+    const b = late.batting, iS = b.columnIndex('season'), iL = b.columnIndex('level');
+    let earlyMinor = 0, earlyTop = 0;
+    for (let r = 0; r < b.length; r++) {
+      if (b.get(r, iS) >= 2012) continue;
+      if (b.get(r, iL) === late.levels.length - 1) earlyTop++;
+      else earlyMinor++;
+    }
+    expect(earlyMinor).toBe(0);
+    expect(earlyTop).toBeGreaterThan(50);
+  });
+
+  it('makes stat lines follow true talent less closely with more form noise (ISO against true power)', () => {
+    const isoPowerCorrelation = (l: ReturnType<typeof simulateLeague>): number => {
+      const b = l.batting, iS = b.columnIndex('season'), iPA = b.columnIndex('PA');
+      const xs: number[] = [], ys: number[] = [];
+      for (let r = 0; r < b.length; r++) {
+        const pa = b.get(r, iPA);
+        if (pa < 300) continue;
+        const t = l.truth.find(cellText(l, b, r, 0), b.get(r, iS));
+        if (!t) continue;
+        const ab = b.get(r, b.columnIndex('AB'));
+        const tb = b.get(r, b.columnIndex('2B')) + 2 * b.get(r, b.columnIndex('3B')) + 3 * b.get(r, b.columnIndex('HR'));
+        xs.push(t.talents[H_POWER] ?? 0);
+        ys.push(tb / ab);
+      }
+      return correlation(xs, ys);
+    };
+    const noisy = simulateLeague({ ...base, statNoise: 0.6 });
+    expect(isoPowerCorrelation(noisy)).toBeLessThan(isoPowerCorrelation(plain) - 0.05);
   });
 });
