@@ -4,9 +4,9 @@ import { fipMinus } from '../stats/fipMinus.ts';
 import { onBasePercentage } from '../stats/onBasePercentage.ts';
 import { opsPlus } from '../stats/opsPlus.ts';
 import { sluggingPercentage } from '../stats/sluggingPercentage.ts';
-import { totalBases } from '../stats/totalBases.ts';
+import { rateOf } from '../stats/Rate.ts';
 import { leagueBattingRates } from './leagueBattingRates.ts';
-import { leagueFip } from './leagueFip.ts';
+import { leagueFip } from '../stats/leagueFip.ts';
 import { OUTCOMES_FORMAT, OUTCOMES_VERSION, type OutcomesFile } from './outcomesFile.ts';
 
 const finiteOrNull = (x: number, digits = 4): number | null => (Number.isFinite(x) ? Number(x.toFixed(digits)) : null);
@@ -55,12 +55,12 @@ export function computeOutcomes(roster: Roster): OutcomesFile {
     const lgPit = leagueFip(pLines);
     league.push([season, finiteOrNull(lgBat.OBP, 6), finiteOrNull(lgBat.SLG, 6), finiteOrNull(lgPit.ERA, 6), finiteOrNull(lgPit.constant, 6), finiteOrNull(lgPit.FIP, 6)]);
     for (const b of bLines) {
-      const OBP = onBasePercentage(b.H, b.BB, b.HBP, b.AB, b.SF);
-      const SLG = sluggingPercentage(totalBases(b.H, b.doubles, b.triples, b.HR), b.AB);
+      const OBP = rateOf(onBasePercentage, b);
+      const SLG = rateOf(sluggingPercentage, b);
       batting.push([b.playerId, season, b.PA, finiteOrNull(opsPlus(OBP, SLG, lgBat.OBP, lgBat.SLG), 2)]);
     }
     for (const p of pLines) {
-      const value = fipMinus(fip(p.HR, p.BB, p.HBP, p.SO, p.outs, lgPit.constant), lgPit.FIP);
+      const value = fipMinus(fip(p, lgPit.constant), lgPit.FIP);
       pitching.push([p.playerId, season, p.outs, p.BF, finiteOrNull(value, 2)]);
     }
   }

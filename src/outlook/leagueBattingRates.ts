@@ -1,7 +1,7 @@
 import type { BattingSeason } from '../ingest/types.ts';
 import { onBasePercentage } from '../stats/onBasePercentage.ts';
 import { sluggingPercentage } from '../stats/sluggingPercentage.ts';
-import { totalBases } from '../stats/totalBases.ts';
+import { pooledRate } from '../stats/Rate.ts';
 
 export interface LeagueBattingRates {
   readonly OBP: number;
@@ -14,7 +14,7 @@ export interface LeagueBattingRates {
  * players' rates): lgOBP = sum(H + BB + HBP) / sum(AB + BB + HBP + SF), lgSLG = sum(TB) / sum(AB).
  *
  * Source: common practice: league rates for OPS+ are the league's totals put through the rule 9.21
- * formulas (src/stats/onBasePercentage.ts, sluggingPercentage.ts, totalBases.ts).
+ * formulas (src/stats/onBasePercentage.ts, sluggingPercentage.ts) pooled by src/stats/Rate.ts.
  * Units: fractions; NaN when the lines hold no at-bat.
  *
  * @example
@@ -22,15 +22,7 @@ export interface LeagueBattingRates {
  * // => OBP 60 / 210 = 0.2857..., SLG 50 / 200 = 0.25
  */
 export function leagueBattingRates(lines: readonly BattingSeason[]): LeagueBattingRates {
-  let H = 0, BB = 0, HBP = 0, AB = 0, SF = 0, TB = 0, PA = 0;
-  for (const b of lines) {
-    H += b.H;
-    BB += b.BB;
-    HBP += b.HBP;
-    AB += b.AB;
-    SF += b.SF;
-    PA += b.PA;
-    TB += totalBases(b.H, b.doubles, b.triples, b.HR);
-  }
-  return { OBP: onBasePercentage(H, BB, HBP, AB, SF), SLG: sluggingPercentage(TB, AB), PA };
+  let PA = 0;
+  for (const b of lines) PA += b.PA;
+  return { OBP: pooledRate(onBasePercentage, lines), SLG: pooledRate(sluggingPercentage, lines), PA };
 }

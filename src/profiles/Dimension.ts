@@ -1,7 +1,5 @@
 import type { PositionGroup } from './positionGroup.ts';
-
-/** Which way is better: `higher` (OBP), `lower` (pop time) or `neither` (launch angle). */
-export type Direction = 'higher' | 'lower' | 'neither';
+import type { Direction } from '../stats/Direction.ts';
 
 /**
  * How a dimension turns a season line into a number.

@@ -9,8 +9,8 @@ import { reliability } from './reliability.ts';
 import { groupOf, POSITION_GROUPS, type PositionGroup } from './positionGroup.ts';
 import { HITTER_DIMENSIONS } from './hitterDimensions.ts';
 import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
-import { fipConstant } from '../stats/fipConstant.ts';
-import { era } from '../stats/era.ts';
+import { leagueFip } from '../stats/leagueFip.ts';
+import type { PitchingSeason } from '../ingest/types.ts';
 
 /** The profiles of one position group, row-major n x d. */
 export interface GroupProfiles {
@@ -138,21 +138,16 @@ function assembleGroup(
   return { group, dims, meta, raw, z, strata, reliability: rel, redundancy: redundancyWeights(z64, n, d, rel) };
 }
 
-/** FIP constant of every season and level: league ERA minus the league's raw FIP (src/stats/fipConstant.ts). */
+/** FIP constant of every season and level, from that league's lines (src/stats/leagueFip.ts). */
 function fipConstants(roster: Roster): Map<string, number> {
-  const totals = new Map<string, { HR: number; BB: number; HBP: number; SO: number; ER: number; outs: number }>();
+  const leagues = new Map<string, PitchingSeason[]>();
   for (const p of roster.pitching) {
     const key = `${p.season}|${p.level}`;
-    const t = totals.get(key) ?? { HR: 0, BB: 0, HBP: 0, SO: 0, ER: 0, outs: 0 };
-    t.HR += p.HR;
-    t.BB += p.BB;
-    t.HBP += p.HBP;
-    t.SO += p.SO;
-    t.ER += p.ER;
-    t.outs += p.outs;
-    totals.set(key, t);
+    const lines = leagues.get(key);
+    if (lines) lines.push(p);
+    else leagues.set(key, [p]);
   }
   const out = new Map<string, number>();
-  for (const [key, t] of totals) out.set(key, fipConstant(era(t.ER, t.outs), t.HR, t.BB, t.HBP, t.SO, t.outs));
+  for (const [key, lines] of leagues) out.set(key, leagueFip(lines).constant);
   return out;
 }

@@ -1,12 +1,26 @@
 /**
  * The hitters' dimensions: plate discipline, contact, power, batted-ball quality, running, fielding
- * and, for catchers, throwing. Each rate names the formula module in src/stats it follows; the
- * numerator and denominator here are that formula's (checked in tests/profiles/hitterDimensions.test.ts).
+ * and, for catchers, throwing. Each rate is a rate of src/stats (numerator and denominator written
+ * once there); the store-level values are checked by hand in tests/profiles/dimensionValues.test.ts.
  */
+import type { BattingSeason } from '../ingest/types.ts';
 import type { HitterLine } from './HitterLine.ts';
 import type { Dimension } from './Dimension.ts';
+import { rateMeasure, rateSource } from './rateMeasure.ts';
 import { STABILISATION } from '../stats/stabilisation.ts';
-import { totalBases } from '../stats/totalBases.ts';
+import { strikeoutRate } from '../stats/strikeoutRate.ts';
+import { walkRate } from '../stats/walkRate.ts';
+import { battingAverage } from '../stats/battingAverage.ts';
+import { onBasePercentage } from '../stats/onBasePercentage.ts';
+import { sluggingPercentage } from '../stats/sluggingPercentage.ts';
+import { isolatedPower } from '../stats/isolatedPower.ts';
+import { homeRunRate } from '../stats/homeRunRate.ts';
+import { babip } from '../stats/babip.ts';
+import { stolenBaseAttemptRate } from '../stats/stolenBaseAttemptRate.ts';
+import { stolenBaseSuccess } from '../stats/stolenBaseSuccess.ts';
+import { rangeFactor } from '../stats/rangeFactor.ts';
+import { fieldingPercentage } from '../stats/fieldingPercentage.ts';
+import { caughtStealingRate } from '../stats/caughtStealingRate.ts';
 
 type D = Dimension<HitterLine>;
 
@@ -17,76 +31,72 @@ const HITTERS = ['C', 'IF', 'OF', 'DH'] as const;
 const FIELDERS = ['IF', 'OF'] as const;
 const CATCHERS = ['C'] as const;
 
-const tb = (l: HitterLine): number => {
-  const b = l.batting;
-  return totalBases(b.H, b.doubles, b.triples, b.HR);
-};
 const k = (rate: keyof typeof STABILISATION): number => STABILISATION[rate].sample;
-/** Balls in play for BABIP: AB - SO - HR + SF. */
-const bip = (l: HitterLine): number => l.batting.AB - l.batting.SO - l.batting.HR + l.batting.SF;
-/** Times on first (singles, walks, hit-by-pitches): opportunities to steal (common practice approximation). */
-const timesOnFirst = (l: HitterLine): number => {
-  const b = l.batting;
-  return b.H - b.doubles - b.triples - b.HR + b.BB + b.HBP;
-};
+const batting = (l: HitterLine): BattingSeason => l.batting;
+const fielding = (l: HitterLine): HitterLine['fielding'] => l.fielding;
 const bbe = (l: HitterLine): number | undefined => l.batting.bbe;
-const sbAttempts = (l: HitterLine): number | undefined =>
-  l.batting.SB === undefined || l.batting.CS === undefined ? undefined : l.batting.SB + l.batting.CS;
+
+function hasSteals(b: BattingSeason): b is BattingSeason & { readonly SB: number; readonly CS: number } {
+  return b.SB !== undefined && b.CS !== undefined;
+}
+/** The batting line when it carries both steal columns (SB and CS). */
+const steals = (l: HitterLine): (BattingSeason & { readonly SB: number; readonly CS: number }) | undefined =>
+  hasSteals(l.batting) ? l.batting : undefined;
+/** Steal attempts against a catcher and runners he caught, when the fielding row has both. */
+const stealsAgainst = (l: HitterLine): { readonly csCaught: number; readonly sbAgainst: number } | undefined => {
+  const f = l.fielding;
+  return f?.csCaught === undefined || f.sbAgainst === undefined ? undefined : { csCaught: f.csCaught, sbAgainst: f.sbAgainst };
+};
 
 export const HITTER_DIMENSIONS: readonly D[] = [
   {
     name: 'k_pct', label: 'K%', unit: 'fraction of PA', direction: 'lower', skill: 'contact',
-    meaning: 'Strikeouts per plate appearance.', source: 'src/stats/strikeoutRate.ts (SO / PA)',
+    meaning: 'Strikeouts per plate appearance.', source: rateSource(strikeoutRate),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (l) => l.batting.SO, denominator: (l) => l.batting.PA, stabilisation: k('strikeoutRate') },
+    measure: rateMeasure(strikeoutRate, batting, k('strikeoutRate')),
   },
   {
     name: 'bb_pct', label: 'BB%', unit: 'fraction of PA', direction: 'higher', skill: 'discipline',
-    meaning: 'Walks per plate appearance.', source: 'src/stats/walkRate.ts (BB / PA)',
+    meaning: 'Walks per plate appearance.', source: rateSource(walkRate),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (l) => l.batting.BB, denominator: (l) => l.batting.PA, stabilisation: k('walkRate') },
+    measure: rateMeasure(walkRate, batting, k('walkRate')),
   },
   {
     name: 'avg', label: 'AVG', unit: 'hits per AB', direction: 'higher', skill: 'contact',
-    meaning: 'Batting average: hits per at-bat.', source: 'src/stats/battingAverage.ts (Official Baseball Rules)',
+    meaning: 'Batting average: hits per at-bat.', source: rateSource(battingAverage),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (l) => l.batting.H, denominator: (l) => l.batting.AB, stabilisation: k('battingAverage') },
+    measure: rateMeasure(battingAverage, batting, k('battingAverage')),
   },
   {
     name: 'obp', label: 'OBP', unit: 'fraction', direction: 'higher', skill: 'on-base',
     meaning: 'On-base percentage: (H + BB + HBP) / (AB + BB + HBP + SF).',
-    source: 'src/stats/onBasePercentage.ts (Official Baseball Rules)',
+    source: rateSource(onBasePercentage),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: {
-      kind: 'rate',
-      numerator: (l) => l.batting.H + l.batting.BB + l.batting.HBP,
-      denominator: (l) => l.batting.AB + l.batting.BB + l.batting.HBP + l.batting.SF,
-      stabilisation: k('onBasePercentage'),
-    },
+    measure: rateMeasure(onBasePercentage, batting, k('onBasePercentage')),
   },
   {
     name: 'slg', label: 'SLG', unit: 'bases per AB', direction: 'higher', skill: 'power',
-    meaning: 'Slugging percentage: total bases per at-bat.', source: 'src/stats/sluggingPercentage.ts (Official Baseball Rules)',
+    meaning: 'Slugging percentage: total bases per at-bat.', source: rateSource(sluggingPercentage),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: tb, denominator: (l) => l.batting.AB, stabilisation: k('sluggingPercentage') },
+    measure: rateMeasure(sluggingPercentage, batting, k('sluggingPercentage')),
   },
   {
     name: 'iso', label: 'ISO', unit: 'extra bases per AB', direction: 'higher', skill: 'power',
-    meaning: 'Isolated power: extra bases per at-bat (SLG - AVG).', source: 'src/stats/isolatedPower.ts (common practice)',
+    meaning: 'Isolated power: extra bases per at-bat (SLG - AVG).', source: rateSource(isolatedPower),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (l) => tb(l) - l.batting.H, denominator: (l) => l.batting.AB, stabilisation: k('isolatedPower') },
+    measure: rateMeasure(isolatedPower, batting, k('isolatedPower')),
   },
   {
     name: 'hr_pct', label: 'HR%', unit: 'fraction of PA', direction: 'higher', skill: 'power',
-    meaning: 'Home runs per plate appearance.', source: 'src/stats/homeRunRate.ts (HR / PA)',
+    meaning: 'Home runs per plate appearance.', source: rateSource(homeRunRate),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (l) => l.batting.HR, denominator: (l) => l.batting.PA, stabilisation: k('homeRunRate') },
+    measure: rateMeasure(homeRunRate, batting, k('homeRunRate')),
   },
   {
     name: 'babip', label: 'BABIP', unit: 'hits per ball in play', direction: 'higher', skill: 'contact',
-    meaning: 'Batting average on balls in play: (H - HR) / (AB - SO - HR + SF).', source: 'src/stats/babip.ts (common practice)',
+    meaning: 'Batting average on balls in play: (H - HR) / (AB - SO - HR + SF).', source: rateSource(babip),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (l) => l.batting.H - l.batting.HR, denominator: bip, stabilisation: k('babip') },
+    measure: rateMeasure(babip, batting, k('babip')),
   },
   {
     name: 'ev_avg_mph', label: 'EV avg', unit: 'mph', direction: 'higher', skill: 'power',
@@ -127,39 +137,29 @@ export const HITTER_DIMENSIONS: readonly D[] = [
   {
     name: 'sb_att_rate', label: 'SB att', unit: 'attempts per time on first', direction: 'higher', skill: 'speed',
     meaning: 'Steal attempts per time on first base (singles, walks, HBP): how often he runs.',
-    source: 'src/stats/stolenBaseAttemptRate.ts (common practice approximation)',
+    source: rateSource(stolenBaseAttemptRate),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: sbAttempts, denominator: (l) => (sbAttempts(l) === undefined ? undefined : timesOnFirst(l)), stabilisation: 0 },
+    measure: rateMeasure(stolenBaseAttemptRate, steals, 0),
   },
   {
     name: 'sb_success', label: 'SB%', unit: 'fraction of attempts', direction: 'higher', skill: 'speed',
-    meaning: 'Stolen-base success rate: SB / (SB + CS).', source: 'src/stats/stolenBaseSuccess.ts (common practice)',
+    meaning: 'Stolen-base success rate: SB / (SB + CS).', source: rateSource(stolenBaseSuccess),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (l) => l.batting.SB, denominator: sbAttempts, stabilisation: k('stolenBaseSuccess') },
+    measure: rateMeasure(stolenBaseSuccess, steals, k('stolenBaseSuccess')),
   },
   {
     name: 'range_factor', label: 'RF/9', unit: 'plays per 9 innings', direction: 'higher', skill: 'fielding range',
     meaning: 'Range factor at his primary position: 9 * (PO + A) / innings, compared with the same position only.',
-    source: 'src/stats/rangeFactor.ts (common practice)',
+    source: rateSource(rangeFactor),
     groups: FIELDERS, scope: 'position', digits: 2,
-    measure: {
-      kind: 'rate',
-      numerator: (l) => (l.fielding ? 27 * (l.fielding.PO + l.fielding.A) : undefined),
-      denominator: (l) => l.fielding?.outs,
-      stabilisation: RANGE_STABILISATION_OUTS,
-    },
+    measure: rateMeasure(rangeFactor, fielding, RANGE_STABILISATION_OUTS),
   },
   {
     name: 'fielding_pct', label: 'Fld%', unit: 'fraction of chances', direction: 'higher', skill: 'fielding hands',
     meaning: 'Fielding percentage at his primary position: (PO + A) / (PO + A + E).',
-    source: 'src/stats/fieldingPercentage.ts (Official Baseball Rules)',
+    source: rateSource(fieldingPercentage),
     groups: [...FIELDERS, ...CATCHERS], scope: 'position', digits: 3,
-    measure: {
-      kind: 'rate',
-      numerator: (l) => (l.fielding ? l.fielding.PO + l.fielding.A : undefined),
-      denominator: (l) => (l.fielding ? l.fielding.PO + l.fielding.A + l.fielding.E : undefined),
-      stabilisation: k('fieldingPercentage'),
-    },
+    measure: rateMeasure(fieldingPercentage, fielding, k('fieldingPercentage')),
   },
   {
     name: 'arm_mph', label: 'Arm', unit: 'mph', direction: 'higher', skill: 'arm',
@@ -182,8 +182,8 @@ export const HITTER_DIMENSIONS: readonly D[] = [
   },
   {
     name: 'cs_pct', label: 'CS%', unit: 'fraction of attempts', direction: 'higher', skill: 'catcher throwing',
-    meaning: 'Caught-stealing rate: runners thrown out per steal attempt against him.', source: 'src/stats/caughtStealingRate.ts (common practice)',
+    meaning: 'Caught-stealing rate: runners thrown out per steal attempt against him.', source: rateSource(caughtStealingRate),
     groups: CATCHERS, scope: 'position', digits: 3,
-    measure: { kind: 'rate', numerator: (l) => l.fielding?.csCaught, denominator: (l) => l.fielding?.sbAgainst, stabilisation: k('caughtStealingRate') },
+    measure: rateMeasure(caughtStealingRate, stealsAgainst, k('caughtStealingRate')),
   },
 ];

@@ -1,43 +1,51 @@
 /**
  * The pitchers' dimensions (starters and relievers alike; each group is standardised on its own).
- * Rates name the formula module in src/stats they follow.
+ * Each rate is a rate of src/stats (numerator and denominator written once there); the store-level
+ * values are checked by hand in tests/profiles/dimensionValues.test.ts.
  */
 import type { PitchingSeason } from '../ingest/types.ts';
 import type { Dimension } from './Dimension.ts';
+import { rateMeasure, rateSource } from './rateMeasure.ts';
 import { STABILISATION } from '../stats/stabilisation.ts';
 import { fip } from '../stats/fip.ts';
+import { pitcherStrikeoutRate } from '../stats/pitcherStrikeoutRate.ts';
+import { pitcherWalkRate } from '../stats/pitcherWalkRate.ts';
+import { pitcherHomeRunRate } from '../stats/pitcherHomeRunRate.ts';
+import { babipAgainst } from '../stats/babipAgainst.ts';
+import { inningsPerGame } from '../stats/inningsPerGame.ts';
 
 type D = Dimension<PitchingSeason>;
 
 const PITCHERS = ['SP', 'RP'] as const;
 const k = (rate: keyof typeof STABILISATION): number => STABILISATION[rate].sample;
-/** Balls in play against: BF - SO - BB - HBP - HR (no sacrifice data in the pitching file). */
-const bipAgainst = (p: PitchingSeason): number => p.BF - p.SO - p.BB - p.HBP - p.HR;
+const line = (p: PitchingSeason): PitchingSeason => p;
+/** Balls in play against (the denominator of src/stats/babipAgainst.ts): events behind GB%. */
+const bipAgainst = (p: PitchingSeason): number => babipAgainst.denominator(p);
 
 export const PITCHER_DIMENSIONS: readonly D[] = [
   {
     name: 'k_pct', label: 'K%', unit: 'fraction of BF', direction: 'higher', skill: 'stuff',
-    meaning: 'Strikeouts per batter faced.', source: 'src/stats/pitcherStrikeoutRate.ts (SO / BF)',
+    meaning: 'Strikeouts per batter faced.', source: rateSource(pitcherStrikeoutRate),
     groups: PITCHERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (p) => p.SO, denominator: (p) => p.BF, stabilisation: k('pitcherStrikeoutRate') },
+    measure: rateMeasure(pitcherStrikeoutRate, line, k('pitcherStrikeoutRate')),
   },
   {
     name: 'bb_pct', label: 'BB%', unit: 'fraction of BF', direction: 'lower', skill: 'control',
-    meaning: 'Walks per batter faced.', source: 'src/stats/pitcherWalkRate.ts (BB / BF)',
+    meaning: 'Walks per batter faced.', source: rateSource(pitcherWalkRate),
     groups: PITCHERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (p) => p.BB, denominator: (p) => p.BF, stabilisation: k('pitcherWalkRate') },
+    measure: rateMeasure(pitcherWalkRate, line, k('pitcherWalkRate')),
   },
   {
     name: 'hr_pct', label: 'HR%', unit: 'fraction of BF', direction: 'lower', skill: 'contact allowed',
-    meaning: 'Home runs allowed per batter faced.', source: 'src/stats/pitcherHomeRunRate.ts (HR / BF)',
+    meaning: 'Home runs allowed per batter faced.', source: rateSource(pitcherHomeRunRate),
     groups: PITCHERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (p) => p.HR, denominator: (p) => p.BF, stabilisation: k('pitcherHomeRunRate') },
+    measure: rateMeasure(pitcherHomeRunRate, line, k('pitcherHomeRunRate')),
   },
   {
     name: 'babip_against', label: 'BABIP', unit: 'hits per ball in play', direction: 'lower', skill: 'contact allowed',
-    meaning: 'Hits allowed per ball in play (H - HR) / (BF - SO - BB - HBP - HR).', source: 'src/stats/babipAgainst.ts (common practice)',
+    meaning: 'Hits allowed per ball in play (H - HR) / (BF - SO - BB - HBP - HR).', source: rateSource(babipAgainst),
     groups: PITCHERS, scope: 'group', digits: 3,
-    measure: { kind: 'rate', numerator: (p) => p.H - p.HR, denominator: bipAgainst, stabilisation: k('babipAgainst') },
+    measure: rateMeasure(babipAgainst, line, k('babipAgainst')),
   },
   {
     name: 'fip', label: 'FIP', unit: 'runs per 9 IP', direction: 'lower', skill: 'run prevention',
@@ -46,14 +54,14 @@ export const PITCHER_DIMENSIONS: readonly D[] = [
     groups: PITCHERS, scope: 'group', digits: 2,
     measure: {
       kind: 'derived',
-      raw: (p, league) => fip(p.HR, p.BB, p.HBP, p.SO, p.outs, league.fipConstant),
+      raw: (p, league) => fip(p, league.fipConstant),
       regressed: (p, r, league) => {
         const kr = r.get('k_pct');
         const bb = r.get('bb_pct');
         const hr = r.get('hr_pct');
         if (kr === undefined || bb === undefined || hr === undefined || p.outs === 0) return undefined;
         // Rates per BF times BF give regressed counts; HBP is taken as observed.
-        return fip(hr * p.BF, bb * p.BF, p.HBP, kr * p.BF, p.outs, league.fipConstant);
+        return fip({ HR: hr * p.BF, BB: bb * p.BF, HBP: p.HBP, SO: kr * p.BF, outs: p.outs }, league.fipConstant);
       },
     },
   },
@@ -83,8 +91,8 @@ export const PITCHER_DIMENSIONS: readonly D[] = [
   },
   {
     name: 'ip_per_g', label: 'IP/G', unit: 'innings per game', direction: 'neither', skill: 'workload',
-    meaning: 'Innings per appearance: how long he works each time out.', source: 'pitching.csv IP / G',
+    meaning: 'Innings per appearance: how long he works each time out.', source: rateSource(inningsPerGame),
     groups: PITCHERS, scope: 'group', digits: 2,
-    measure: { kind: 'rate', numerator: (p) => p.outs / 3, denominator: (p) => p.G, stabilisation: 0 },
+    measure: rateMeasure(inningsPerGame, line, 0),
   },
 ];

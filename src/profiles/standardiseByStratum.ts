@@ -1,3 +1,5 @@
+import { zScore } from '../stats/zScore.ts';
+
 /** Mean and sample standard deviation of a dimension in one stratum, and where they came from. */
 export interface StratumStats {
   readonly mean: number;
@@ -96,7 +98,7 @@ export function standardiseByStratum(
     if (Number.isNaN(x)) continue;
     const st = strata.get(`${season(i)}|${base(i)}`);
     if (!st || Number.isNaN(st.sd)) continue;
-    z[i] = st.sd === 0 ? 0 : (x - st.mean) / st.sd;
+    z[i] = st.sd === 0 ? 0 : zScore(x, st.mean, st.sd);
   }
   return { z, strata };
 }

@@ -12,7 +12,7 @@ export interface Explanation {
 }
 
 const gradeOf = (z: number, dim: DimensionInfo): number | null =>
-  Number.isNaN(z) ? null : toGrade(z, dim.direction === 'lower' ? 'lower' : 'higher');
+  Number.isNaN(z) ? null : toGrade(z, dim.direction);
 const round = (x: number, digits: number): number | null => (Number.isNaN(x) ? null : Number(x.toFixed(digits + 1)));
 
 /**

@@ -46,7 +46,7 @@ export function parseWant(store: ProfileStore, text: string, options: WantOption
     const stats = referenceStratum(store, g, dim.name, dim.scope === 'group' ? group : options.position, options);
     if (m[3]) {
       if (value < 20 || value > 80) throw new UsageError(`--want: grade ${value} for ${name} is off the 20 to 80 scale`, { value: part });
-      z[j] = fromGrade(value, dim.direction === 'lower' ? 'lower' : 'higher');
+      z[j] = fromGrade(value, dim.direction);
       raw[j] = stats.mean + (z[j] as number) * stats.sd;
     } else {
       raw[j] = value;

@@ -1,3 +1,5 @@
+import type { Rate } from './Rate.ts';
+
 /**
  * Batting average on balls in play against a pitcher (BABIP against).
  *
@@ -6,12 +8,22 @@
  * catcher's interference as balls in play, so it runs a little larger than the batting form
  * AB - SO - HR + SF.
  * Units: a fraction from 0 to 1; lower is better for the pitcher.
- * Returns NaN when BF - SO - BB - HBP - HR is 0.
+ * `rateOf` gives NaN when BF - SO - BB - HBP - HR is 0.
  *
  * @example
- * babipAgainst(150, 20, 750, 180, 50, 5); // => 130 / 495 = 0.26262...
+ * rateOf(babipAgainst, { H: 150, HR: 20, BF: 750, SO: 180, BB: 50, HBP: 5 }); // => 130 / 495 = 0.26262...
  */
-export function babipAgainst(H: number, HR: number, BF: number, SO: number, BB: number, HBP: number): number {
-  const inPlay = BF - SO - BB - HBP - HR;
-  return inPlay === 0 ? NaN : (H - HR) / inPlay;
-}
+export const babipAgainst: Rate<{
+  readonly H: number;
+  readonly HR: number;
+  readonly BF: number;
+  readonly SO: number;
+  readonly BB: number;
+  readonly HBP: number;
+}> = {
+  name: 'babipAgainst',
+  formula: '(H - HR) / (BF - SO - BB - HBP - HR)',
+  source: 'common practice approximation',
+  numerator: (c) => c.H - c.HR,
+  denominator: (c) => c.BF - c.SO - c.BB - c.HBP - c.HR,
+};

@@ -1,16 +1,20 @@
+import type { Rate } from './Rate.ts';
+
 /**
  * Batting average (AVG): hits per official at-bat.
  *
  * Source: Official Baseball Rules, "Determining Percentage Records" (rule 9.21, number from memory):
  * batting average = H / AB.
  * Units: a fraction from 0 to 1 (printed to three decimals); higher is better.
- * Returns NaN when AB is 0.
+ * `rateOf` gives NaN when AB is 0.
  *
- * @param H hits
- * @param AB official at-bats
  * @example
- * battingAverage(150, 500); // => 0.3
+ * rateOf(battingAverage, { H: 150, AB: 500 }); // => 0.3
  */
-export function battingAverage(H: number, AB: number): number {
-  return AB === 0 ? NaN : H / AB;
-}
+export const battingAverage: Rate<{ readonly H: number; readonly AB: number }> = {
+  name: 'battingAverage',
+  formula: 'H / AB',
+  source: 'Official Baseball Rules',
+  numerator: (c) => c.H,
+  denominator: (c) => c.AB,
+};

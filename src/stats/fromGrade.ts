@@ -9,7 +9,7 @@ const GRADE_PER_SD = 10;
  * clamping (so grades outside 20..80 are accepted and not clamped, and nothing is rounded).
  *
  * Source: common practice: z = (grade - 50) / 10 for higher-is-better, (50 - grade) / 10 for
- * lower-is-better measurements.
+ * lower-is-better measurements; `neither` as higher-is-better (as in `toGrade`).
  * Units: standard deviations of the raw measurement; sign follows the raw measurement (for a
  * lower-is-better measurement a high grade gives a negative z).
  *
@@ -19,5 +19,5 @@ const GRADE_PER_SD = 10;
  */
 export function fromGrade(grade: number, direction: Direction): number {
   const oriented = (grade - GRADE_MEAN) / GRADE_PER_SD;
-  return direction === 'higher' ? oriented : -oriented;
+  return direction === 'lower' ? -oriented : oriented;
 }

@@ -1,13 +1,19 @@
+import type { Rate } from './Rate.ts';
+
 /**
  * Home run rate (HR%) of a batter: home runs per plate appearance.
  *
  * Source: common practice: HR% = HR / PA.
  * Units: a fraction from 0 to 1 (not a percentage); higher is better for the batter.
- * Returns NaN when PA is 0.
+ * `rateOf` gives NaN when PA is 0.
  *
  * @example
- * homeRunRate(20, 500); // => 0.04
+ * rateOf(homeRunRate, { HR: 20, PA: 500 }); // => 0.04
  */
-export function homeRunRate(HR: number, PA: number): number {
-  return PA === 0 ? NaN : HR / PA;
-}
+export const homeRunRate: Rate<{ readonly HR: number; readonly PA: number }> = {
+  name: 'homeRunRate',
+  formula: 'HR / PA',
+  source: 'common practice',
+  numerator: (c) => c.HR,
+  denominator: (c) => c.PA,
+};

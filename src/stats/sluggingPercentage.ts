@@ -1,16 +1,21 @@
+import type { Rate } from './Rate.ts';
+import { totalBases, type HitCounts } from './totalBases.ts';
+
 /**
  * Slugging percentage (SLG): total bases per official at-bat.
  *
  * Source: Official Baseball Rules, "Determining Percentage Records" (rule 9.21, number from memory):
- * SLG = TB / AB. Compute TB with `totalBases`.
+ * SLG = TB / AB, with TB from `totalBases`.
  * Units: bases per at-bat, from 0 to 4; higher is better.
- * Returns NaN when AB is 0.
+ * `rateOf` gives NaN when AB is 0.
  *
- * @param TB total bases
- * @param AB official at-bats
  * @example
- * sluggingPercentage(246, 500); // => 0.492
+ * rateOf(sluggingPercentage, { H: 150, doubles: 30, triples: 3, HR: 20, AB: 500 }); // => 246 / 500 = 0.492
  */
-export function sluggingPercentage(TB: number, AB: number): number {
-  return AB === 0 ? NaN : TB / AB;
-}
+export const sluggingPercentage: Rate<HitCounts & { readonly AB: number }> = {
+  name: 'sluggingPercentage',
+  formula: 'TB / AB',
+  source: 'Official Baseball Rules',
+  numerator: totalBases,
+  denominator: (c) => c.AB,
+};

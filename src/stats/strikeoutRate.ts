@@ -1,13 +1,19 @@
+import type { Rate } from './Rate.ts';
+
 /**
  * Strikeout rate (K%) of a batter: strikeouts per plate appearance.
  *
  * Source: common practice: K% = SO / PA.
  * Units: a fraction from 0 to 1 (not a percentage); lower is better for the batter.
- * Returns NaN when PA is 0.
+ * `rateOf` gives NaN when PA is 0.
  *
  * @example
- * strikeoutRate(100, 570); // => 0.17544...
+ * rateOf(strikeoutRate, { SO: 100, PA: 570 }); // => 0.17544...
  */
-export function strikeoutRate(SO: number, PA: number): number {
-  return PA === 0 ? NaN : SO / PA;
-}
+export const strikeoutRate: Rate<{ readonly SO: number; readonly PA: number }> = {
+  name: 'strikeoutRate',
+  formula: 'SO / PA',
+  source: 'common practice',
+  numerator: (c) => c.SO,
+  denominator: (c) => c.PA,
+};

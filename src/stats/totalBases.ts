@@ -1,3 +1,12 @@
+/** Hits of a line by kind: all hits, and the extra-base hits among them. */
+export interface HitCounts {
+  /** All hits (singles included). */
+  readonly H: number;
+  readonly doubles: number;
+  readonly triples: number;
+  readonly HR: number;
+}
+
 /**
  * Total bases (TB): bases gained on hits, one for a single up to four for a home run.
  *
@@ -6,13 +15,9 @@
  * TB = H + 2B + 2 * 3B + 3 * HR.
  * Units: bases (a count); higher is better.
  *
- * @param H all hits (singles included)
- * @param doubles doubles
- * @param triples triples
- * @param HR home runs
  * @example
- * totalBases(150, 30, 3, 20); // => 150 + 30 + 6 + 60 = 246
+ * totalBases({ H: 150, doubles: 30, triples: 3, HR: 20 }); // => 150 + 30 + 6 + 60 = 246
  */
-export function totalBases(H: number, doubles: number, triples: number, HR: number): number {
-  return H + doubles + 2 * triples + 3 * HR;
+export function totalBases(c: HitCounts): number {
+  return c.H + c.doubles + 2 * c.triples + 3 * c.HR;
 }

@@ -1,12 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { computeOutcomes } from '../../src/outlook/computeOutcomes.ts';
 import { outcomesFileSchema } from '../../src/outlook/outcomesFile.ts';
-import { fip } from '../../src/stats/fip.ts';
-import { fipConstant } from '../../src/stats/fipConstant.ts';
 import { fipMinus } from '../../src/stats/fipMinus.ts';
-import { onBasePercentage } from '../../src/stats/onBasePercentage.ts';
 import { opsPlus } from '../../src/stats/opsPlus.ts';
-import { sluggingPercentage } from '../../src/stats/sluggingPercentage.ts';
 import { bat, pitch, roster } from './rosterLines.ts';
 
 const r = roster(
@@ -44,9 +40,11 @@ describe('computeOutcomes(roster)', () => {
 
   it('gives OPS+ from src/stats/opsPlus.ts against the top level\u2019s summed totals of that season', () => {
     // league totals by hand: H 250, BB 80, HBP 10, AB 900, SF 10; TB = 250 + 50 + 6 + 108 = 414
-    const lgOBP = onBasePercentage(250, 80, 10, 900, 10);
-    const lgSLG = sluggingPercentage(414, 900);
-    const h1 = opsPlus(onBasePercentage(160, 55, 8, 530, 7), sluggingPercentage(160 + 35 + 6 + 84, 530), lgOBP, lgSLG);
+    // lgOBP = (250 + 80 + 10) / (900 + 80 + 10 + 10) = 340 / 1000; lgSLG = 414 / 900
+    const lgOBP = 340 / 1000;
+    const lgSLG = 414 / 900;
+    // h1: OBP (160 + 55 + 8) / (530 + 55 + 8 + 7) = 223 / 600; TB 160 + 35 + 6 + 84 = 285
+    const h1 = opsPlus(223 / 600, 285 / 530, lgOBP, lgSLG);
     const row = out.batting.find((b) => b[0] === 'h1');
     expect(row?.[2]).toBe(600);
     expect(row?.[3]).toBeCloseTo(h1, 2);
@@ -55,9 +53,9 @@ describe('computeOutcomes(roster)', () => {
 
   it('gives FIP- from src/stats/fipMinus.ts with the season\u2019s FIP constant, the league at 100', () => {
     // league totals by hand: ER 105, outs 720, HR 28, BB 75, HBP 8, SO 230
-    const lgERA = (27 * 105) / 720;
-    const C = fipConstant(lgERA, 28, 75, 8, 230, 720);
-    const p1 = fipMinus(fip(18, 45, 5, 190, 540, C), fip(28, 75, 8, 230, 720, C));
+    // lgERA = 27 * 105 / 720 = 3.9375; C = 3.9375 - (13 * 28 + 3 * 83 - 2 * 230) / 240 = 3.9375 - 0.6375 = 3.3
+    // p1: FIP = (13 * 18 + 3 * 50 - 2 * 190) / 180 + 3.3 = 4 / 180 + 3.3; lgFIP = lgERA
+    const p1 = fipMinus(4 / 180 + 3.3, 3.9375);
     const row = out.pitching.find((p) => p[0] === 'p1');
     expect(row?.[2]).toBe(540);
     expect(row?.[3]).toBe(780);

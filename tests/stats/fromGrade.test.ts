@@ -9,6 +9,9 @@ describe('fromGrade(grade, direction)', () => {
     expect(fromGrade(65, 'higher')).toBeCloseTo(1.5, 12);
     expect(fromGrade(65, 'lower')).toBeCloseTo(-1.5, 12);
   });
+  it('reads a neither-way grade like a higher-is-better one', () => {
+    expect(fromGrade(65, 'neither')).toBeCloseTo(1.5, 12);
+  });
   it('does not clamp: a grade of 90 is z 4', () => {
     expect(fromGrade(90, 'higher')).toBeCloseTo(4, 12);
   });

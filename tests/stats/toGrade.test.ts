@@ -24,6 +24,9 @@ describe('toGrade(z, direction)', () => {
     expect(toGrade(3.5, 'lower')).toBe(20);
     expect(toGrade(-9, 'lower')).toBe(80);
   });
+  it('grades a neither-way measurement (a style) like a higher-is-better one', () => {
+    expect(toGrade(1.26, 'neither')).toBe(63);
+  });
   it('returns NaN for a missing z', () => {
     expect(toGrade(NaN, 'higher')).toBeNaN();
   });
