@@ -1,3 +1,4 @@
+import { valueAt } from '../query/valueAt.ts';
 import { QueryError } from '../errors/KindredError.ts';
 import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
 
@@ -19,7 +20,7 @@ export function closestSeasonRow(store: ProfileStore, g: StoredGroup, player: nu
   const rows = all.filter((i) => (choice.season === undefined || g.season[i] === choice.season) && (choice.level === undefined || g.level[i] === levelIdx));
   const p = store.players[player];
   if (rows.length === 0) {
-    const seasons = all.map((i) => `${g.season[i]} ${store.levels[g.level[i] as number]} ${g.position[i]}`).join(', ');
+    const seasons = all.map((i) => `${g.season[i]} ${store.levels[valueAt(g.level, i)]} ${g.position[i]}`).join(', ');
     const wanted = [choice.season, choice.level].filter((x) => x !== undefined).join(' ');
     throw new QueryError(
       'kindred.query.noSeason',
@@ -27,15 +28,16 @@ export function closestSeasonRow(store: ProfileStore, g: StoredGroup, player: nu
       { player_id: p?.playerId ?? '' },
     );
   }
-  const gap = (i: number): number => (reference === null ? -(g.season[i] as number) : Math.abs((g.season[i] as number) - reference));
-  let best = rows[0] as number;
+  const season = (i: number): number => valueAt(g.season, i);
+  const level = (i: number): number => valueAt(g.level, i);
+  const gap = (i: number): number => (reference === null ? -season(i) : Math.abs(season(i) - reference));
+  let best = valueAt(rows, 0);
   for (const i of rows) {
     const better =
       gap(i) < gap(best) ||
       (gap(i) === gap(best) &&
-        ((g.season[i] as number) > (g.season[best] as number) ||
-          (g.season[i] === g.season[best] &&
-            ((g.level[i] as number) > (g.level[best] as number) || (g.level[i] === g.level[best] && (g.sample[i] as number) > (g.sample[best] as number))))));
+        (season(i) > season(best) ||
+          (season(i) === season(best) && (level(i) > level(best) || (level(i) === level(best) && valueAt(g.sample, i) > valueAt(g.sample, best))))));
     if (better) best = i;
   }
   return best;

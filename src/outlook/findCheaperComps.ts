@@ -1,8 +1,11 @@
-import { QueryError, UsageError } from '../errors/KindredError.ts';
+import { UsageError } from '../errors/KindredError.ts';
 import { eligibleRows } from '../query/eligibleRows.ts';
 import { findCompsWithRows, type CompsOptions } from '../query/findComps.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
+import { storedGroup } from '../query/storedGroup.ts';
 import type { Target } from '../query/Target.ts';
+import { valueAt } from '../query/valueAt.ts';
+import { round } from '../stats/round.ts';
 import { likenessPerMillion } from './likenessPerMillion.ts';
 import type { CheaperComp, CheaperResult } from './types.ts';
 import { valueFrontier } from './valueFrontier.ts';
@@ -23,6 +26,11 @@ export function salaryOf(store: ProfileStore, player: number, season: number): n
   return store.salaries.get(player)?.get(season);
 }
 
+/** A row's salary (its player in its season), or undefined. */
+function rowSalary(store: ProfileStore, g: StoredGroup, row: number): number | undefined {
+  return salaryOf(store, valueAt(g.player, row), valueAt(g.season, row));
+}
+
 /**
  * Comps who do what the target does for less: the pool is the usual one restricted to player-seasons
  * with a known salary (contracts.csv, one salary per player and season, whatever the level) at or under
@@ -32,40 +40,13 @@ export function salaryOf(store: ProfileStore, player: number, season: number): n
  * above him is paid as little or less).
  */
 export function findCheaperComps(store: ProfileStore, target: Target, options: CheaperOptions): CheaperResult {
-  const g = store.groups.get(target.group);
-  if (!g) throw new QueryError('kindred.query.emptyPool', `the store has no ${target.group} profiles`, { group: target.group });
+  const g = storedGroup(store, target.group);
   const targetSalary = target.player >= 0 && target.season !== null ? salaryOf(store, target.player, target.season) : undefined;
-  let limitUsd: number;
-  if (options.limit.kind === 'max-share') {
-    const share = options.limit.share;
-    if (!(share > 0)) throw new UsageError(`--max-share ${share}: expected a share above 0, e.g. 0.5`, { value: share });
-    if (targetSalary === undefined) {
-      const p = target.player >= 0 ? store.players[target.player] : undefined;
-      const who = p ? `${p.playerId} ${p.name} has no salary in ${target.season ?? '?'} (contracts.csv)` : 'a --want profile has no salary';
-      throw new UsageError(`--max-share needs the target's salary, but ${who}; give --max-salary USD instead`, { player_id: p?.playerId ?? '' });
-    }
-    limitUsd = share * targetSalary;
-  } else {
-    if (!(options.limit.usd >= 0)) throw new UsageError(`--max-salary ${options.limit.usd}: expected an amount in USD, 0 or more`, { value: options.limit.usd });
-    limitUsd = options.limit.usd;
-  }
-
-  const exclude = new Set<number>(target.player >= 0 ? [target.player] : []);
-  const before = eligibleRows(store, g, options.comps.filter, exclude);
-  let over = 0;
-  let without = 0;
-  const withoutPlayers = new Set<number>();
-  for (let i = 0; i < g.n; i++) {
-    if (before.mask[i] !== 1) continue;
-    const salary = salaryOf(store, g.player[i] as number, g.season[i] as number);
-    if (salary === undefined) {
-      without++;
-      withoutPlayers.add(g.player[i] as number);
-    } else if (salary > limitUsd) over++;
-  }
+  const limitUsd = salaryLimitUsd(store, target, options.limit, targetSalary);
+  const counts = salaryCounts(store, g, target, options, limitUsd);
   const callerInclude = options.comps.filter.include;
   const underLimit = (row: number): boolean => {
-    const salary = salaryOf(store, g.player[row] as number, g.season[row] as number);
+    const salary = rowSalary(store, g, row);
     return salary !== undefined && salary <= limitUsd && (callerInclude === undefined || callerInclude(row));
   };
   const found = findCompsWithRows(store, target, { ...options.comps, filter: { ...options.comps.filter, include: underLimit } });
@@ -73,13 +54,13 @@ export function findCheaperComps(store: ProfileStore, target: Target, options: C
   // "More alike" is the comps' own order (exact distance, whichever space ranked them): the rounded
   // likeness would tie comps that the ranking tells apart.
   const order = found.result.comps.map((c) => -c.rank);
-  const salaries = found.rows.map((row) => salaryOf(store, g.player[row] as number, g.season[row] as number) ?? NaN);
+  const salaries = found.rows.map((row) => rowSalary(store, g, row) ?? NaN);
   const frontier = valueFrontier(order, salaries);
   const comps: CheaperComp[] = found.result.comps.map((c, i) => ({
     ...c,
-    salary_usd: salaries[i] as number,
-    likeness_per_million: Number(likenessPerMillion(c.likeness, salaries[i] as number).toFixed(2)),
-    frontier: frontier[i] as boolean,
+    salary_usd: salaries[i] ?? NaN,
+    likeness_per_million: round(likenessPerMillion(c.likeness, salaries[i] ?? NaN), 2),
+    frontier: frontier[i] === true,
   }));
   return {
     query: found.result.query,
@@ -91,11 +72,43 @@ export function findCheaperComps(store: ProfileStore, target: Target, options: C
         share: options.limit.kind === 'max-share' ? options.limit.share : null,
         target_salary_usd: targetSalary ?? null,
         under_limit: found.result.pool.eligible,
-        over_limit: over,
-        without_salary: without,
-        without_salary_players: withoutPlayers.size,
+        ...counts,
       },
     },
     comps,
   };
+}
+
+/** The limit in USD: as given, or the share of the target's salary (a usage error without one). */
+function salaryLimitUsd(store: ProfileStore, target: Target, limit: SalaryLimit, targetSalary: number | undefined): number {
+  if (limit.kind === 'max-salary') {
+    if (!(limit.usd >= 0)) throw new UsageError(`--max-salary ${limit.usd}: expected an amount in USD, 0 or more`, { value: limit.usd });
+    return limit.usd;
+  }
+  const share = limit.share;
+  if (!(share > 0)) throw new UsageError(`--max-share ${share}: expected a share above 0, e.g. 0.5`, { value: share });
+  if (targetSalary === undefined) {
+    const p = target.player >= 0 ? store.players[target.player] : undefined;
+    const who = p ? `${p.playerId} ${p.name} has no salary in ${target.season ?? '?'} (contracts.csv)` : 'a --want profile has no salary';
+    throw new UsageError(`--max-share needs the target's salary, but ${who}; give --max-salary USD instead`, { player_id: p?.playerId ?? '' });
+  }
+  return share * targetSalary;
+}
+
+/** Pool rows (before the salary rule) over the limit, and without a salary (rows and players). */
+function salaryCounts(store: ProfileStore, g: StoredGroup, target: Target, options: CheaperOptions, limitUsd: number) {
+  const exclude = new Set<number>(target.player >= 0 ? [target.player] : []);
+  const before = eligibleRows(store, g, options.comps.filter, exclude);
+  let over = 0;
+  let without = 0;
+  const withoutPlayers = new Set<number>();
+  for (let i = 0; i < g.n; i++) {
+    if (before.mask[i] !== 1) continue;
+    const salary = rowSalary(store, g, i);
+    if (salary === undefined) {
+      without++;
+      withoutPlayers.add(valueAt(g.player, i));
+    } else if (salary > limitUsd) over++;
+  }
+  return { over_limit: over, without_salary: without, without_salary_players: withoutPlayers.size };
 }

@@ -1,17 +1,23 @@
 import { QueryError, UsageError } from '../errors/KindredError.ts';
 import { isPitcherGroup } from '../profiles/positionGroup.ts';
-import { eligibleRows } from '../query/eligibleRows.ts';
-import { DEFAULT_COMPS_OPTIONS, effectiveWeights, findCompsWithRows, type CompsOptions } from '../query/findComps.ts';
+import { describeComp } from '../query/describeComp.ts';
+import { echoPool, echoQuery } from '../query/echoQuery.ts';
+import { DEFAULT_COMPS_OPTIONS, type CompsOptions } from '../query/findComps.ts';
 import { likeness } from '../query/likeness.ts';
-import { missingAwareDistance, targetWeight } from '../query/missingAwareDistance.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
+import { prepareQuery, type PreparedQuery } from '../query/prepareQuery.ts';
 import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
+import { closerFirst, rankScored } from '../query/rankScored.ts';
+import { scoreRow, type ScoredRow } from '../query/scoreRow.ts';
+import { storedGroup } from '../query/storedGroup.ts';
 import type { Target } from '../query/Target.ts';
+import { valueAt } from '../query/valueAt.ts';
+import { round } from '../stats/round.ts';
 import type { Outcomes } from './Outcomes.ts';
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 import { pathDistance, pathTargetSteps, type PathScore } from './pathDistance.ts';
 import { summariseOutlook } from './summariseOutlook.ts';
-import type { CompOutcome, OutcomeKind, PathStep, ProspectComp, ProspectResult } from './types.ts';
+import type { CompOutcome, OutcomeKind, PathStep, ProspectComp, ProspectPoolEcho, ProspectResult } from './types.ts';
 
 export interface ProspectOptions {
   readonly comps: CompsOptions;
@@ -42,13 +48,11 @@ export const DEFAULT_PROSPECT_OPTIONS: ProspectOptions = {
   includeCensored: false,
 };
 
-interface Scored {
-  readonly row: number;
+/** A pool row scored for a prospect: his player and season, the weight his likeness is scaled by, censoring. */
+interface ProspectScored extends ScoredRow {
   readonly player: number;
   readonly season: number;
-  readonly d2: number;
   readonly weight: number;
-  readonly coverage: number;
   readonly censored: boolean;
   /** With a path: the candidate's row offsets per step, and each step's own score. */
   readonly offsets: readonly number[] | null;
@@ -61,7 +65,15 @@ interface TargetStep {
   readonly level: number;
 }
 
-const round = (x: number, digits: number): number => Number(x.toFixed(digits));
+/** The prospect pool: the filter with the prospect rules, the age band, and each row's aligned rows. */
+interface ProspectPool {
+  readonly filter: PoolFilter;
+  readonly ageMin: number;
+  readonly ageMax: number;
+  /** A row's offsets (row * d) for each aligned season, or null when he lacks one. */
+  readonly offsetsOf: (row: number) => number[] | null;
+}
+
 const rowKey = (player: number, season: number, level: number): string => `${player}|${season}|${level}`;
 
 /** Rows of a group by player, season and level (cached per loaded group). */
@@ -70,33 +82,124 @@ function rowLookup(g: StoredGroup): Map<string, number> {
   let m = lookups.get(g);
   if (!m) {
     m = new Map();
-    for (let i = 0; i < g.n; i++) m.set(rowKey(g.player[i] as number, g.season[i] as number, g.level[i] as number), i);
+    for (let i = 0; i < g.n; i++) m.set(rowKey(valueAt(g.player, i), valueAt(g.season, i), valueAt(g.level, i)), i);
     lookups.set(g, m);
   }
   return m;
 }
 
 /** The target's aligned seasons: his season, then each season before it at his highest level that season. */
-function targetSteps(store: ProfileStore, g: StoredGroup, target: Target & { season: number }, n: number): TargetStep[] {
-  const steps: TargetStep[] = [{ row: target.row, season: target.season, level: g.level[target.row] as number }];
+function targetSteps(store: ProfileStore, g: StoredGroup, target: Target, season: number, n: number): TargetStep[] {
+  const steps: TargetStep[] = [{ row: target.row, season, level: valueAt(g.level, target.row) }];
   for (let j = 1; j < n; j++) {
-    const season = target.season - j;
+    const s = season - j;
     let best = -1;
     for (let i = 0; i < g.n; i++) {
-      if (g.player[i] !== target.player || g.season[i] !== season) continue;
-      if (best < 0 || (g.level[i] as number) > (g.level[best] as number) || (g.level[i] === g.level[best] && (g.sample[i] as number) > (g.sample[best] as number))) best = i;
+      if (g.player[i] !== target.player || g.season[i] !== s) continue;
+      const level = valueAt(g.level, i);
+      if (best < 0 || level > valueAt(g.level, best) || (level === valueAt(g.level, best) && valueAt(g.sample, i) > valueAt(g.sample, best))) best = i;
     }
     if (best < 0) {
       const p = store.players[target.player];
       throw new QueryError(
         'kindred.query.noSeason',
-        `${p?.playerId ?? ''} ${p?.name ?? ''} has no ${target.group} profile in ${season}: --path ${n} needs ${n} consecutive profiled seasons ending ${target.season}`,
-        { player_id: p?.playerId ?? '', season },
+        `${p?.playerId ?? ''} ${p?.name ?? ''} has no ${target.group} profile in ${s}: --path ${n} needs ${n} consecutive profiled seasons ending ${season}`,
+        { player_id: p?.playerId ?? '', season: s },
       );
     }
-    steps.push({ row: best, season, level: g.level[best] as number });
+    steps.push({ row: best, season: s, level: valueAt(g.level, best) });
   }
   return steps;
+}
+
+/** The target's season and age, checked: prospect comps need a player-season with a birth date. */
+function prospectTarget(store: ProfileStore, target: Target, options: ProspectOptions): { season: number; age: number } {
+  const { horizon, path } = options;
+  if (!Number.isInteger(horizon) || horizon < 1) throw new UsageError(`--horizon ${horizon}: expected a whole number of seasons, 1 or more`, { value: horizon });
+  if (!Number.isInteger(path) || path < 1) throw new UsageError(`--path ${path}: expected a whole number of seasons, 1 or more`, { value: path });
+  const { season, age } = target;
+  if (target.kind !== 'player' || season === null || target.level === null || target.row < 0) {
+    throw new QueryError('kindred.query.badTarget', 'prospect comps need a player-season as the target (not a --want profile)');
+  }
+  if (age === null) {
+    const p = store.players[target.player];
+    throw new QueryError('kindred.query.badTarget', `${p?.playerId ?? ''} ${p?.name ?? ''} has no birth date: prospect comps are matched by age`, { player_id: p?.playerId ?? '' });
+  }
+  return { season, age };
+}
+
+/**
+ * The prospect pool rules on top of the caller's filter: the target's level, earlier seasons, an age
+ * within OUTLOOK_CONSTANTS.ageWindow, and with a path the same level at each aligned earlier season.
+ */
+function prospectPool(g: StoredGroup, steps: readonly TargetStep[], season: number, age: number, callerFilter: PoolFilter): ProspectPool {
+  const lookup = steps.length > 1 ? rowLookup(g) : null;
+  const levelIdx = steps[0]?.level ?? -1;
+  const ageMin = age - OUTLOOK_CONSTANTS.ageWindow;
+  const ageMax = age + OUTLOOK_CONSTANTS.ageWindow;
+  const offsetsOf = (row: number): number[] | null => {
+    if (!lookup) return [row * g.d];
+    const out: number[] = [row * g.d];
+    const player = valueAt(g.player, row);
+    const s = valueAt(g.season, row);
+    for (let j = 1; j < steps.length; j++) {
+      const r = lookup.get(rowKey(player, s - j, steps[j]?.level ?? -1));
+      if (r === undefined) return null;
+      out.push(r * g.d);
+    }
+    return out;
+  };
+  const callerInclude = callerFilter.include;
+  const include = (row: number): boolean => {
+    const a = valueAt(g.age, row);
+    return (
+      g.level[row] === levelIdx &&
+      valueAt(g.season, row) < season &&
+      a >= ageMin &&
+      a <= ageMax &&
+      (lookup === null || offsetsOf(row) !== null) &&
+      (callerInclude === undefined || callerInclude(row))
+    );
+  };
+  return { filter: { ...callerFilter, include }, ageMin, ageMax, offsetsOf };
+}
+
+/** Every pool row scored (by pathDistance with a path), and the pool rows whose follow-up is censored. */
+function scoreProspects(q: PreparedQuery, pool: ProspectPool, steps: readonly TargetStep[], horizon: number, asOf: number): { scored: ProspectScored[]; censoredRows: number } {
+  const g = q.group;
+  const pathTarget = steps.length > 1 ? pathTargetSteps(steps.map((s) => Float64Array.from(g.z.subarray(s.row * g.d, s.row * g.d + g.d))), q.weights) : null;
+  const scored: ProspectScored[] = [];
+  let censoredRows = 0;
+  for (let row = 0; row < g.n; row++) {
+    if (q.mask[row] !== 1) continue;
+    const season = valueAt(g.season, row);
+    const censored = season + horizon > asOf;
+    if (censored) censoredRows++;
+    const base = { row, player: valueAt(g.player, row), season, censored };
+    if (pathTarget) {
+      const offsets = pool.offsetsOf(row);
+      if (!offsets) continue;
+      const ps = pathDistance(pathTarget, g.z, offsets, q.weights);
+      scored.push({ ...base, d2: ps.d2, weight: ps.weight, coverage: ps.coverage, offsets, steps: ps.steps });
+    } else {
+      const p = scoreRow(q, row, null);
+      scored.push({ ...base, d2: p.d2, weight: q.targetWeight, coverage: p.coverage, offsets: null, steps: null });
+    }
+  }
+  return { scored, censoredRows };
+}
+
+/**
+ * The comps: the k closest uncensored rows (rankScored: one season per player unless allSeasons),
+ * and the players with a censored season closer than the k-th comp (who would have been comps).
+ */
+function chooseProspects(g: StoredGroup, scored: readonly ProspectScored[], comps: CompsOptions): { used: ProspectScored[]; left: ProspectScored[] } {
+  const settings = { k: comps.k, allSeasons: comps.allSeasons, minCoverage: comps.minCoverage };
+  const used = rankScored(g, scored.filter((s) => !s.censored), settings);
+  const cutoff = used.length >= comps.k ? (used[used.length - 1]?.d2 ?? Infinity) : Infinity;
+  const usedPlayers = new Set(used.map((s) => s.player));
+  const closerCensored = scored.filter((s) => s.censored && s.d2 < cutoff && (comps.allSeasons || !usedPlayers.has(s.player)));
+  return { used, left: rankScored(g, closerCensored, { ...settings, k: Infinity }) };
 }
 
 /**
@@ -118,176 +221,80 @@ function targetSteps(store: ProfileStore, g: StoredGroup, target: Target & { sea
  * over every uncensored player-season of the pool, unweighted (the level-and-age base rate).
  */
 export function findProspectComps(store: ProfileStore, outcomes: Outcomes, target: Target, options: ProspectOptions): ProspectResult {
-  const { horizon, path } = options;
-  if (!Number.isInteger(horizon) || horizon < 1) throw new UsageError(`--horizon ${horizon}: expected a whole number of seasons, 1 or more`, { value: horizon });
-  if (!Number.isInteger(path) || path < 1) throw new UsageError(`--path ${path}: expected a whole number of seasons, 1 or more`, { value: path });
-  const season = target.season;
-  const age = target.age;
-  if (target.kind !== 'player' || season === null || target.level === null || target.row < 0) {
-    throw new QueryError('kindred.query.badTarget', 'prospect comps need a player-season as the target (not a --want profile)');
-  }
-  if (age === null) {
-    const p = store.players[target.player];
-    throw new QueryError('kindred.query.badTarget', `${p?.playerId ?? ''} ${p?.name ?? ''} has no birth date: prospect comps are matched by age`, { player_id: p?.playerId ?? '' });
-  }
-  const g = store.groups.get(target.group);
-  if (!g) throw new QueryError('kindred.query.emptyPool', `the store has no ${target.group} profiles`, { group: target.group });
+  const { horizon } = options;
+  const { season, age } = prospectTarget(store, target, options);
+  const g = storedGroup(store, target.group);
   const asOf = options.asOf ?? outcomes.lastSeason;
   const kind: OutcomeKind = isPitcherGroup(target.group) ? 'pitcher' : 'hitter';
-  const levelIdx = g.level[target.row] as number;
-  const steps = targetSteps(store, g, { ...target, season }, path);
-  const lookup = path > 1 ? rowLookup(g) : null;
-  const ageMin = age - OUTLOOK_CONSTANTS.ageWindow;
-  const ageMax = age + OUTLOOK_CONSTANTS.ageWindow;
+  const steps = targetSteps(store, g, target, season, options.path);
+  const pool = prospectPool(g, steps, season, age, options.comps.filter);
+  const q = prepareQuery(store, target, { ...options.comps, filter: pool.filter });
+  const { scored, censoredRows } = scoreProspects(q, pool, steps, horizon, asOf);
+  const { used, left } = chooseProspects(g, scored, options.comps);
+  const listed = [...used, ...(options.includeCensored ? left : [])].sort(closerFirst(g));
 
-  const offsetsOf = (row: number): number[] | null => {
-    if (!lookup) return [row * g.d];
-    const out: number[] = [row * g.d];
-    const player = g.player[row] as number;
-    const s = g.season[row] as number;
-    for (let j = 1; j < steps.length; j++) {
-      const r = lookup.get(rowKey(player, s - j, (steps[j] as TargetStep).level));
-      if (r === undefined) return null;
-      out.push(r * g.d);
-    }
-    return out;
-  };
-  const callerInclude = options.comps.filter.include;
-  const prospectRule = (row: number): boolean => {
-    const a = g.age[row] as number;
-    return (
-      g.level[row] === levelIdx &&
-      (g.season[row] as number) < season &&
-      a >= ageMin &&
-      a <= ageMax &&
-      (lookup === null || offsetsOf(row) !== null) &&
-      (callerInclude === undefined || callerInclude(row))
-    );
-  };
-  const filter: PoolFilter = { ...options.comps.filter, include: prospectRule };
-  const weights = effectiveWeights(g, options.comps);
-  const wT = targetWeight(target.z, weights);
-  if (!(wT > 0)) throw new QueryError('kindred.query.badTarget', 'the target has no value on any weighted dimension', { group: target.group });
-  const pathTarget = path > 1 ? pathTargetSteps(steps.map((s) => Float64Array.from(g.z.subarray(s.row * g.d, s.row * g.d + g.d))), weights) : null;
-  const { mask, count } = eligibleRows(store, g, filter, new Set([target.player]));
-
-  const scored: Scored[] = [];
-  let censoredRows = 0;
-  for (let row = 0; row < g.n; row++) {
-    if (mask[row] !== 1) continue;
-    const s = g.season[row] as number;
-    const censored = s + horizon > asOf;
-    if (censored) censoredRows++;
-    const base = { row, player: g.player[row] as number, season: s, censored };
-    if (pathTarget) {
-      const offsets = offsetsOf(row);
-      if (!offsets) continue;
-      const ps = pathDistance(pathTarget, g.z, offsets, weights);
-      if (!(ps.coverage >= options.comps.minCoverage) || !Number.isFinite(ps.d2)) continue;
-      scored.push({ ...base, d2: ps.d2, weight: ps.weight, coverage: ps.coverage, offsets, steps: ps.steps });
-    } else {
-      const p = missingAwareDistance(target.z, g.z, row * g.d, weights, wT);
-      if (!(p.coverage >= options.comps.minCoverage) || !Number.isFinite(p.d2)) continue;
-      scored.push({ ...base, d2: p.d2, weight: wT, coverage: p.coverage, offsets: null, steps: null });
-    }
-  }
-  scored.sort((a, b) => a.d2 - b.d2 || b.season - a.season);
-
-  const used: Scored[] = [];
-  const usedPlayers = new Set<number>();
-  for (const s of scored) {
-    if (used.length >= options.comps.k) break;
-    if (s.censored || (!options.comps.allSeasons && usedPlayers.has(s.player))) continue;
-    usedPlayers.add(s.player);
-    used.push(s);
-  }
-  const cutoff = used.length >= options.comps.k ? (used[used.length - 1] as Scored).d2 : Infinity;
-  const left: Scored[] = [];
-  const leftPlayers = new Set<number>();
-  for (const s of scored) {
-    if (!(s.d2 < cutoff)) break;
-    if (!s.censored || (!options.comps.allSeasons && (usedPlayers.has(s.player) || leftPlayers.has(s.player)))) continue;
-    leftPlayers.add(s.player);
-    left.push(s);
-  }
-  const listed = [...used, ...(options.includeCensored ? left : [])].sort((a, b) => a.d2 - b.d2 || b.season - a.season);
-
-  // The comps as the comps query describes them (dimensions, grades, alike, apart), for the listed rows only.
-  const listedRows = new Set(listed.map((s) => s.row));
-  const described = findCompsWithRows(store, target, {
-    ...options.comps,
-    space: 'input',
-    k: Math.max(1, listed.length),
-    exact: true,
-    allSeasons: true,
-    minCoverage: 0,
-    filter: { ...filter, include: (row) => listedRows.has(row) },
-  });
-  const compOfRow = new Map(described.rows.map((row, i) => [row, described.result.comps[i]]));
-
-  const likenessOf = (s: Scored): number => likeness(Math.sqrt(s.d2), s.weight);
-  const outcomeOf = (s: Scored): CompOutcome => outcomes.futureOf(s.player, kind, s.season, horizon, asOf);
-  const comps: ProspectComp[] = listed.map((s, i) => {
-    const comp = compOfRow.get(s.row);
-    if (!comp) throw new RangeError(`internal: row ${s.row} was not described`);
-    return {
-      ...comp,
-      rank: i + 1,
-      likeness: round(likenessOf(s), 1),
-      distance: round(Math.sqrt(s.d2), 4),
-      coverage: round(s.coverage, 3),
-      censored: s.censored,
-      outcome: outcomeOf(s),
-      ...(s.offsets && s.steps ? { path: pathSteps(store, g, s.offsets, s.steps) } : {}),
-    };
-  });
-
-  const baselineItems: { weight: number; outcome: CompOutcome }[] = [];
-  for (let i = 0; i < g.n; i++) {
-    if (mask[i] !== 1) continue;
-    const s = g.season[i] as number;
-    if (s + horizon <= asOf) baselineItems.push({ weight: 1, outcome: outcomes.futureOf(g.player[i] as number, kind, s, horizon, asOf) });
-  }
-  const outlookFigures = summariseOutlook(used.map((s) => ({ weight: likenessOf(s), outcome: outcomeOf(s) })), kind);
-
+  const likenessOf = (s: ProspectScored): number => likeness(Math.sqrt(s.d2), s.weight);
+  const outcomeOf = (s: ProspectScored): CompOutcome => outcomes.futureOf(s.player, kind, s.season, horizon, asOf);
+  const comps: ProspectComp[] = listed.map((s, i) => ({
+    ...describeComp(q, s, i + 1, { space: null, attributions: false, likenessWeight: s.weight }),
+    censored: s.censored,
+    outcome: outcomeOf(s),
+    ...(s.offsets && s.steps ? { path: pathSteps(store, g, s.offsets, s.steps) } : {}),
+  }));
+  const baseline = baselineOutlook(q, outcomes, kind, horizon, asOf);
   return {
     query: {
-      ...described.result.query,
-      k: options.comps.k,
+      ...echoQuery(q, options.comps.k, 'exact', 'input'),
       horizon_seasons: horizon,
-      path_seasons: path,
+      path_seasons: options.path,
       include_censored: options.includeCensored,
       path: steps.map((st) => {
-        const a = g.age[st.row] as number;
+        const a = valueAt(g.age, st.row);
         return { season: st.season, level: store.levels[st.level] ?? '', age: Number.isNaN(a) ? null : a };
       }),
     },
-    pool: {
-      ...described.result.pool,
-      eligible: count,
-      rules: { level: target.level, age_min: ageMin, age_max: ageMax, seasons_before: season, complete_window_to: asOf - horizon },
-      complete_window: count - censoredRows,
-      censored: censoredRows,
-    },
+    pool: prospectPoolEcho(q, pool, target, season, asOf, horizon, censoredRows),
     comps,
     outlook: {
       horizon_seasons: horizon,
       as_of_season: asOf,
       comps_used: used.length,
       comps_censored: left.length,
-      ...outlookFigures,
-      baseline: { player_seasons: baselineItems.length, ...summariseOutlook(baselineItems, kind) },
+      ...summariseOutlook(used.map((s) => ({ weight: likenessOf(s), outcome: outcomeOf(s) })), kind),
+      baseline,
     },
   };
 }
 
+/** The pool echo with the prospect rules and its censoring counts. */
+function prospectPoolEcho(q: PreparedQuery, pool: ProspectPool, target: Target, season: number, asOf: number, horizon: number, censoredRows: number): ProspectPoolEcho {
+  return {
+    ...echoPool(q),
+    rules: { level: target.level ?? '', age_min: pool.ageMin, age_max: pool.ageMax, seasons_before: season, complete_window_to: asOf - horizon },
+    complete_window: q.eligible - censoredRows,
+    censored: censoredRows,
+  };
+}
+
+/** The level-and-age base rate: the outlook summary over every uncensored pool row, unweighted. */
+function baselineOutlook(q: PreparedQuery, outcomes: Outcomes, kind: OutcomeKind, horizon: number, asOf: number): ProspectResult['outlook']['baseline'] {
+  const g = q.group;
+  const items: { weight: number; outcome: CompOutcome }[] = [];
+  for (let i = 0; i < g.n; i++) {
+    if (q.mask[i] !== 1) continue;
+    const s = valueAt(g.season, i);
+    if (s + horizon <= asOf) items.push({ weight: 1, outcome: outcomes.futureOf(valueAt(g.player, i), kind, s, horizon, asOf) });
+  }
+  return { player_seasons: items.length, ...summariseOutlook(items, kind) };
+}
+
 function pathSteps(store: ProfileStore, g: StoredGroup, offsets: readonly number[], steps: PathScore['steps']): PathStep[] {
   return steps.map((st, j) => {
-    const r = (offsets[j] as number) / g.d;
-    const a = g.age[r] as number;
+    const r = (offsets[j] ?? NaN) / g.d;
+    const a = valueAt(g.age, r);
     return {
-      season: g.season[r] as number,
-      level: store.levels[g.level[r] as number] ?? '',
+      season: valueAt(g.season, r),
+      level: store.levels[valueAt(g.level, r)] ?? '',
       age: Number.isNaN(a) ? null : a,
       likeness: round(st.likeness, 1),
       coverage: round(st.coverage, 3),

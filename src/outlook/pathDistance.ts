@@ -44,7 +44,7 @@ export function pathDistance(target: readonly PathTargetStep[], z: Float32Array,
   let shared = 0;
   const steps: { d2: number; coverage: number; likeness: number }[] = [];
   target.forEach((t, j) => {
-    const p = missingAwareDistance(t.z, z, offsets[j] as number, weights, t.weight);
+    const p = missingAwareDistance(t.z, z, offsets[j] ?? NaN, weights, t.weight);
     d2 += p.d2;
     weight += t.weight;
     shared += p.coverage * t.weight;

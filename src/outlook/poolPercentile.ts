@@ -1,3 +1,4 @@
+import { valueAt } from '../query/valueAt.ts';
 import { eligibleRows } from '../query/eligibleRows.ts';
 import { missingAwareDistance, targetWeight } from '../query/missingAwareDistance.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
@@ -43,7 +44,7 @@ export function poolPercentile(
     if (mask[i] !== 1) continue;
     const p = missingAwareDistance(targetZ, g.z, i * g.d, weights, wT);
     if (!(p.coverage >= minCoverage) || !Number.isFinite(p.d2)) continue;
-    const player = g.player[i] as number;
+    const player = valueAt(g.player, i);
     const known = best.get(player);
     if (known === undefined || p.d2 < known) best.set(player, p.d2);
   }

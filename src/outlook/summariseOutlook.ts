@@ -1,4 +1,5 @@
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
+import { roundOrNull } from '../stats/round.ts';
 import { peakOf } from './Outcomes.ts';
 import type { CompOutcome, OutcomeKind, OutlookFigures, QuantileSummary, SeasonsSummary } from './types.ts';
 import { weightedQuantiles } from './weightedQuantile.ts';
@@ -8,11 +9,10 @@ export interface WeightedOutcome {
   readonly outcome: CompOutcome;
 }
 
-const round = (x: number, digits: number): number | null => (Number.isFinite(x) ? Number(x.toFixed(digits)) : null);
 
 function quantileSummary(values: readonly number[], weights: readonly number[], digits: number): QuantileSummary {
   const [p10, p50, p90] = weightedQuantiles(values, weights, OUTLOOK_CONSTANTS.quantiles);
-  return { n: values.length, p10: round(p10 ?? NaN, digits), p50: round(p50 ?? NaN, digits), p90: round(p90 ?? NaN, digits) };
+  return { n: values.length, p10: roundOrNull(p10 ?? NaN, digits), p50: roundOrNull(p50 ?? NaN, digits), p90: roundOrNull(p90 ?? NaN, digits) };
 }
 
 /**
@@ -44,9 +44,9 @@ export function summariseOutlook(items: readonly WeightedOutcome[], kind: Outcom
       peakWeights.push(weight);
     }
   }
-  const mlbSeasons: SeasonsSummary = { ...quantileSummary(seasons, seasonWeights, 1), mean: total > 0 ? round(seasonSum / total, 2) : null };
+  const mlbSeasons: SeasonsSummary = { ...quantileSummary(seasons, seasonWeights, 1), mean: total > 0 ? roundOrNull(seasonSum / total, 2) : null };
   const peak = quantileSummary(peaks, peakWeights, 1);
-  const base = { reached_mlb: total > 0 ? round(reached / total, 3) : null, mlb_seasons: mlbSeasons };
+  const base = { reached_mlb: total > 0 ? roundOrNull(reached / total, 3) : null, mlb_seasons: mlbSeasons };
   return kind === 'hitter' ? { ...base, peak_ops_plus: peak } : { ...base, peak_fip_minus: peak };
 }
 

@@ -1,3 +1,4 @@
+import { roundOrNull } from '../stats/round.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import { toGrade } from '../stats/toGrade.ts';
 import type { DimensionDetail } from './types.ts';
@@ -13,7 +14,6 @@ export interface Explanation {
 
 const gradeOf = (z: number, dim: DimensionInfo): number | null =>
   Number.isNaN(z) ? null : toGrade(z, dim.direction);
-const round = (x: number, digits: number): number | null => (Number.isNaN(x) ? null : Number(x.toFixed(digits + 1)));
 
 /**
  * Per-dimension breakdown of one comp: natural values (observed), grades (from the regressed,
@@ -55,8 +55,8 @@ export function explainComp(
     const share = !inPlay[j] ? 0 : total > 0 ? (parts[j] as number) / total : (weights[j] as number) / weightInPlay;
     return {
       name: dim.name,
-      target: round(targetRaw[j] as number, dim.digits),
-      comp: round(compRaw[offset + j] as number, dim.digits),
+      target: roundOrNull(targetRaw[j] ?? NaN, dim.digits + 1),
+      comp: roundOrNull(compRaw[offset + j] ?? NaN, dim.digits + 1),
       target_grade: gradeOf(t, dim),
       comp_grade: gradeOf(c, dim),
       share,

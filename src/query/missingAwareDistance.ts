@@ -29,11 +29,11 @@ export function missingAwareDistance(
   let sum = 0;
   let shared = 0;
   for (let j = 0; j < d; j++) {
-    const w = weights[j] as number;
+    const w = weights[j] ?? 0;
     if (w === 0) continue;
-    const t = target[j] as number;
+    const t = target[j] ?? NaN;
     if (Number.isNaN(t)) continue;
-    const c = candidate[offset + j] as number;
+    const c = candidate[offset + j] ?? NaN;
     if (Number.isNaN(c)) continue;
     const diff = t - c;
     sum += w * diff * diff;
@@ -46,6 +46,6 @@ export function missingAwareDistance(
 /** Total weight of the dimensions the target has (W_T). */
 export function targetWeight(target: Float32Array | Float64Array, weights: Float64Array): number {
   let s = 0;
-  for (let j = 0; j < weights.length; j++) if (!Number.isNaN(target[j] as number)) s += weights[j] as number;
+  for (let j = 0; j < weights.length; j++) if (!Number.isNaN(target[j] ?? NaN)) s += weights[j] ?? 0;
   return s;
 }

@@ -4,7 +4,7 @@ import { fromGrade } from '../stats/fromGrade.ts';
 import type { StoredGroup, ProfileStore } from './ProfileStore.ts';
 import type { Target } from './Target.ts';
 import { groupOf } from '../profiles/positionGroup.ts';
-import { closest } from './closest.ts';
+import { didYouMean } from './didYouMean.ts';
 
 export interface WantOptions {
   readonly position: Position;
@@ -34,7 +34,7 @@ export function parseWant(store: ProfileStore, text: string, options: WantOption
     const j = g.dims.findIndex((d) => d.name === name);
     if (j < 0) {
       const names = g.dims.map((d) => d.name);
-      const guess = closest(name, names);
+      const guess = didYouMean(name, names);
       throw new UsageError(
         `--want: ${group} profiles have no dimension "${name}"${guess ? ` (did you mean ${guess}?)` : ''}; known: ${names.join(', ')}`,
         { value: name },

@@ -21,7 +21,8 @@ export function resolvePlayer(store: ProfileStore, text: string): number {
     else if (name.includes(wanted)) partial.push(i);
   });
   const hits = exact.length > 0 ? exact : partial;
-  if (hits.length === 1) return hits[0] as number;
+  const only = hits[0];
+  if (hits.length === 1 && only !== undefined) return only;
   const describe = (i: number): string => {
     const p = store.players[i];
     return p ? `${p.playerId} ${p.name}${p.birthDate ? ` (born ${p.birthDate})` : ''}` : String(i);

@@ -1,3 +1,4 @@
+import { valueAt } from './valueAt.ts';
 import { QueryError } from '../errors/KindredError.ts';
 import type { Position } from '../ingest/types.ts';
 import { groupOf, type PositionGroup } from '../profiles/positionGroup.ts';
@@ -37,7 +38,7 @@ export function selectTargetRow(store: ProfileStore, player: number, choice: Tar
     rows
       .map((r) => {
         const g = store.groups.get(r.group);
-        return g ? `${g.season[r.row]} ${store.levels[g.level[r.row] as number]} ${g.position[r.row]}` : '';
+        return g ? `${g.season[r.row]} ${store.levels[valueAt(g.level, r.row)]} ${g.position[r.row]}` : '';
       })
       .join(', ');
   if (all.length === 0) {
@@ -63,7 +64,7 @@ export function selectTargetRow(store: ProfileStore, player: number, choice: Tar
   let best = rows[0] as TargetRow;
   const keyOf = (r: TargetRow): [number, number, number] => {
     const g = store.groups.get(r.group);
-    return g ? [g.season[r.row] as number, g.level[r.row] as number, g.sample[r.row] as number] : [0, 0, 0];
+    return g ? [valueAt(g.season, r.row), valueAt(g.level, r.row), valueAt(g.sample, r.row)] : [0, 0, 0];
   };
   for (const r of rows) {
     const a = keyOf(r);

@@ -1,6 +1,6 @@
 import type { Command } from 'commander';
 import { UsageError } from '../errors/KindredError.ts';
-import { closest } from '../query/closest.ts';
+import { didYouMean } from '../query/didYouMean.ts';
 
 /** One HTTP query parameter taken from a command-line option of the same name without its dashes. */
 export interface ParameterSpec {
@@ -81,7 +81,7 @@ export function parseParameters(query: URLSearchParams, set: ParameterSet): Pars
     }
     const spec = set.specs.get(name);
     if (spec === undefined && !set.extra.includes(name)) {
-      const guess = closest(name, known);
+      const guess = didYouMean(name, known);
       throw new UsageError(`unknown parameter "${name}"${guess ? ` (did you mean ${guess}?)` : ''}; known: ${known.join(', ')}`, { parameter: name });
     }
     if (spec?.flag) {

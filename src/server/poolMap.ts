@@ -1,3 +1,4 @@
+import { round } from '../stats/round.ts';
 import type { StoredGroup, ProfileStore } from '../query/ProfileStore.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import { pcaProjection } from './pcaProjection.ts';
@@ -58,4 +59,3 @@ export function poolMap(store: ProfileStore, g: StoredGroup): PoolMap {
   };
 }
 
-const round = (v: number, digits: number): number => Number(v.toFixed(digits));

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { simStore, type SimStore } from '../helpers/simStore.ts';
-import { DEFAULT_COMPS_OPTIONS, effectiveWeights, findComps, findCompsWithRows } from '../../src/query/findComps.ts';
+import { effectiveWeights } from '../../src/query/prepareQuery.ts';
+import { DEFAULT_COMPS_OPTIONS, findComps, findCompsWithRows } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import { parseWant } from '../../src/query/parseWant.ts';
 import type { StoredGroup } from '../../src/query/ProfileStore.ts';

@@ -4,7 +4,7 @@ import type { CompsOptions } from '../../query/findComps.ts';
 import type { PoolFilter } from '../../query/PoolFilter.ts';
 import { isWeightPreset, WEIGHT_PRESETS } from '../../query/weightPresets.ts';
 import type { ProfileStore } from '../../query/ProfileStore.ts';
-import { closest } from '../../query/closest.ts';
+import { didYouMean } from '../../query/didYouMean.ts';
 
 const positionSchema = z.enum(['C', '1B', '2B', '3B', 'SS', 'LF', 'CF', 'RF', 'DH', 'SP', 'RP']);
 
@@ -54,7 +54,7 @@ export function compsOptionsFrom(o: QueryOptions, store: ProfileStore): CompsOpt
   for (const g of store.groups.values()) for (const d of g.dims) known.add(d.name);
   for (const name of o.weights?.keys() ?? []) {
     if (!known.has(name)) {
-      const guess = closest(name, [...known]);
+      const guess = didYouMean(name, [...known]);
       throw new UsageError(`--weights: no dimension "${name}"${guess ? ` (did you mean ${guess}?)` : ''}; see kindred dims`, { value: name });
     }
   }

@@ -3,9 +3,9 @@
  * within a third of the word's length; undefined otherwise. For "did you mean" hints.
  *
  * @example
- * closest('obpp', ['obp', 'slg']); // => 'obp'
+ * didYouMean('obpp', ['obp', 'slg']); // => 'obp'
  */
-export function closest(word: string, candidates: readonly string[]): string | undefined {
+export function didYouMean(word: string, candidates: readonly string[]): string | undefined {
   let best: string | undefined;
   let bestDistance = Math.max(1, Math.floor(word.length / 3)) + 1;
   for (const c of candidates) {
@@ -24,9 +24,9 @@ function editDistance(a: string, b: string): number {
     const cur = [i];
     for (let j = 1; j <= b.length; j++) {
       const cost = a[i - 1] === b[j - 1] ? 0 : 1;
-      cur.push(Math.min((prev[j] as number) + 1, (cur[j - 1] as number) + 1, (prev[j - 1] as number) + cost));
+      cur.push(Math.min((prev[j] ?? Infinity) + 1, (cur[j - 1] ?? Infinity) + 1, (prev[j - 1] ?? Infinity) + cost));
     }
     prev = cur;
   }
-  return prev[b.length] as number;
+  return prev[b.length] ?? Infinity;
 }
