@@ -2,6 +2,8 @@ import { Command, CommanderError } from 'commander';
 import type { CliIo } from './CliIo.ts';
 import { KindredError } from '../errors/KindredError.ts';
 import { InputError, formatIssue } from '../errors/InputError.ts';
+import { ParameterError } from '../errors/ParameterError.ts';
+import { CLI_NAMES } from './requestOptions.ts';
 import { buildCommand } from './commands/buildCommand.ts';
 import { compsCommand } from './commands/compsCommand.ts';
 import { dimsCommand } from './commands/dimsCommand.ts';
@@ -52,6 +54,10 @@ function report(e: unknown, io: CliIo): number {
     const shown = e.issues.slice(0, MAX_ISSUES_SHOWN).map(formatIssue);
     const more = e.issues.length > MAX_ISSUES_SHOWN ? [`... and ${e.issues.length - MAX_ISSUES_SHOWN} more`] : [];
     io.stderr.write(`kindred: bad input (${e.issues.length} problem${e.issues.length === 1 ? '' : 's'}); nothing was written\n${[...shown, ...more].join('\n')}\n`);
+    return e.exitCode;
+  }
+  if (e instanceof ParameterError) {
+    io.stderr.write(`kindred: ${e.render(CLI_NAMES)} [${e.code}]\n`);
     return e.exitCode;
   }
   if (e instanceof KindredError) {

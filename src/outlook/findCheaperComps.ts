@@ -1,4 +1,4 @@
-import { UsageError } from '../errors/KindredError.ts';
+import { ParameterError } from '../errors/ParameterError.ts';
 import { eligibleRows } from '../query/eligibleRows.ts';
 import { findCompsWithRows, type CompsOptions } from '../query/findComps.ts';
 import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
@@ -82,15 +82,18 @@ export function findCheaperComps(store: ProfileStore, target: Target, options: C
 /** The limit in USD: as given, or the share of the target's salary (a usage error without one). */
 function salaryLimitUsd(store: ProfileStore, target: Target, limit: SalaryLimit, targetSalary: number | undefined): number {
   if (limit.kind === 'max-salary') {
-    if (!(limit.usd >= 0)) throw new UsageError(`--max-salary ${limit.usd}: expected an amount in USD, 0 or more`, { value: limit.usd });
+    if (!(limit.usd >= 0)) throw new ParameterError('max-salary', `expected an amount in USD, 0 or more, got ${limit.usd}`, { context: { value: limit.usd } });
     return limit.usd;
   }
   const share = limit.share;
-  if (!(share > 0)) throw new UsageError(`--max-share ${share}: expected a share above 0, e.g. 0.5`, { value: share });
+  if (!(share > 0)) throw new ParameterError('max-share', `expected a share above 0, e.g. 0.5, got ${share}`, { context: { value: share } });
   if (targetSalary === undefined) {
     const p = target.player >= 0 ? store.players[target.player] : undefined;
-    const who = p ? `${p.playerId} ${p.name} has no salary in ${target.season ?? '?'} (contracts.csv)` : 'a --want profile has no salary';
-    throw new UsageError(`--max-share needs the target's salary, but ${who}; give --max-salary USD instead`, { player_id: p?.playerId ?? '' });
+    const who = p ? `${p.playerId} ${p.name} has no salary in ${target.season ?? '?'} (contracts.csv)` : 'a hand-built profile has no salary';
+    throw new ParameterError('max-share', (n) => `${n('max-share')} needs the target's salary, but ${who}; give ${n('max-salary')} USD instead`, {
+      prefixed: false,
+      context: { player_id: p?.playerId ?? '' },
+    });
   }
   return share * targetSalary;
 }

@@ -1,4 +1,5 @@
-import { QueryError, UsageError } from '../errors/KindredError.ts';
+import { QueryError } from '../errors/KindredError.ts';
+import { ParameterError } from '../errors/ParameterError.ts';
 import { isPitcherGroup } from '../profiles/positionGroup.ts';
 import { describeComp } from '../query/describeComp.ts';
 import { echoPool, echoQuery } from '../query/echoQuery.ts';
@@ -103,7 +104,7 @@ function targetSteps(store: ProfileStore, g: StoredGroup, target: Target, season
       const p = store.players[target.player];
       throw new QueryError(
         'kindred.query.noSeason',
-        `${p?.playerId ?? ''} ${p?.name ?? ''} has no ${target.group} profile in ${s}: --path ${n} needs ${n} consecutive profiled seasons ending ${season}`,
+        `${p?.playerId ?? ''} ${p?.name ?? ''} has no ${target.group} profile in ${s}: a path of ${n} seasons needs ${n} consecutive profiled seasons ending ${season}`,
         { player_id: p?.playerId ?? '', season: s },
       );
     }
@@ -115,11 +116,11 @@ function targetSteps(store: ProfileStore, g: StoredGroup, target: Target, season
 /** The target's season and age, checked: prospect comps need a player-season with a birth date. */
 function prospectTarget(store: ProfileStore, target: Target, options: ProspectOptions): { season: number; age: number } {
   const { horizon, path } = options;
-  if (!Number.isInteger(horizon) || horizon < 1) throw new UsageError(`--horizon ${horizon}: expected a whole number of seasons, 1 or more`, { value: horizon });
-  if (!Number.isInteger(path) || path < 1) throw new UsageError(`--path ${path}: expected a whole number of seasons, 1 or more`, { value: path });
+  if (!Number.isInteger(horizon) || horizon < 1) throw new ParameterError('horizon', `expected a whole number of seasons, 1 or more, got ${horizon}`, { context: { value: horizon } });
+  if (!Number.isInteger(path) || path < 1) throw new ParameterError('path', `expected a whole number of seasons, 1 or more, got ${path}`, { context: { value: path } });
   const { season, age } = target;
   if (target.kind !== 'player' || season === null || target.level === null || target.row < 0) {
-    throw new QueryError('kindred.query.badTarget', 'prospect comps need a player-season as the target (not a --want profile)');
+    throw new QueryError('kindred.query.badTarget', 'prospect comps need a player-season as the target (not a hand-built profile)');
   }
   if (age === null) {
     const p = store.players[target.player];

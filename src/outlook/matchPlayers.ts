@@ -30,7 +30,7 @@ export function matchPlayers(store: ProfileStore, target: Target, candidate: num
   const g = storedGroup(store, target.group);
   const row = closestSeasonRow(store, g, candidate, target.season, options.candidate);
   if (row === target.row) {
-    throw new QueryError('kindred.query.badTarget', 'the candidate season is the target season itself: choose another with --season-b', { player_id: store.players[candidate]?.playerId ?? '' });
+    throw new QueryError('kindred.query.badTarget', 'the candidate season is the target season itself: choose another season of the candidate', { player_id: store.players[candidate]?.playerId ?? '' });
   }
   const q = prepareQuery(store, target, options.comps);
   const reference = compsOf(q, { ...options.comps, space: 'input', k: 1 });

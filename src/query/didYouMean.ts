@@ -18,7 +18,8 @@ export function didYouMean(word: string, candidates: readonly string[]): string 
   return best;
 }
 
-function editDistance(a: string, b: string): number {
+/** Levenshtein (1966) edit distance: insertions, deletions and substitutions of one character. */
+export function editDistance(a: string, b: string): number {
   let prev = Array.from({ length: b.length + 1 }, (_, i) => i);
   for (let i = 1; i <= a.length; i++) {
     const cur = [i];
@@ -30,3 +31,4 @@ function editDistance(a: string, b: string): number {
   }
   return prev[b.length] ?? Infinity;
 }
+

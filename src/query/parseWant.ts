@@ -1,10 +1,12 @@
-import { QueryError, UsageError } from '../errors/KindredError.ts';
+import { QueryError } from '../errors/KindredError.ts';
 import type { Position } from '../ingest/types.ts';
 import { fromGrade } from '../stats/fromGrade.ts';
 import type { StoredGroup, ProfileStore } from './ProfileStore.ts';
 import type { Target } from './Target.ts';
 import { groupOf } from '../profiles/positionGroup.ts';
-import { didYouMean } from './didYouMean.ts';
+import { dimensionSuggestions, findDimension, suggestionHint } from './findDimension.ts';
+import { ParameterError } from '../errors/ParameterError.ts';
+import { PLAUSIBLE_RANGES, type MeasuredColumn } from '../ingest/plausibleRanges.ts';
 
 export interface WantOptions {
   readonly position: Position;
@@ -26,29 +28,35 @@ export function parseWant(store: ProfileStore, text: string, options: WantOption
   const z = new Float64Array(g.d).fill(NaN);
   const raw = new Float64Array(g.d).fill(NaN);
   const parts = text.split(',').map((s) => s.trim()).filter((s) => s.length > 0);
-  if (parts.length === 0) throw new UsageError('--want needs at least one name=value, e.g. --want "obp=.360,k_pct=.18"');
+  if (parts.length === 0) throw new ParameterError('want', 'needs at least one name=value, e.g. "obp=.360,k_pct=.18"');
   for (const part of parts) {
-    const m = /^([a-z0-9_]+)\s*=\s*(-?(?:\d+\.?\d*|\.\d+))(g?)$/i.exec(part);
-    if (!m) throw new UsageError(`--want: "${part}" is not name=value (expected e.g. obp=.360 or obp=60g)`, { value: part });
-    const name = (m[1] as string).toLowerCase();
-    const j = g.dims.findIndex((d) => d.name === name);
-    if (j < 0) {
-      const names = g.dims.map((d) => d.name);
-      const guess = didYouMean(name, names);
-      throw new UsageError(
-        `--want: ${group} profiles have no dimension "${name}"${guess ? ` (did you mean ${guess}?)` : ''}; known: ${names.join(', ')}`,
-        { value: name },
-      );
-    }
+    const m = /^([^=]+?)\s*=\s*(-?(?:\d+\.?\d*|\.\d+))(g?)$/i.exec(part);
+    if (!m) throw new ParameterError('want', `"${part}" is not name=value (expected e.g. obp=.360 or obp=60g)`, { context: { value: part } });
+    const typed = (m[1] as string).trim();
+    const j = findDimension(g.dims, typed);
     const dim = g.dims[j];
-    if (!dim) continue;
+    if (!dim) {
+      const names = g.dims.map((d) => d.name);
+      throw new ParameterError('want', `${group} profiles have no dimension "${typed}"${suggestionHint(dimensionSuggestions(g.dims, typed))}; known: ${names.join(', ')}`, {
+        context: { value: typed },
+      });
+    }
+    if (!Number.isNaN(raw[j] as number)) throw new ParameterError('want', `${dim.name} is given more than once in "${text}"; give each dimension once`, { context: { value: dim.name } });
     const value = Number(m[2]);
+    if (!Number.isFinite(value)) throw new ParameterError('want', `"${part}": the number is too large to read`, { context: { value: part } });
     const stats = referenceStratum(store, g, dim.name, dim.scope === 'group' ? group : options.position, options);
     if (m[3]) {
-      if (value < 20 || value > 80) throw new UsageError(`--want: grade ${value} for ${name} is off the 20 to 80 scale`, { value: part });
+      if (value < 20 || value > 80) throw new ParameterError('want', `grade ${value} for ${dim.name} is off the 20 to 80 scale`, { context: { value: part } });
       z[j] = fromGrade(value, dim.direction);
       raw[j] = stats.mean + (z[j] as number) * stats.sd;
     } else {
+      const range = plausibleWant(g, j, dim.name, stats);
+      if (value < range.min || value > range.max) {
+        const show = (x: number): string => x.toFixed(dim.digits).replace(/^0\./, '.').replace(/^-0\./, '-.');
+        throw new ParameterError('want', `${dim.name}=${m[2] as string} is not a plausible value: expected ${show(range.min)} to ${show(range.max)} ${dim.unit} (${range.why}), or a grade such as ${dim.name}=60g`, {
+          context: { value: part },
+        });
+      }
       raw[j] = value;
       z[j] = stats.sd > 0 ? (value - stats.mean) / stats.sd : 0;
     }
@@ -65,6 +73,31 @@ export function parseWant(store: ProfileStore, text: string, options: WantOption
     z,
     raw,
   };
+}
+
+/** Standard deviations from the reference league mean beyond which a --want value is taken for a typing error (project choice: the 20 to 80 scale spans 3). */
+export const WANT_MAX_SD = 5;
+
+/**
+ * The values a hand-built target may take for a dimension: the measured column's plausible range when
+ * the dimension is one (src/ingest/plausibleRanges.ts, the same bounds the roster is checked against),
+ * else the reference league mean plus or minus WANT_MAX_SD standard deviations, not below 0 when the
+ * store holds no negative value of it.
+ */
+function plausibleWant(g: StoredGroup, j: number, name: string, stats: { mean: number; sd: number }): { min: number; max: number; why: string } {
+  if (isMeasuredColumn(name)) {
+    const r = PLAUSIBLE_RANGES[name];
+    return { min: r.min, max: r.max, why: 'the plausible range of the measurement' };
+  }
+  if (!(stats.sd > 0)) return { min: -Infinity, max: Infinity, why: '' };
+  let negative = false;
+  for (let i = 0; i < g.n && !negative; i++) negative = (g.raw[i * g.d + j] as number) < 0;
+  const low = stats.mean - WANT_MAX_SD * stats.sd;
+  return { min: negative ? low : Math.max(0, low), max: stats.mean + WANT_MAX_SD * stats.sd, why: `within ${WANT_MAX_SD} standard deviations of the league mean` };
+}
+
+function isMeasuredColumn(name: string): name is MeasuredColumn {
+  return Object.hasOwn(PLAUSIBLE_RANGES, name);
 }
 
 function referenceStratum(
@@ -88,7 +121,7 @@ function referenceStratum(
   if (!best) {
     throw new QueryError(
       'kindred.query.badTarget',
-      `no league figures for ${dim} (${scope}${options.season !== undefined ? `, ${options.season}` : ''}${options.level ? `, ${options.level}` : ''}) to read --want values against`,
+      `no league figures for ${dim} (${scope}${options.season !== undefined ? `, ${options.season}` : ''}${options.level ? `, ${options.level}` : ''}) to read hand-built values against`,
       { value: dim },
     );
   }

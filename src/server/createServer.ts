@@ -134,6 +134,7 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
     } catch (e) {
       const r = errorResponse(e);
       if (r.unexpected) log(`kindred serve: ${method} ${req.url ?? ''}: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+      else if (r.logLine !== undefined) log(`kindred serve: ${method} ${path0(req.url)}: ${r.logLine}`);
       for (const [k, v] of Object.entries(r.headers)) res.setHeader(k, v);
       if (!req.complete) res.setHeader('Connection', 'close');
       sendJson(res, method, r.status, JSON.stringify(r.body));
@@ -165,6 +166,13 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
         server.closeAllConnections();
       }),
   };
+}
+
+/** The path of a request target, without its query string (for log lines). */
+function path0(target: string | undefined): string {
+  const t = target ?? '';
+  const q = t.indexOf('?');
+  return q < 0 ? t : t.slice(0, q);
 }
 
 function sendJson(res: ServerResponse, method: string, status: number, text: string): void {

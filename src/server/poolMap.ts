@@ -2,20 +2,9 @@ import { round } from '../stats/round.ts';
 import type { StoredGroup, ProfileStore } from '../query/ProfileStore.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import { pcaProjection } from './pcaProjection.ts';
+import type { PoolMap } from '../request/apiContract.ts';
 
-/** A 2-D map of a position group's pool: one point per player-season, in columns (the body of /api/map). */
-export interface PoolMap {
-  readonly group: PositionGroup;
-  readonly n: number;
-  /** Share of the total variance each of the two axes carries (0 to 1). */
-  readonly explained: readonly [number, number];
-  readonly x: readonly number[];
-  readonly y: readonly number[];
-  readonly player_id: readonly string[];
-  readonly name: readonly string[];
-  readonly season: readonly number[];
-  readonly level: readonly string[];
-}
+export type { PoolMap } from '../request/apiContract.ts';
 
 /** Digits kept for the map coordinates (a step of 0.001 z is far below a pixel). */
 const MAP_DIGITS = 3;

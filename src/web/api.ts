@@ -1,20 +1,17 @@
-import type { CompsResult } from '../query/types.ts';
-import type { PlayerHit } from '../server/api/playersEndpoint.ts';
-import type { StoreInfo } from '../server/api/infoEndpoint.ts';
-import type { PoolMap } from '../server/poolMap.ts';
-import type { DimensionInfo } from '../profiles/Dimension.ts';
-import type { CheaperResult, MatchResult, ProspectResult } from '../outlook/types.ts';
+import type { CheaperResult, CompsResult, DimensionInfo, MatchResult, PlayerHit, PoolMap, ProspectResult, StoreInfo } from '../request/apiContract.ts';
 
-/** An error answered by the API: its stable code and message. */
+/** An error answered by the API: its stable code, message and the parameter at fault (if any). */
 export class ApiError extends Error {
   readonly code: string;
   readonly status: number;
+  readonly parameter: string | undefined;
 
-  constructor(status: number, code: string, message: string) {
+  constructor(status: number, code: string, message: string, parameter?: string) {
     super(message);
     this.name = 'ApiError';
     this.status = status;
     this.code = code;
+    this.parameter = parameter;
   }
 }
 
@@ -29,7 +26,12 @@ export async function getJson(path: string, params: URLSearchParams = new URLSea
   const body: unknown = await res.json().catch(() => null);
   if (!res.ok) {
     const err = isRecord(body) && isRecord(body.error) ? body.error : {};
-    throw new ApiError(res.status, typeof err.code === 'string' ? err.code : 'unknown', typeof err.message === 'string' ? err.message : `HTTP ${res.status}`);
+    throw new ApiError(
+      res.status,
+      typeof err.code === 'string' ? err.code : 'unknown',
+      typeof err.message === 'string' ? err.message : `the server answered HTTP ${res.status}`,
+      typeof err.parameter === 'string' ? err.parameter : undefined,
+    );
   }
   return body;
 }

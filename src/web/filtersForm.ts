@@ -1,4 +1,4 @@
-import type { StoreInfo } from '../server/api/infoEndpoint.ts';
+import type { StoreInfo } from '../request/apiContract.ts';
 import { h } from './dom.ts';
 
 export interface FiltersForm {

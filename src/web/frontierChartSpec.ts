@@ -1,5 +1,5 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { CheaperResult } from '../outlook/types.ts';
+import type { CheaperResult } from '../request/apiContract.ts';
 import { PALETTE } from './palette.ts';
 
 /**

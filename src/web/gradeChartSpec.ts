@@ -1,5 +1,5 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { Comp } from '../query/types.ts';
+import type { Comp } from '../request/apiContract.ts';
 import { PALETTE } from './palette.ts';
 
 /** Width of the grade axis in pixels (the alike/apart tags sit to its right). */

@@ -1,5 +1,6 @@
-import type { DimensionInfo } from '../profiles/Dimension.ts';
-import { ApiError, fetchInfo, getJson } from './api.ts';
+import type { DimensionInfo } from '../request/apiContract.ts';
+import { fetchInfo, getJson } from './api.ts';
+import { pageMessage } from './pageMessage.ts';
 import { byId, h } from './dom.ts';
 import { filtersForm } from './filtersForm.ts';
 import { playerPicker } from './playerPicker.ts';
@@ -75,7 +76,7 @@ async function start(): Promise<void> {
     results.clear('Working...');
     v.run(ctx)
       .catch((e: unknown) => {
-        results.clear(e instanceof ApiError ? `${e.message} [${e.code}]` : e instanceof Error ? e.message : String(e));
+        results.clear(pageMessage(e));
         results.element.querySelector('.message')?.classList.add('error');
       })
       .finally(() => {
@@ -86,5 +87,5 @@ async function start(): Promise<void> {
 }
 
 start().catch((e: unknown) => {
-  document.body.append(h('p', { class: 'message error' }, `The page could not start: ${e instanceof Error ? e.message : String(e)}`));
+  document.body.append(h('p', { class: 'message error' }, `The page could not start: ${pageMessage(e)}`));
 });

@@ -1,5 +1,5 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { ProspectResult } from '../outlook/types.ts';
+import type { ProspectResult } from '../request/apiContract.ts';
 import { PALETTE } from './palette.ts';
 
 /** The peak measure of a prospect result: OPS+ (hitters, higher is better) or FIP- (pitchers, lower is better). */

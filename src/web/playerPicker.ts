@@ -1,4 +1,4 @@
-import type { PlayerHit } from '../server/api/playersEndpoint.ts';
+import type { PlayerHit } from '../request/apiContract.ts';
 import { fetchPlayers } from './api.ts';
 import { h } from './dom.ts';
 

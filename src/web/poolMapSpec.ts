@@ -1,5 +1,5 @@
 import type { TopLevelSpec } from 'vega-lite';
-import type { PoolMap } from '../server/poolMap.ts';
+import type { PoolMap } from '../request/apiContract.ts';
 import { PALETTE } from './palette.ts';
 
 export interface MapPoint {

@@ -1,5 +1,5 @@
-import type { Comp, CompsResult } from '../query/types.ts';
-import type { DimensionInfo } from '../profiles/Dimension.ts';
+import type { Comp, CompsResult } from '../request/apiContract.ts';
+import type { DimensionInfo } from '../request/apiContract.ts';
 import { fetchMap } from './api.ts';
 import { h } from './dom.ts';
 import { download, toCsv } from './exportTable.ts';
@@ -98,8 +98,10 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
       summary.replaceChildren(h('p', { class: 'message' }, message));
       table.replaceChildren();
       gradeChart.replaceChildren();
+      gradeTitle.textContent = 'Grades by dimension';
       mapChart.replaceChildren();
       extraChartBox.replaceChildren();
+      extraTitle.textContent = '';
       extraChart.hidden = true;
       csvButton.disabled = true;
       jsonButton.disabled = true;

@@ -1,4 +1,4 @@
-import type { DimensionInfo } from '../profiles/Dimension.ts';
+import type { DimensionInfo } from '../request/apiContract.ts';
 import { fetchDims } from './api.ts';
 import { h } from './dom.ts';
 

@@ -1,11 +1,11 @@
-import type { DimensionInfo } from '../profiles/Dimension.ts';
-import type { StoreInfo } from '../server/api/infoEndpoint.ts';
+import type { DimensionInfo } from '../request/apiContract.ts';
+import type { StoreInfo } from '../request/apiContract.ts';
 import { fetchCheaper, fetchComps, fetchMatch, fetchProspect } from './api.ts';
 import { h } from './dom.ts';
 import { frontierChartSpec } from './frontierChartSpec.ts';
 import { outcomeChartSpec, peakMeasure, peakOf } from './outcomeChartSpec.ts';
-import type { CheaperComp, MatchCandidate, ProspectComp } from '../outlook/types.ts';
-import type { Comp } from '../query/types.ts';
+import type { CheaperComp, MatchCandidate, ProspectComp } from '../request/apiContract.ts';
+import type { Comp } from '../request/apiContract.ts';
 import type { FiltersForm } from './filtersForm.ts';
 import type { PlayerPicker } from './playerPicker.ts';
 import type { ResultsPanel } from './resultsPanel.ts';

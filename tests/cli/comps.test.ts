@@ -142,6 +142,25 @@ describe('kindred comps --batch', () => {
     expect(lines[1]?.error?.code).toBe('kindred.query.unknownPlayer');
     compsResultSchema.parse(lines[0]);
   });
+
+  it('with --format csv writes CSV rows under one header (not JSON lines); a failed target is named on stderr with its line', async () => {
+    const c = profiles.groups.get('C');
+    const ids: string[] = [];
+    for (let i = 0; c && i < c.n && ids.length < 2; i++) {
+      const id = profiles.players[c.player[i] as number]?.playerId ?? '';
+      if (!ids.includes(id)) ids.push(id);
+    }
+    const file = join(dir, 'targets-csv.csv');
+    await writeFile(file, `player_id,season,level\n${ids[0]},,\nnobody,2020,AA\n${ids[1]},,\n`);
+    const out = await runCli('comps', '--batch', file, '--store', store, '--k', '2', '--format', 'csv');
+    expect(out.code).toBe(1);
+    const lines = out.stdout.trim().split('\n');
+    expect(lines).toHaveLength(1 + 2 + 2);
+    expect(lines[0]).toMatch(/^target_player_id,target_season,target_level,rank,player_id,/);
+    expect(lines.filter((l) => l.startsWith('target_player_id'))).toHaveLength(1);
+    expect(lines.slice(1).map((l) => l.split(',')[0])).toEqual([ids[0], ids[0], ids[1], ids[1]]);
+    expect(out.stderr).toMatch(/targets-csv\.csv:3: nobody: no player matches "nobody"/);
+  });
 });
 
 describe('usage errors exit 2, missing stores exit 1', () => {
@@ -150,6 +169,15 @@ describe('usage errors exit 2, missing stores exit 1', () => {
     [['comps', 'x', '--format', 'xml'], /expected table, json or csv/],
     [['comps', 'x', '--bogus'], /unknown option/],
     [['comps', 'x', '--season', '20'], /four-digit season/],
+    [['comps', 'x', '--age', '2530'], /--age.*expected ages like 21-25.*got "2530"/],
+    [['comps', 'x', '--age', '100'], /--age.*got "100"/],
+    [['comps', 'x', '--pool-season', '20152020'], /--pool-season.*got "20152020"/],
+    [['comps', 'x', '--weights', 'obp=2,obp=0'], /--weights.*obp is given more than once/],
+    [['comps', 'x', '--k', '1001'], /--k.*from 1 to 1000/],
+    [['comps', '--want', 'obp=.300,obp=.400', '--position', 'SS'], /^kindred: --want: obp is given more than once/],
+    [['comps', '--want', 'obp=5', '--position', 'SS'], /^kindred: --want: obp=5 is not a plausible value: expected \.\d+ to \.\d+/],
+    [['comps', '--want', 'obp=360', '--position', 'SS'], /obp=360 is not a plausible value/],
+    [['comps', 'x', '--weights', 'sprnt=0'], /^kindred: --weights: no dimension "sprnt" \(did you mean sprint_ft_s\?\)/],
   ])('kindred %j', async (argv, message) => {
     const out = await runCli(...argv, '--store', store);
     expect(out.code).toBe(2);

@@ -119,7 +119,7 @@ describe('kindred prospect <player>', () => {
     expect(unknown.stderr).toMatch(/kindred\.query\.unknownPlayer/);
     const tooLong = await runCli('prospect', hitter, '--store', store, '--path', '30');
     expect(tooLong.code).toBe(1);
-    expect(tooLong.stderr).toMatch(/--path 30 needs 30 consecutive profiled seasons/);
+    expect(tooLong.stderr).toMatch(/a path of 30 seasons needs 30 consecutive profiled seasons/);
   });
 
   it('exits 1 and asks for a rebuild on a store built without outcomes', async () => {

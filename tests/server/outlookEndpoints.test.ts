@@ -3,7 +3,7 @@ import { cp, readFile, rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { createServer, type RunningServer } from '../../src/server/createServer.ts';
 import { main } from '../../src/cli/main.ts';
-import { captureIo } from '../../src/server/captureIo.ts';
+import { captureIo } from '../helpers/captureIo.ts';
 import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
 import type { ProfileStore } from '../../src/query/ProfileStore.ts';
 import { buildDemoStore, errorOf, json, send, tempDir } from './serverFixture.ts';
@@ -117,7 +117,7 @@ describe('GET /api/cheaper answers what `kindred cheaper --format json` prints',
     for (const [q, message] of [
       ['max-salary=lots', /expected an amount in US dollars/],
       ['max-share=2', /expected a number from 0 to 1/],
-      ['max-salary=100&max-share=0.2', /either --max-salary or --max-share/],
+      ['max-salary=100&max-share=0.2', /^give either max-salary or max-share, not both$/],
       ['salary=100', /unknown parameter "salary"/],
     ] as [string, RegExp][]) {
       const r = await get(`/api/cheaper?player=p000002&${q}`);
@@ -145,7 +145,7 @@ describe('GET /api/match answers what `kindred match --format json` prints', () 
     const cases: [string, number, RegExp][] = [
       ['player=p000002', 400, /name the candidate/],
       ['player=p000002&candidate=p000003&level-b=ZZ', 400, /unknown level "ZZ"/],
-      ['player=p000002&want=obp%3D60g&position=SS&candidate=p000003', 400, /either a player or --want/],
+      ['player=p000002&want=obp%3D60g&position=SS&candidate=p000003', 400, /^give either a player or want, not both$/],
       ['player=p000002&candidate=nobody-here', 404, /no player matches/],
       ['player=p000002&candidate=p000003&season-b=x', 400, /parameter season-b/],
     ];

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { spawn, type ChildProcessWithoutNullStreams } from 'node:child_process';
 import { join } from 'node:path';
 import { main } from '../../src/cli/main.ts';
-import { captureIo } from '../../src/server/captureIo.ts';
+import { captureIo } from '../helpers/captureIo.ts';
 import { port, cacheSize } from '../../src/cli/commands/serveCommand.ts';
 import { buildDemoStore, tempDir } from './serverFixture.ts';
 

@@ -173,11 +173,14 @@ describe('the comps view', () => {
     expect(lines.slice(1).map((l) => l.split(',')[1])).toEqual(exported.comps.map((c) => c.player_id));
   });
 
-  it('shows the API\'s message when a parameter is refused', async () => {
+  it('shows a refused parameter in page language (its field\'s label, no flag, no code) and clears the previous chart caption', async () => {
     await page.fill('#opt-weights', 'obpp=2');
     await page.click('#run');
     await page.waitForSelector('.message.error');
-    expect(await page.textContent('.message.error')).toMatch(/no dimension "obpp" \(did you mean obp\?\).*kindred\.usage\.badOption/);
+    const message = (await page.textContent('.message.error')) ?? '';
+    expect(message).toMatch(/^Weights: no dimension "obpp" \(did you mean obp\?\)/);
+    expect(message).not.toMatch(/--|kindred\./);
+    expect(await page.textContent('figure:has(#grade-chart) figcaption')).toBe('Grades by dimension');
     await page.fill('#opt-weights', '');
   });
 

@@ -3,7 +3,7 @@ import cliProgress from 'cli-progress';
 import type { CliIo } from '../CliIo.ts';
 import { buildStore, type BuildSummary } from '../../build/buildStore.ts';
 import { loadColumnMap } from '../../ingest/loadColumnMap.ts';
-import { DEFAULT_STORE } from '../defaults.ts';
+import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { z } from 'zod';
 import { UsageError } from '../../errors/KindredError.ts';
 import { addEmbedOptions, embedSettingsFrom } from './embedOptions.ts';

@@ -7,7 +7,7 @@ import { DEFAULT_COMPS_OPTIONS, findComps } from '../../query/findComps.ts';
 import { playerTarget } from '../../query/playerTarget.ts';
 import { compsTable } from '../../report/compsTable.ts';
 import { formatBuildSummary } from './buildCommand.ts';
-import { DEFAULT_STORE } from '../defaults.ts';
+import { DEFAULT_STORE } from '../../request/parameters.ts';
 import type { ProfileStore } from '../../query/ProfileStore.ts';
 import type { TargetRow } from '../../query/selectTargetRow.ts';
 

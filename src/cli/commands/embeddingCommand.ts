@@ -3,7 +3,7 @@ import { join, resolve } from 'node:path';
 import { Command, InvalidArgumentError } from 'commander';
 import Table from 'cli-table3';
 import type { CliIo } from '../CliIo.ts';
-import { DEFAULT_STORE } from '../defaults.ts';
+import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { loadProfileStore } from '../../query/loadProfileStore.ts';
 import type { ProfileStore } from '../../query/ProfileStore.ts';
 import { chartsFolderOf } from '../../embed/groupEmbeddingFile.ts';

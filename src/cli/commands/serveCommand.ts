@@ -1,8 +1,9 @@
 import { Command, InvalidArgumentError } from 'commander';
 import type { CliIo } from '../CliIo.ts';
-import { DEFAULT_STORE } from '../defaults.ts';
+import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { createServer, DEFAULT_CACHE_ENTRIES } from '../../server/createServer.ts';
-import * as parse from '../parseOptions.ts';
+import { positiveInt } from '../../request/valueParsers.ts';
+import { cliParser } from '../requestOptions.ts';
 
 /** A TCP port: 0 (any free port) to 65535. */
 export function port(value: string): number {
@@ -13,7 +14,7 @@ export function port(value: string): number {
 
 /** 0 or a positive whole number of cached answers. */
 export function cacheSize(value: string): number {
-  return value.trim() === '0' ? 0 : parse.positiveInt(value);
+  return value.trim() === '0' ? 0 : cliParser(positiveInt)(value);
 }
 
 export interface ServeSignals {

@@ -1,22 +1,15 @@
 import type { PositionGroup } from '../../profiles/positionGroup.ts';
 import { WEIGHT_PRESETS } from '../../query/weightPresets.ts';
 import type { LoadedStore } from '../LoadedStore.ts';
-import { parseParameters } from '../commandParameters.ts';
-import type { Endpoint } from '../Endpoint.ts';
+import type { StoreInfo } from '../../request/apiContract.ts';
+import { noParameters } from '../../request/readRequest.ts';
 
-/** What the page needs to draw its forms: levels, seasons, group sizes and dimension names, presets. */
-export interface StoreInfo {
-  readonly generation: number;
-  readonly loaded_at: string;
-  readonly levels: readonly string[];
-  readonly seasons: { readonly from: number | null; readonly to: number | null };
-  readonly groups: Readonly<Partial<Record<PositionGroup, { readonly n: number; readonly dims: readonly string[] }>>>;
-  readonly presets: readonly string[];
-}
+export type { StoreInfo } from '../../request/apiContract.ts';
+import type { Endpoint } from '../Endpoint.ts';
 
 /** `GET /api/info`: a summary of the loaded store. */
 export function answerInfo(loaded: LoadedStore, query: URLSearchParams): StoreInfo {
-  parseParameters(query, { specs: new Map(), extra: [] });
+  noParameters(query);
   const s = loaded.store;
   let from: number | null = null;
   let to: number | null = null;

@@ -1,5 +1,5 @@
 import type { Endpoint } from '../Endpoint.ts';
-import { parseParameters } from '../commandParameters.ts';
+import { noParameters } from '../../request/readRequest.ts';
 import { answerInfo, type StoreInfo } from './infoEndpoint.ts';
 
 /**
@@ -10,7 +10,7 @@ export const reloadEndpoint: Endpoint = {
   methods: ['POST'],
   cacheable: false,
   answer: async ({ holder, query }): Promise<StoreInfo> => {
-    parseParameters(query, { specs: new Map(), extra: [] });
+    noParameters(query);
     const loaded = await holder.reload();
     return answerInfo(loaded, new URLSearchParams());
   },

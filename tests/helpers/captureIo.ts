@@ -1,4 +1,4 @@
-import type { CliIo } from '../cli/CliIo.ts';
+import type { CliIo } from '../../src/cli/CliIo.ts';
 
 /** A CliIo that keeps what a command writes, for running a CLI command inside the server. */
 export function captureIo(): { io: CliIo; stdout: () => string; stderr: () => string } {

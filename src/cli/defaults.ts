@@ -1,2 +1,0 @@
-/** Store folder used when --store is not given. */
-export const DEFAULT_STORE = '.kindred-store';

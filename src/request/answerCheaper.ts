@@ -1,0 +1,24 @@
+import { ParameterError } from '../errors/ParameterError.ts';
+import { DEFAULT_SALARY_LIMIT, findCheaperComps, type CheaperOptions, type SalaryLimit } from '../outlook/findCheaperComps.ts';
+import type { CheaperResult } from '../outlook/types.ts';
+import type { ProfileStore } from '../query/ProfileStore.ts';
+import { compsOptionsFrom } from './compsOptionsFrom.ts';
+import type { JobRequest } from './JobRequest.ts';
+import { targetFrom } from './targetFrom.ts';
+
+export function cheaperOptionsFrom(req: JobRequest, store: ProfileStore): CheaperOptions {
+  const maxSalary = req.get('maxSalary');
+  const maxShare = req.get('maxShare');
+  if (maxSalary !== undefined && maxShare !== undefined) {
+    throw new ParameterError('max-share', (n) => `give either ${n('max-salary')} or ${n('max-share')}, not both`, { prefixed: false });
+  }
+  const limit: SalaryLimit =
+    maxSalary !== undefined ? { kind: 'max-salary', usd: maxSalary } : maxShare !== undefined ? { kind: 'max-share', share: maxShare } : DEFAULT_SALARY_LIMIT;
+  return { comps: compsOptionsFrom(req, store), limit };
+}
+
+/** The cheaper job: comps with a known salary under the limit, the value frontier marked. */
+export function answerCheaper(store: ProfileStore, req: JobRequest): CheaperResult {
+  const options = cheaperOptionsFrom(req, store);
+  return findCheaperComps(store, targetFrom(store, req), options);
+}

@@ -1,0 +1,12 @@
+import { findComps } from '../query/findComps.ts';
+import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { CompsResult } from '../query/types.ts';
+import { compsOptionsFrom } from './compsOptionsFrom.ts';
+import type { JobRequest } from './JobRequest.ts';
+import { targetFrom } from './targetFrom.ts';
+
+/** The comps job: ranked comps for the request's target in its pool. */
+export function answerComps(store: ProfileStore, req: JobRequest): CompsResult {
+  const options = compsOptionsFrom(req, store);
+  return findComps(store, targetFrom(store, req), options);
+}

@@ -1,0 +1,29 @@
+import { ParameterError } from '../errors/ParameterError.ts';
+import { matchPlayers, type MatchOptions } from '../outlook/matchPlayers.ts';
+import type { MatchResult } from '../outlook/types.ts';
+import type { ProfileStore } from '../query/ProfileStore.ts';
+import { resolvePlayer } from '../query/resolvePlayer.ts';
+import { compsOptionsFrom } from './compsOptionsFrom.ts';
+import type { JobRequest } from './JobRequest.ts';
+import { targetFrom } from './targetFrom.ts';
+
+/** The match options of a request: the pool and weighting, and the candidate's season and level if given. */
+export function matchOptionsFrom(req: JobRequest, store: ProfileStore): MatchOptions {
+  const season = req.get('seasonB');
+  const level = req.get('levelB');
+  if (level !== undefined && !store.levels.includes(level)) {
+    throw new ParameterError('level-b', `unknown level "${level}"; the store's levels: ${store.levels.join(', ')}`, { context: { value: level } });
+  }
+  return { comps: compsOptionsFrom(req, store), candidate: { ...(season !== undefined ? { season } : {}), ...(level !== undefined ? { level } : {}) } };
+}
+
+/** The match job: one candidate against the target, likeness, percentile in the pool and every dimension. */
+export function answerMatch(store: ProfileStore, req: JobRequest): MatchResult {
+  const options = matchOptionsFrom(req, store);
+  const target = targetFrom(store, req);
+  const candidate = req.get('candidate');
+  if (candidate === undefined) {
+    throw new ParameterError('candidate', 'name the candidate to compare with the target (an id or a name)', { code: 'kindred.usage.missingArgument', prefixed: false });
+  }
+  return matchPlayers(store, target, resolvePlayer(store, candidate), options);
+}

@@ -1,0 +1,43 @@
+import { ApiError } from './api.ts';
+
+/** The page's own name for each request parameter it sends (the labels of its fields). */
+const FIELD_LABELS: Readonly<Record<string, string>> = {
+  player: 'Player',
+  candidate: 'Versus',
+  season: 'Season',
+  level: 'Level',
+  position: 'Position',
+  want: 'Target profile',
+  'season-b': 'Versus season',
+  'level-b': 'Versus level',
+  'pool-level': 'Levels',
+  'pool-season': 'Seasons',
+  age: 'Age',
+  bats: 'Bats',
+  throws: 'Throws',
+  k: 'Comps (k)',
+  preset: 'Weighting',
+  weights: 'Weights',
+  'min-coverage': 'Min coverage',
+  horizon: 'Follow-up',
+  path: 'Seasons matched',
+  'max-salary': 'Max salary',
+  'max-share': 'Share of his salary',
+};
+
+/**
+ * What the page says when a job fails, in the page's words: the field at fault by its label, the
+ * API's explanation after it, and never an error code or a command-line flag.
+ *
+ * @example
+ * pageMessage(new ApiError(400, 'kindred.usage.badOption', 'parameter k: expected a whole number of 1 or more, got "0"', 'k'));
+ * // => 'Comps (k): expected a whole number of 1 or more, got "0"'
+ */
+export function pageMessage(e: unknown): string {
+  if (!(e instanceof ApiError)) return e instanceof Error ? e.message : String(e);
+  if (e.status === 0) return 'The server gave an answer this page cannot read; reload the page.';
+  const p = e.parameter;
+  const prefix = p === undefined ? '' : `parameter ${p}: `;
+  if (p !== undefined && e.message.startsWith(prefix)) return `${FIELD_LABELS[p] ?? p}: ${e.message.slice(prefix.length)}`;
+  return e.message.charAt(0).toUpperCase() + e.message.slice(1);
+}
