@@ -10,6 +10,8 @@ import { performance } from 'node:perf_hooks';
 import { exactSearch } from '../src/index/exactSearch.ts';
 import { GuardedIndex } from '../src/index/GuardedIndex.ts';
 import type { IndexParams } from '../src/index/types.ts';
+import { createRng } from '../src/embed/createRng.ts';
+import { nearestRankQuantile } from '../src/stats/quantile.ts';
 
 const DIM = 24;
 const ROWS = Number(process.env['KINDRED_BENCH_ROWS'] ?? 100_000);
@@ -17,28 +19,12 @@ const QUERIES = Number(process.env['KINDRED_BENCH_QUERIES'] ?? 1000);
 const K = 10;
 const PARAMS: IndexParams = { M: 16, efConstruction: 200, ef: 128, seed: 42 };
 
-/** Mulberry32 (Tommy Ettinger, public domain; from memory): uniform [0, 1) from a 32-bit seed. */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 function randomRows(count: number, seed: number): Float32Array {
-  const next = mulberry32(seed);
+  const rng = createRng(seed);
+  const next = (): number => rng.next();
   const out = new Float32Array(count * DIM);
   for (let i = 0; i < out.length; i++) out[i] = next();
   return out;
-}
-
-function quantile(sorted: readonly number[], p: number): number {
-  // Nearest-rank quantile (common practice).
-  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil(p * sorted.length) - 1))] ?? NaN;
 }
 
 function timeQueries(run: (q: number[]) => number[], queries: readonly number[][]): { p50: number; p99: number; results: number[][] } {
@@ -50,7 +36,7 @@ function timeQueries(run: (q: number[]) => number[], queries: readonly number[][
     times.push(performance.now() - start);
   }
   times.sort((a, b) => a - b);
-  return { p50: quantile(times, 0.5), p99: quantile(times, 0.99), results };
+  return { p50: nearestRankQuantile(times, 0.5), p99: nearestRankQuantile(times, 0.99), results };
 }
 
 function recall(truth: readonly number[][], got: readonly number[][]): number {

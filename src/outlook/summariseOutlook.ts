@@ -2,7 +2,7 @@ import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 import { roundOrNull } from '../stats/round.ts';
 import { peakOf } from './Outcomes.ts';
 import type { CompOutcome, OutcomeKind, OutlookFigures, QuantileSummary, SeasonsSummary } from './types.ts';
-import { weightedQuantiles } from './weightedQuantile.ts';
+import { weightedQuantiles } from '../stats/quantile.ts';
 
 export interface WeightedOutcome {
   readonly weight: number;

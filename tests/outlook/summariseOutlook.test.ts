@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { summariseOutlook, peakSummaryOf } from '../../src/outlook/summariseOutlook.ts';
 import type { HitterOutcome } from '../../src/outlook/types.ts';
-import { weightedQuantiles } from '../../src/outlook/weightedQuantile.ts';
+import { weightedQuantiles } from '../../src/stats/quantile.ts';
 
 const outcome = (mlb: number, peak: number | null): HitterOutcome => ({
   kind: 'hitter',

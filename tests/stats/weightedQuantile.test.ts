@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { weightedQuantile, weightedQuantiles } from '../../src/outlook/weightedQuantile.ts';
+import { weightedQuantile, weightedQuantiles } from '../../src/stats/quantile.ts';
 
 // Reference: the weighted percentile method (Wikipedia, "Percentile", "The weighted percentile method"):
 // positions p_i = (S_i - w_i / 2) / S_N, linear interpolation between them. Values worked by hand.

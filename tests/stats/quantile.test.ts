@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { quantileSorted } from '../../src/embed/quantileSorted.ts';
+import { nearestRankQuantile, quantileSorted } from '../../src/stats/quantile.ts';
 
 describe('quantileSorted(sorted, p) uses Hyndman and Fan definition 7 (R default)', () => {
   it('reproduces R: quantile(1:4, c(0, .25, .5, .75, 1)) = 1, 1.75, 2.5, 3.25, 4 (from memory; hand-checked with h = 3p)', () => {
@@ -13,5 +13,17 @@ describe('quantileSorted(sorted, p) uses Hyndman and Fan definition 7 (R default
   it('is NaN for an empty list and the value itself for one value', () => {
     expect(Number.isNaN(quantileSorted([], 0.5))).toBe(true);
     expect(quantileSorted([2], 0.9)).toBe(2);
+  });
+});
+
+// Reference: Hyndman and Fan (1996), definition 1 (nearest rank, R's quantile(type = 1)); worked by hand.
+describe('nearestRankQuantile(sorted, p)', () => {
+  it('gives the doc examples: the median of 1..4 is the 2nd value, the 99th percentile the 4th', () => {
+    expect(nearestRankQuantile([1, 2, 3, 4], 0.5)).toBe(2);
+    expect(nearestRankQuantile([1, 2, 3, 4], 0.99)).toBe(4);
+  });
+  it('takes the first value at p = 0 and is NaN for an empty list', () => {
+    expect(nearestRankQuantile([5, 6], 0)).toBe(5);
+    expect(nearestRankQuantile([], 0.5)).toBeNaN();
   });
 });

@@ -1,4 +1,44 @@
 /**
+ * Kindred's quantiles, one module: of a sorted sample by interpolation (Hyndman and Fan definition 7)
+ * or by nearest rank (definition 1), and of a weighted sample by the midpoint rule (definition 5 when
+ * the weights are equal).
+ */
+
+/**
+ * The p-quantile of values sorted ascending, by linear interpolation between order statistics:
+ * h = (n - 1) p, Q = x[floor h] + (h - floor h) (x[floor h + 1] - x[floor h]) (Hyndman and Fan 1996,
+ * "Sample quantiles in statistical packages", definition 7, the default of R's quantile()).
+ * NaN for an empty list.
+ *
+ * @example
+ * quantileSorted([1, 2, 3, 4], 0.25); // => 1.75 (R: quantile(1:4, 0.25) = 1.75)
+ */
+export function quantileSorted(sorted: readonly number[], p: number): number {
+  const n = sorted.length;
+  if (n === 0) return NaN;
+  const h = (n - 1) * Math.min(1, Math.max(0, p));
+  const lo = Math.floor(h);
+  const a = sorted[lo] ?? NaN;
+  const b = sorted[Math.min(n - 1, lo + 1)] ?? NaN;
+  return a + (h - lo) * (b - a);
+}
+
+/**
+ * The p-quantile of values sorted ascending by the nearest-rank method: the value at rank
+ * ceil(p n), at least the first (Hyndman and Fan 1996, definition 1; common practice for latency
+ * percentiles). NaN for an empty list.
+ *
+ * @example
+ * nearestRankQuantile([1, 2, 3, 4], 0.5); // => 2 (rank ceil(2) = 2)
+ * nearestRankQuantile([1, 2, 3, 4], 0.99); // => 4 (rank ceil(3.96) = 4)
+ */
+export function nearestRankQuantile(sorted: readonly number[], p: number): number {
+  const n = sorted.length;
+  if (n === 0) return NaN;
+  return sorted[Math.min(n - 1, Math.max(0, Math.ceil(p * n) - 1))] ?? NaN;
+}
+
+/**
  * Weighted quantile by the midpoint rule: what value a share `p` of the total weight lies below.
  *
  * Source: the weighted percentile method of Wikipedia, "Percentile", section "The weighted percentile
@@ -26,8 +66,8 @@ export function weightedQuantiles(values: readonly number[], weights: readonly n
   if (values.length !== weights.length) throw new RangeError(`weightedQuantiles: ${values.length} values but ${weights.length} weights`);
   const items: { x: number; w: number }[] = [];
   for (let i = 0; i < values.length; i++) {
-    const x = values[i] as number;
-    const w = weights[i] as number;
+    const x = values[i] ?? NaN;
+    const w = weights[i] ?? NaN;
     if (!Number.isNaN(x) && Number.isFinite(w) && w > 0) items.push({ x, w });
   }
   items.sort((a, b) => a.x - b.x);
@@ -40,16 +80,16 @@ export function weightedQuantiles(values: readonly number[], weights: readonly n
   }
   return ps.map((p) => {
     if (items.length === 0 || !(p >= 0 && p <= 1)) return NaN;
-    const first = items[0] as { x: number };
-    const last = items[items.length - 1] as { x: number };
-    if (p <= (positions[0] as number)) return first.x;
-    if (p >= (positions[positions.length - 1] as number)) return last.x;
+    const at = (i: number): number => items[i]?.x ?? NaN;
+    const position = (i: number): number => positions[i] ?? NaN;
+    if (p <= position(0)) return at(0);
+    if (p >= position(positions.length - 1)) return at(items.length - 1);
     let hi = 1;
-    while ((positions[hi] as number) < p) hi++;
-    const p0 = positions[hi - 1] as number;
-    const p1 = positions[hi] as number;
-    const x0 = (items[hi - 1] as { x: number }).x;
-    const x1 = (items[hi] as { x: number }).x;
+    while (position(hi) < p) hi++;
+    const p0 = position(hi - 1);
+    const p1 = position(hi);
+    const x0 = at(hi - 1);
+    const x1 = at(hi);
     return p1 === p0 ? x1 : x0 + ((p - p0) / (p1 - p0)) * (x1 - x0);
   });
 }
