@@ -1,65 +1,21 @@
 /**
  * Three outfielders and three starting pitchers of one invented season and level, written as roster
- * CSV files, built into a store and read back: the stored raw, regressed and standardised values
- * against the formulas worked by hand.
+ * CSV files, built into a store and read back (tests/helpers/handStore.ts): the stored raw,
+ * regressed and standardised values against the formulas worked by hand.
  *
  * Sources: Official Baseball Rules, "Determining Percentage Records" (OBP, SLG, ERA; rule number
  * from memory); common practice for K%, FIP and its league constant (from memory), for regression to
  * the mean as a weighted average with k league-average events, (x + k * league) / (n + k), and for the
  * z-score with the sample standard deviation (n - 1).
  */
-import { mkdtemp, mkdir, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { buildStore } from '../../src/build/buildStore.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
 import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
-import { DEFAULT_STANDARDISE } from '../../src/profiles/standardiseByStratum.ts';
-
-const FILES: Record<string, string> = {
-  'levels.csv': 'level\nAA\nMLB\n',
-  'players.csv': [
-    'player_id,name,birth_date',
-    'h1,Arlo Fenwick,2000-04-01',
-    'h2,Bram Ostley,2000-05-01',
-    'h3,Cass Dunmore,2000-06-01',
-    'p1,Dov Harrow,1999-04-01',
-    'p2,Eli Marsk,1999-05-01',
-    'p3,Fen Quill,1999-06-01',
-  ].join('\n'),
-  'batting.csv': [
-    'player_id,season,level,PA,AB,H,2B,3B,HR,BB,HBP,SF,SO,SB,CS,bbe,ev_avg_mph',
-    'h1,2024,AA,500,440,120,25,2,15,50,5,5,100,10,5,330,90.0',
-    'h2,2024,AA,400,360,90,20,1,8,30,6,4,90,20,4,260,87.0',
-    'h3,2024,AA,300,270,81,10,3,4,24,2,4,45,2,2,210,88.5',
-  ].join('\n'),
-  'fielding.csv': [
-    'player_id,season,level,pos,inn,PO,A,E',
-    'h1,2024,AA,LF,900.0,180,8,3',
-    'h2,2024,AA,CF,800.0,220,5,2',
-    'h3,2024,AA,RF,600.0,120,9,4',
-  ].join('\n'),
-  'pitching.csv': [
-    'player_id,season,level,G,GS,IP,BF,H,HR,BB,HBP,SO,ER',
-    'p1,2024,AA,25,25,150.0,620,130,15,45,5,160,60',
-    'p2,2024,AA,22,22,120.0,510,115,12,40,4,110,55',
-    'p3,2024,AA,18,18,90.0,390,95,11,35,3,70,50',
-  ].join('\n'),
-};
+import { handStore } from '../helpers/handStore.ts';
 
 let store: ProfileStore;
 
 beforeAll(async () => {
-  const dir = await mkdtemp(join(tmpdir(), 'kindred-dimensions-'));
-  const roster = join(dir, 'roster');
-  await mkdir(roster);
-  for (const [name, text] of Object.entries(FILES)) await writeFile(join(roster, name), `${text}\n`);
-  await buildStore(roster, join(dir, 'store'), {
-    lenient: false,
-    profile: { minimums: { minPa: 30, minBf: 30 }, standardise: DEFAULT_STANDARDISE },
-  });
-  store = await loadProfileStore(join(dir, 'store'));
+  store = await handStore();
 }, 60_000);
 
 /** raw and z of one player's row for one dimension, and the dimension's stratum figures. */
