@@ -22,7 +22,12 @@ const TALENTS_SHOWN: Record<PositionGroup, readonly string[] | null> = {
   RP: null,
 };
 
+/** Production talents: the bat for hitters, results for pitchers (what "who hits like him" asks). */
+const PRODUCTION_TALENTS: readonly string[] = ['contact', 'power', 'eye', 'stuff', 'control', 'groundball'];
+
 export interface QualityOptions {
+  /** `all` (default): every talent the group's data can show; `production`: bat or results talents alone. */
+  readonly talents?: 'all' | 'production';
   readonly groups: readonly PositionGroup[];
   readonly level: string;
   readonly targetsPerGroup: number;
@@ -65,7 +70,10 @@ function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: Q
   if (!first) return { sum: 0, targets: 0 };
   const names = truth.talentNames[first.kind];
   const shown = TALENTS_SHOWN[g.group];
-  const keep = names.map((n, i) => (shown === null || shown.includes(n) ? i : -1)).filter((i) => i >= 0);
+  const production = o.talents === 'production';
+  const keep = names
+    .map((n, i) => ((shown === null || shown.includes(n)) && (!production || PRODUCTION_TALENTS.includes(n)) ? i : -1))
+    .filter((i) => i >= 0);
   const t = keep.length;
   const talents = new Float64Array(g.n * t).fill(NaN);
   for (const row of poolRows) {

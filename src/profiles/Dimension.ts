@@ -1,4 +1,5 @@
 import type { PositionGroup } from './positionGroup.ts';
+import type { SkillFamily } from './skillFamily.ts';
 import type { Direction } from '../stats/Direction.ts';
 
 /**
@@ -52,6 +53,8 @@ export interface Dimension<L> {
   readonly source: string;
   /** Skill the dimension mostly measures: used to describe redundancy, not in the maths. */
   readonly skill: string;
+  /** Skill family whose share of the default weight this dimension draws on (see skillFamily.ts). */
+  readonly family: SkillFamily;
   readonly groups: readonly PositionGroup[];
   readonly scope: StratumScope;
   /** Digits to print in natural units (3 for OBP, 1 for mph). */
@@ -68,6 +71,7 @@ export interface DimensionInfo {
   readonly meaning: string;
   readonly source: string;
   readonly skill: string;
+  readonly family: SkillFamily;
   readonly scope: StratumScope;
   readonly digits: number;
   /** Stabilisation sample in events (0 when not regressed or derived). */
@@ -84,6 +88,7 @@ export function describeDimension<L>(dim: Dimension<L>): DimensionInfo {
     meaning: dim.meaning,
     source: dim.source,
     skill: dim.skill,
+    family: dim.family,
     scope: dim.scope,
     digits: dim.digits,
     stabilisation: m.kind === 'derived' ? 0 : m.stabilisation,

@@ -6,6 +6,8 @@ import { measureDimensions, type MeasuredColumn } from './measureDimensions.ts';
 import { standardiseByStratum, DEFAULT_STANDARDISE, type StandardiseOptions, type StratumStats } from './standardiseByStratum.ts';
 import { redundancyWeights } from './redundancyWeights.ts';
 import { reliability } from './reliability.ts';
+import { familyWeights } from './familyWeights.ts';
+import { DEFAULT_FAMILY_SHARES, SKILL_FAMILIES } from './skillFamily.ts';
 import { groupOf, POSITION_GROUPS, type PositionGroup } from './positionGroup.ts';
 import { HITTER_DIMENSIONS } from './hitterDimensions.ts';
 import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
@@ -25,7 +27,10 @@ export interface GroupProfiles {
   readonly strata: ReadonlyMap<string, ReadonlyMap<string, StratumStats>>;
   /** Season-to-season reliability per dimension (see reliability). */
   readonly reliability: Float64Array;
-  /** Default weight per dimension: reliability and redundancy (see redundancyWeights). */
+  /**
+   * Default weight per dimension: its family's share (DEFAULT_FAMILY_SHARES) divided within the family
+   * by reliability and redundancy (see familyWeights, redundancyWeights); sums to 1.
+   */
   readonly redundancy: Float64Array;
 }
 
@@ -135,7 +140,9 @@ function assembleGroup(
   const ids = new Map<string, number>();
   const playerNumber = (id: string): number => ids.get(id) ?? ids.set(id, ids.size).size - 1;
   const rel = reliability(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season));
-  return { group, dims, meta, raw, z, strata, reliability: rel, redundancy: redundancyWeights(z64, n, d, rel) };
+  const families = dims.map((dim) => dim.family);
+  const within = redundancyWeights(z64, n, d, rel, 30, families.map((f) => SKILL_FAMILIES.indexOf(f)));
+  return { group, dims, meta, raw, z, strata, reliability: rel, redundancy: familyWeights(families, within, DEFAULT_FAMILY_SHARES) };
 }
 
 /** FIP constant of every season and level, from that league's lines (src/stats/leagueFip.ts). */

@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { POSITION_GROUPS } from './positionGroup.ts';
+import { SKILL_FAMILIES } from './skillFamily.ts';
 
 const dimensionInfoSchema = z.strictObject({
   name: z.string(),
@@ -13,6 +14,7 @@ const dimensionInfoSchema = z.strictObject({
   meaning: z.string(),
   source: z.string(),
   skill: z.string(),
+  family: z.enum(SKILL_FAMILIES),
   scope: z.enum(['group', 'position']),
   digits: z.number().int(),
   stabilisation: z.number(),
@@ -24,6 +26,7 @@ export const groupFileSchema = z.strictObject({
   group: z.enum(POSITION_GROUPS),
   n: z.number().int().nonnegative(),
   dims: z.array(dimensionInfoSchema),
+  /** Default weight per dimension: family share times within-family reliability and redundancy. */
   redundancy: z.array(z.number()),
   reliability: z.array(z.number()),
   rows: z.strictObject({

@@ -24,31 +24,31 @@ const bipAgainst = (p: PitchingSeason): number => babipAgainst.denominator(p);
 
 export const PITCHER_DIMENSIONS: readonly D[] = [
   {
-    name: 'k_pct', label: 'K%', unit: 'fraction of BF', direction: 'higher', skill: 'stuff',
+    name: 'k_pct', label: 'K%', unit: 'fraction of BF', direction: 'higher', skill: 'stuff', family: 'missing bats',
     meaning: 'Strikeouts per batter faced.', source: rateSource(pitcherStrikeoutRate),
     groups: PITCHERS, scope: 'group', digits: 3,
     measure: rateMeasure(pitcherStrikeoutRate, line, k('pitcherStrikeoutRate')),
   },
   {
-    name: 'bb_pct', label: 'BB%', unit: 'fraction of BF', direction: 'lower', skill: 'control',
+    name: 'bb_pct', label: 'BB%', unit: 'fraction of BF', direction: 'lower', skill: 'control', family: 'command',
     meaning: 'Walks per batter faced.', source: rateSource(pitcherWalkRate),
     groups: PITCHERS, scope: 'group', digits: 3,
     measure: rateMeasure(pitcherWalkRate, line, k('pitcherWalkRate')),
   },
   {
-    name: 'hr_pct', label: 'HR%', unit: 'fraction of BF', direction: 'lower', skill: 'contact allowed',
+    name: 'hr_pct', label: 'HR%', unit: 'fraction of BF', direction: 'lower', skill: 'contact allowed', family: 'contact allowed',
     meaning: 'Home runs allowed per batter faced.', source: rateSource(pitcherHomeRunRate),
     groups: PITCHERS, scope: 'group', digits: 3,
     measure: rateMeasure(pitcherHomeRunRate, line, k('pitcherHomeRunRate')),
   },
   {
-    name: 'babip_against', label: 'BABIP', unit: 'hits per ball in play', direction: 'lower', skill: 'contact allowed',
+    name: 'babip_against', label: 'BABIP', unit: 'hits per ball in play', direction: 'lower', skill: 'contact allowed', family: 'contact allowed',
     meaning: 'Hits allowed per ball in play (H - HR) / (BF - SO - BB - HBP - HR).', source: rateSource(babipAgainst),
     groups: PITCHERS, scope: 'group', digits: 3,
     measure: rateMeasure(babipAgainst, line, k('babipAgainst')),
   },
   {
-    name: 'fip', label: 'FIP', unit: 'runs per 9 IP', direction: 'lower', skill: 'run prevention',
+    name: 'fip', label: 'FIP', unit: 'runs per 9 IP', direction: 'lower', skill: 'run prevention', family: 'contact allowed',
     meaning: 'Fielding-independent pitching on the ERA scale, from regressed K, BB+HBP and HR rates.',
     source: 'src/stats/fip.ts with the season-and-level constant from src/stats/fipConstant.ts',
     groups: PITCHERS, scope: 'group', digits: 2,
@@ -66,31 +66,31 @@ export const PITCHER_DIMENSIONS: readonly D[] = [
     },
   },
   {
-    name: 'gb_pct', label: 'GB%', unit: 'percent of balls in play', direction: 'higher', skill: 'ground balls',
+    name: 'gb_pct', label: 'GB%', unit: 'percent of balls in play', direction: 'higher', skill: 'ground balls', family: 'contact allowed',
     meaning: 'Share of balls in play hit on the ground (0 to 100).', source: 'pitching.csv gb_pct, weighted by balls in play',
     groups: PITCHERS, scope: 'group', digits: 1,
     measure: { kind: 'mean', value: (p) => p.gbPct, events: bipAgainst, stabilisation: k('gbPct') },
   },
   {
-    name: 'whiff_pct', label: 'Whiff%', unit: 'percent of swings', direction: 'higher', skill: 'stuff',
+    name: 'whiff_pct', label: 'Whiff%', unit: 'percent of swings', direction: 'higher', skill: 'stuff', family: 'missing bats',
     meaning: 'Swings and misses per swing (0 to 100).', source: 'pitching.csv whiff_pct, weighted by BF',
     groups: PITCHERS, scope: 'group', digits: 1,
     measure: { kind: 'mean', value: (p) => p.whiffPct, events: (p) => p.BF, stabilisation: k('whiffPct') },
   },
   {
-    name: 'fb_mph', label: 'FB velo', unit: 'mph', direction: 'higher', skill: 'velocity',
+    name: 'fb_mph', label: 'FB velo', unit: 'mph', direction: 'higher', skill: 'velocity', family: 'stuff',
     meaning: 'Average fastball velocity (a measurement, not regressed).', source: 'pitching.csv fb_mph, weighted by BF',
     groups: PITCHERS, scope: 'group', digits: 1,
     measure: { kind: 'mean', value: (p) => p.fbMph, events: (p) => p.BF, stabilisation: 0 },
   },
   {
-    name: 'fb_spin_rpm', label: 'FB spin', unit: 'rpm', direction: 'higher', skill: 'velocity',
+    name: 'fb_spin_rpm', label: 'FB spin', unit: 'rpm', direction: 'higher', skill: 'velocity', family: 'stuff',
     meaning: 'Average fastball spin rate (a measurement, not regressed).', source: 'pitching.csv fb_spin_rpm, weighted by BF',
     groups: PITCHERS, scope: 'group', digits: 0,
     measure: { kind: 'mean', value: (p) => p.fbSpinRpm, events: (p) => p.BF, stabilisation: 0 },
   },
   {
-    name: 'ip_per_g', label: 'IP/G', unit: 'innings per game', direction: 'neither', skill: 'workload',
+    name: 'ip_per_g', label: 'IP/G', unit: 'innings per game', direction: 'neither', skill: 'workload', family: 'workload',
     meaning: 'Innings per appearance: how long he works each time out.', source: rateSource(inningsPerGame),
     groups: PITCHERS, scope: 'group', digits: 2,
     measure: rateMeasure(inningsPerGame, line, 0),

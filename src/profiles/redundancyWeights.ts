@@ -14,18 +14,28 @@ import { PearsonSums } from '../stats/PearsonSums.ts';
  *   a unique skill and be weighted up.
  * r is the pairwise-complete Pearson correlation of the standardised dimensions; pairs with fewer than
  * `minPairs` shared rows count as unrelated.
+ * With `family` (a family number per dimension), only dimensions of the same family count as
+ * redundant with each other: the weighting then acts within each skill family (see familyWeights.ts).
  * A project choice, measured against plain z-scores on simulated leagues (bench/compsQuality.bench.ts).
  *
  * @example
  * // two identical, perfectly reliable columns and an unrelated one: weights [0.5, 0.5, 1]
  */
-export function redundancyWeights(z: Float64Array, n: number, d: number, rel: Float64Array = new Float64Array(d).fill(1), minPairs = 30): Float64Array {
+export function redundancyWeights(
+  z: Float64Array,
+  n: number,
+  d: number,
+  rel: Float64Array = new Float64Array(d).fill(1),
+  minPairs = 30,
+  family?: ArrayLike<number>,
+): Float64Array {
   const r = correlationMatrix(z, n, d, minPairs);
   const w = new Float64Array(d);
   for (let i = 0; i < d; i++) {
     const ri = rel[i] as number;
     let s = 0;
     for (let j = 0; j < d; j++) {
+      if (family && family[i] !== family[j]) continue;
       const v = i === j ? 1 : Math.min(1, Math.abs(r[i * d + j] as number) / Math.sqrt(ri * (rel[j] as number)));
       s += v * v;
     }

@@ -1,4 +1,5 @@
 import type { PoolFilter } from './PoolFilter.ts';
+import { familyTotals } from '../profiles/familyWeights.ts';
 import type { PreparedQuery } from './prepareQuery.ts';
 import { round } from '../stats/round.ts';
 import type { PoolEcho, QueryEcho } from './types.ts';
@@ -28,13 +29,15 @@ export function echoQuery(q: PreparedQuery, k: number, method: QueryEcho['method
   };
 }
 
-/** The pool as the JSON echoes it: group size, rows left after the filters, the filters and the weights. */
+/** The pool as the JSON echoes it: group size, rows left after the filters, the filters, the weights and the family shares. */
 export function echoPool(q: PreparedQuery): PoolEcho {
   return {
     group_size: q.group.n,
     eligible: q.eligible,
     filters: filterEcho(q.filter),
     weights: Object.fromEntries(q.group.dims.map((d, j) => [d.name, round(q.weights[j] ?? NaN, 4)])),
+    preset: q.preset,
+    family_shares: Object.fromEntries([...familyTotals(q.group.dims.map((d) => d.family), q.weights)].map(([f, s]) => [f, round(s, 3)])),
   };
 }
 

@@ -24,6 +24,8 @@ export interface PreparedQuery {
   readonly filter: PoolFilter;
   /** Weight per dimension (effectiveWeights). */
   readonly weights: Float64Array;
+  /** The weighting preset asked for. */
+  readonly preset: WeightPreset;
   /** Summed weight of the dimensions the target has (W_T of missingAwareDistance). */
   readonly targetWeight: number;
   /** 1 for rows in the pool (filters passed, not the target's own player). */
@@ -34,7 +36,11 @@ export interface PreparedQuery {
   readonly defaultMetric: boolean;
 }
 
-/** The weights in play: redundancy (or 1) times the preset and per-dimension multipliers. */
+/**
+ * The weights in play: the stored default weights (family shares divided within each family by
+ * reliability and redundancy), or 1 each for `plain`, times the preset's family multipliers and the
+ * per-dimension overrides.
+ */
 export function effectiveWeights(g: StoredGroup, settings: QuerySettings): Float64Array {
   const user = userWeights(g.dims, settings.preset, settings.weightOverrides);
   return Float64Array.from(user, (u, j) => u * (settings.weighting === 'redundancy' ? (g.redundancy[j] ?? 0) : 1));
@@ -55,5 +61,5 @@ export function prepareQuery(store: ProfileStore, target: Target, settings: Quer
     throw new QueryError('kindred.query.badTarget', 'the target has no value on any weighted dimension', { group: target.group });
   }
   const defaultMetric = settings.weighting === 'redundancy' && settings.preset === 'balanced' && settings.weightOverrides.size === 0;
-  return { store, group, target, filter: settings.filter, weights, targetWeight: wT, mask, eligible: count, defaultMetric };
+  return { store, group, target, filter: settings.filter, weights, preset: settings.preset, targetWeight: wT, mask, eligible: count, defaultMetric };
 }

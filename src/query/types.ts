@@ -69,7 +69,12 @@ export interface PoolEcho {
   /** Player-seasons left after the filters. */
   readonly eligible: number;
   readonly filters: Readonly<Record<string, string | number | readonly string[]>>;
+  /** Weight per dimension in play (any scale; only ratios matter). */
   readonly weights: Readonly<Record<string, number>>;
+  /** The weighting preset asked for (`balanced` by default). */
+  readonly preset: string;
+  /** Share of the total weight each skill family holds (sums to 1), e.g. `{ "discipline": 0.2, ... }`. */
+  readonly family_shares: Readonly<Record<string, number>>;
 }
 
 export interface CompsResult {

@@ -15,7 +15,13 @@ export function describeTarget(result: CompsResult): string {
   const q = result.query;
   const who = q.kind === 'player' ? `${q.name} (${q.player_id}), ${q.season} ${q.level} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
   const pool = `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} player-seasons in the pool`;
-  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space`;
+  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space\n${describeShares(result)}`;
+}
+
+/** The weight of each skill family in one line, e.g. `Weights (balanced): discipline 20%, contact 15%, ...`. */
+export function describeShares(result: CompsResult): string {
+  const shares = Object.entries(result.pool.family_shares).map(([f, s]) => `${f} ${Math.round(s * 100)}%`);
+  return `Weights (${result.pool.preset}): ${shares.join(', ')}`;
 }
 
 /**

@@ -20,6 +20,18 @@ function noise(n: number, seed: number): number[] {
 }
 
 describe('redundancyWeights(z, n, d)', () => {
+  it('with families, counts two copies of a skill in different families as unrelated (1 each)', () => {
+    const a = noise(2000, 1);
+    const b = noise(2000, 2);
+    const { z, n, d } = columns(a, a, b);
+    const w = redundancyWeights(z, n, d, undefined, 30, [0, 1, 1]);
+    expect(w[0]).toBeGreaterThan(0.95);
+    expect(w[1]).toBeGreaterThan(0.95);
+    expect(w[2]).toBeGreaterThan(0.95);
+    const same = redundancyWeights(z, n, d, undefined, 30, [0, 0, 1]);
+    expect(same[0]).toBeCloseTo(0.5, 1);
+  });
+
   it('splits weight 1 between two copies of a skill and leaves an unrelated dimension at 1', () => {
     const a = noise(2000, 1);
     const b = noise(2000, 2);

@@ -3,7 +3,7 @@ import { explainComp } from '../../src/query/explainComp.ts';
 import type { DimensionInfo } from '../../src/profiles/Dimension.ts';
 
 const dim = (name: string, direction: DimensionInfo['direction'] = 'higher'): DimensionInfo => ({
-  name, label: name.toUpperCase(), unit: 'u', direction, meaning: '', source: '', skill: name, scope: 'group', digits: 3, stabilisation: 0,
+  name, label: name.toUpperCase(), unit: 'u', direction, meaning: '', source: '', skill: name, family: 'power', scope: 'group', digits: 3, stabilisation: 0,
 });
 const dims = [dim('a'), dim('b', 'lower'), dim('c'), dim('d'), dim('e')];
 

@@ -12,6 +12,7 @@ const dim = (name: string): DimensionInfo => ({
   meaning: '',
   source: '',
   skill: name,
+  family: 'power',
   scope: 'group',
   digits: 3,
   stabilisation: 0,
