@@ -54,6 +54,8 @@ export const compsResultSchema = z.object({
     eligible: z.number().int(),
     filters: z.record(z.string(), z.unknown()),
     weights: z.record(z.string(), z.number()),
+    preset: z.string(),
+    family_shares: z.record(z.string(), z.number()),
   }),
   comps: z.array(compSchema),
 });

@@ -3,6 +3,17 @@ import Table from 'cli-table3';
 import type { CliIo } from '../CliIo.ts';
 import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { answerDims } from '../../request/answerDims.ts';
+import type { DimensionInfo } from '../../profiles/Dimension.ts';
+import { DEFAULT_FAMILY_SHARES, presentShares } from '../../profiles/skillFamily.ts';
+
+/** One line per skill family: its default share of the weight and its dimensions. */
+function familyLines(dims: readonly DimensionInfo[]): string[] {
+  const shares = presentShares(DEFAULT_FAMILY_SHARES, dims.map((d) => d.family));
+  return [
+    'Skill families (default share of the weight): dimensions',
+    ...[...shares].map(([f, s]) => `  ${f} (${Math.round(s * 100)}%): ${dims.filter((d) => d.family === f).map((d) => d.name).join(', ')}`),
+  ];
+}
 
 /** `kindred dims`: the dimensions of each position group with units, direction and meaning (no store needed). */
 export function dimsCommand(io: CliIo): Command {
@@ -23,7 +34,7 @@ export function dimsCommand(io: CliIo): Command {
         style: { head: [], border: [] },
       });
       for (const d of list) t.push([d.name, d.unit, d.direction, d.meaning]);
-      io.stdout.write(`${g} (${g === 'IF' ? '1B, 2B, 3B, SS' : g === 'OF' ? 'LF, CF, RF' : g})\n${t.toString()}\n\n`);
+      io.stdout.write(`${g} (${g === 'IF' ? '1B, 2B, 3B, SS' : g === 'OF' ? 'LF, CF, RF' : g})\n${t.toString()}\n${familyLines(list).join('\n')}\n\n`);
     }
   });
 }
