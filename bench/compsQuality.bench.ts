@@ -1,6 +1,6 @@
 /**
- * Comp quality of three weightings on several simulated leagues (different seeds, sizes, pitcher
- * shares and tracking coverage): plain z-scores, the reliability and redundancy weighting over the
+ * Comp quality of the weightings on the standard varied simulated leagues (bench/leagues.ts: seeds,
+ * sizes, level counts, promotion rates, noise, era drift): plain z-scores, the reliability and redundancy weighting over the
  * whole group, the default (skill-family shares, the same weighting within each family), and, for
  * reference, the bat preset (results for pitchers).
  * Truth is scored twice: on every talent the group's data can show, and on production talents alone
@@ -9,14 +9,7 @@
  * Prints the mean ratio (top-10 comps' true-talent distance / the 10 truly nearest players'; 1.0 is
  * perfect, lower is better) per league, then the mean and spread (sd) over the leagues.
  */
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { simulateLeague } from '../src/sim/simulateLeague.ts';
-import type { SimOptions } from '../src/sim/simTypes.ts';
-import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
-import { buildStore } from '../src/build/buildStore.ts';
-import { loadProfileStore } from '../src/query/loadProfileStore.ts';
+import { benchLeagues, withBenchLeague } from './leagues.ts';
 import type { ProfileStore } from '../src/query/ProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, type CompsOptions } from '../src/query/findComps.ts';
 import { redundancyWeights } from '../src/profiles/redundancyWeights.ts';
@@ -26,18 +19,6 @@ import type { PositionGroup } from '../src/profiles/positionGroup.ts';
 const GROUPS: PositionGroup[] = ['C', 'IF', 'OF', 'SP', 'RP'];
 const SCHEMES = ['plain', 'whole-group', 'families', 'bat-preset'] as const;
 type Scheme = (typeof SCHEMES)[number];
-
-/** The leagues: each differs from the first in one or two parameters. */
-function leagues(playerSeasons: number): { label: string; options: SimOptions }[] {
-  const base = { firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: playerSeasons };
-  return [
-    { label: 'seed 7', options: { ...base, seed: 7 } },
-    { label: 'seed 11, 1.5x size', options: { ...base, seed: 11, targetPlayerSeasons: Math.round(playerSeasons * 1.5) } },
-    { label: 'seed 23, pitchers 50%', options: { ...base, seed: 23, pitcherShare: 0.5 } },
-    { label: 'seed 31, tracked from A+', options: { ...base, seed: 31, trackedFromLevel: 'A+' } },
-    { label: 'seed 47, 0.6x size, 16 seasons', options: { ...base, seed: 47, firstSeason: 2011, targetPlayerSeasons: Math.round(playerSeasons * 0.6) } },
-  ];
-}
 
 /** Per-dimension multipliers that turn the stored default weights into those of `scheme`. */
 function schemeOptions(store: ProfileStore, group: PositionGroup, scheme: Scheme): CompsOptions {
@@ -58,41 +39,34 @@ interface Row {
   readonly level: string;
   readonly talents: 'all' | 'production';
   readonly group: PositionGroup;
-  readonly ratios: Record<Scheme, number>;
+  readonly ratios: ReadonlyMap<Scheme, number>;
 }
 
-export async function runCompsQuality(playerSeasons: number, leagueCount = 5): Promise<string[]> {
+export async function runCompsQuality(playerSeasons: number, leagueCount = 4): Promise<string[]> {
   const rows: Row[] = [];
-  for (const { label, options } of leagues(playerSeasons).slice(0, leagueCount)) {
-    const dir = await mkdtemp(join(tmpdir(), 'kindred-quality-'));
-    try {
-      const league = simulateLeague(options);
-      await writeLeagueCsv(league, join(dir, 'roster'));
-      await buildStore(join(dir, 'roster'), join(dir, 'store'), { lenient: false });
-      const store = await loadProfileStore(join(dir, 'store'));
+  for (const spec of benchLeagues(playerSeasons).slice(0, leagueCount)) {
+    await withBenchLeague(spec, async ({ league, store }) => {
       const top = store.levels[store.levels.length - 1] ?? '';
       const mid = store.levels[store.levels.length - 3] ?? '';
       for (const level of [mid, top]) {
         for (const talents of ['all', 'production'] as const) {
           for (const group of GROUPS) {
-            const ratios = {} as Record<Scheme, number>;
+            const ratios = new Map<Scheme, number>();
             for (const scheme of SCHEMES) {
               const r = compsQuality(store, league.truth, {
-                groups: [group], level, targetsPerGroup: 40, k: 10, seed: options.seed, talents, compsOptions: schemeOptions(store, group, scheme),
+                groups: [group], level, targetsPerGroup: 40, k: 10, seed: spec.options.seed, talents, compsOptions: schemeOptions(store, group, scheme),
               });
-              ratios[scheme] = r.ratio;
+              ratios.set(scheme, r.ratio);
             }
-            if (SCHEMES.every((s) => Number.isFinite(ratios[s]))) rows.push({ league: label, level, talents, group, ratios });
+            if (SCHEMES.every((s) => Number.isFinite(ratios.get(s) ?? NaN))) rows.push({ league: spec.name, level, talents, group, ratios });
           }
         }
       }
-    } finally {
-      await rm(dir, { recursive: true, force: true });
-    }
+    });
   }
   const lines: string[] = [];
   lines.push(`comps quality, ${playerSeasons.toLocaleString('en-US')} simulated player-seasons per league (ratio to the ideal; 1.00 is perfect, lower is better)`);
-  lines.push('per league (mean over levels and groups):');
+  lines.push('per league (mean over two levels, the top and two below it, and the groups):');
   lines.push(`${'league'.padEnd(32)} truth       ${SCHEMES.map((s) => s.padStart(12)).join('')}`);
   const mean = (xs: readonly number[]): number => xs.reduce((a, b) => a + b, 0) / xs.length;
   const sd = (xs: readonly number[]): number => Math.sqrt(xs.reduce((a, x) => a + (x - mean(xs)) ** 2, 0) / Math.max(1, xs.length - 1));
@@ -101,7 +75,7 @@ export async function runCompsQuality(playerSeasons: number, leagueCount = 5): P
   for (const league of leagueNames) {
     for (const talents of ['all', 'production'] as const) {
       const sel = rows.filter((r) => r.league === league && r.talents === talents);
-      const m = SCHEMES.map((s) => mean(sel.map((r) => r.ratios[s])));
+      const m = SCHEMES.map((s) => mean(sel.map((r) => (r.ratios.get(s) ?? NaN))));
       SCHEMES.forEach((s, i) => perLeague.set(`${talents}|${s}`, [...(perLeague.get(`${talents}|${s}`) ?? []), m[i] as number]));
       lines.push(`${league.padEnd(32)} ${talents.padEnd(11)} ${m.map((x) => x.toFixed(3).padStart(12)).join('')}`);
     }
@@ -119,7 +93,7 @@ export async function runCompsQuality(playerSeasons: number, leagueCount = 5): P
   for (const talents of ['all', 'production'] as const) {
     const cells = GROUPS.map((grp) => {
       const sel = rows.filter((r) => r.group === grp && r.talents === talents);
-      return `${grp} ${SCHEMES.map((s) => mean(sel.map((r) => r.ratios[s])).toFixed(2)).join('/')}`;
+      return `${grp} ${SCHEMES.map((s) => mean(sel.map((r) => (r.ratios.get(s) ?? NaN))).toFixed(2)).join('/')}`;
     });
     lines.push(`${talents.padEnd(11)} ${cells.join('  ')}   (${SCHEMES.join('/')})`);
   }
@@ -128,6 +102,6 @@ export async function runCompsQuality(playerSeasons: number, leagueCount = 5): P
 
 if (import.meta.url === `file://${process.argv[1]}`) {
   const n = Number(process.argv[2] ?? 30000);
-  const count = Number(process.argv[3] ?? 5);
+  const count = Number(process.argv[3] ?? 4);
   for (const line of await runCompsQuality(n, count)) console.log(line);
 }
