@@ -2,9 +2,8 @@ import { roundOrNull } from '../stats/round.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import { toGrade } from '../stats/toGrade.ts';
 import type { DimensionDetail } from './types.ts';
+import { alikeApart } from './alikeApart.ts';
 
-/** A difference of at most half a standard deviation counts as a close match for `alike`. */
-export const CLOSE_MATCH_SD = 0.5;
 
 export interface Explanation {
   readonly dimensions: DimensionDetail[];
@@ -19,10 +18,10 @@ const gradeOf = (z: number, dim: DimensionInfo): number | null =>
  * Per-dimension breakdown of one comp: natural values (observed), grades (from the regressed,
  * standardised values), and each dimension's share of the weighted squared distance (the shares of
  * the dimensions in play sum to 1; when the profiles are identical the shares follow the weights).
- * `alike`: up to three of the dimensions that differ by at most CLOSE_MATCH_SD, heaviest weight first,
- * a match away from the average counting more (score w * (1 + |mean of the two z-scores|): two
- * catchers who both throw far better than average are more alike in a telling way than two average
- * throwers); then the closest others. `apart`: up to three dimensions with the largest shares.
+ * `alike` and `apart` follow the one rule of alikeApart.ts on the grades shown: alike are close grades,
+ * heaviest weight first, a match away from the average counting more (score w * (1 + |mean of the two
+ * z-scores|): two catchers who both throw far better than average are more alike in a telling way than
+ * two average throwers); apart are wide grade gaps with the largest shares.
  */
 export function explainComp(
   dims: readonly DimensionInfo[],
@@ -63,16 +62,13 @@ export function explainComp(
       missing: !inPlay[j],
     };
   });
-  const shared = dims.map((_, j) => j).filter((j) => inPlay[j]);
-  const diff = (j: number): number => Math.abs((targetZ[j] as number) - (compZ[offset + j] as number));
   const telling = (j: number): number => (weights[j] as number) * (1 + Math.abs(((targetZ[j] as number) + (compZ[offset + j] as number)) / 2));
-  const close = shared.filter((j) => diff(j) <= CLOSE_MATCH_SD).sort((a, b) => telling(b) - telling(a) || diff(a) - diff(b));
-  const rest = shared.filter((j) => diff(j) > CLOSE_MATCH_SD).sort((a, b) => diff(a) - diff(b));
-  const alikeIdx = [...close, ...rest].slice(0, 3);
-  const apartIdx = shared
-    .filter((j) => !alikeIdx.includes(j) && (parts[j] as number) > 0)
-    .sort((a, b) => (parts[b] as number) - (parts[a] as number))
-    .slice(0, 3);
+  const { alike: alikeIdx, apart: apartIdx } = alikeApart({
+    targetGrade: dimensions.map((x, j) => (inPlay[j] ? x.target_grade : null)),
+    compGrade: dimensions.map((x, j) => (inPlay[j] ? x.comp_grade : null)),
+    importance: telling,
+    size: (j) => parts[j] as number,
+  });
   const name = (j: number): string => (dims[j] as DimensionInfo).name;
   return { dimensions, alike: alikeIdx.map(name), apart: apartIdx.map(name) };
 }

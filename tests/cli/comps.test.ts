@@ -199,3 +199,23 @@ describe('kindred dims', () => {
     expect(out.stdout).not.toContain('fb_mph');
   });
 });
+
+describe('kindred comps: alike and apart agree with the grade grid', () => {
+  it('on the hand-built catcher (obp .340, hard-hit 60 grade, pop 70 grade) never calls a wide gap alike or a narrow one apart', async () => {
+    const out = await runCli('comps', '--want', 'obp=.340,hard_hit_pct=60g,pop_2b_s=70g', '--position', 'C', '--store', store, '--format', 'json');
+    expect(out.code).toBe(0);
+    const result = compsResultSchema.parse(JSON.parse(out.stdout));
+    expect(result.comps.length).toBeGreaterThan(0);
+    for (const c of result.comps) {
+      const gap = (name: string): number => {
+        const d = c.dimensions.find((x) => x.name === name);
+        return Math.abs((d?.target_grade ?? NaN) - (d?.comp_grade ?? NaN));
+      };
+      // project rule (src/query/alikeApart.ts): alike within 5 grade points, apart at least 10
+      for (const n of c.alike) expect(gap(n)).toBeLessThanOrEqual(5);
+      for (const n of c.apart) expect(gap(n)).toBeGreaterThanOrEqual(10);
+      const shares = c.apart.map((n) => c.dimensions.find((x) => x.name === n)?.share ?? 0);
+      expect(shares).toEqual([...shares].sort((a, b) => b - a));
+    }
+  });
+});

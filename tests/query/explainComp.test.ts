@@ -27,10 +27,28 @@ describe('explainComp(dims, weights, target, comp)', () => {
     const tz = Float64Array.from([0, 1, 2, NaN, 0]);
     const cz = Float32Array.from([1, 1, 0, 3, 0.5]);
     const ex = explainComp(dims, w, tz, tz, cz, cz, 0);
-    expect(ex.alike[0]).toBe('b'); // equal and weight 2
-    expect(ex.alike).toContain('e');
-    expect(ex.apart[0]).toBe('c');
+    expect(ex.alike).toEqual(['b', 'e']); // b equal and weight 2; e grades 50 vs 55, a gap of 5 (the limit)
+    expect(ex.apart).toEqual(['c', 'a']); // gaps 20 and 10 grade points, by share
     expect(ex.apart).not.toContain('d');
+  });
+
+  it('never calls a 27-point gap alike nor a 2-point gap apart (the catcher case: OBP 72 vs 45, K% 52 vs 54)', () => {
+    // grades 72 / 45 on a (OBP), 48 / 46 on b (K%, lower is better), 60 / 60 on c; nothing else close
+    const w = Float64Array.from([1, 0.01, 1, 1, 1]);
+    const tz = Float64Array.from([2.2, 0.2, 1, 3, -3]);
+    const cz = Float32Array.from([-0.5, 0.4, 1, 0, 0]);
+    const ex = explainComp(dims, w, tz, tz, cz, cz, 0);
+    const gap = (n: string): number => {
+      const x = ex.dimensions.find((d) => d.name === n);
+      return Math.abs((x?.target_grade ?? 0) - (x?.comp_grade ?? 0));
+    };
+    expect(gap('a')).toBe(27);
+    expect(gap('b')).toBe(2);
+    expect(ex.alike).not.toContain('a');
+    expect(ex.apart).not.toContain('b');
+    expect(ex.alike).toEqual(['c', 'b']);
+    for (const n of ex.alike) expect(gap(n)).toBeLessThanOrEqual(5);
+    for (const n of ex.apart) expect(gap(n)).toBeGreaterThanOrEqual(10);
   });
 
   it('orients grades so higher is better (a lower-is-better dimension at z = +1 grades 40; common practice)', () => {
