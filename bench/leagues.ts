@@ -8,7 +8,7 @@
  * | home     | 101  | 1.0 x | 2003-2026 | 5            | 0.05 / 1 (defaults)       | 0.30          | 0          | 0         | 2003 (all)           |
  * | slow     | 202  | 0.7 x | 2001-2026 | 4            | 0.25 / 0.8                | 0.45          | 0.10       | +0.02     | 2001 (all)           |
  * | fast     | 303  | 1.3 x | 2000-2026 | 3            | -0.10 / 1                 | 0.20          | 0.20       | -0.015    | 2006                 |
- * | drifting | 404  | 0.9 x | 2002-2026 | 5            | 0.10 / 0.7                | 0.35          | 0.25       | +0.03     | 2010                 |
+ * | drifting | 404  | 0.9 x | 1998-2026 | 5            | 0.10 / 0.7                | 0.35          | 0.25       | +0.03     | 2004                 |
  *
  * "home" is the simulator's own defaults (the habits the project was built on); the others change the
  * ladder (level count), how fast players climb it, how noisy a season is (showing noise moves promotions,
@@ -62,10 +62,10 @@ export function benchLeagues(playerSeasons = 30000): BenchLeague[] {
     },
     {
       name: 'drifting',
-      description: '5 minor levels, uncertain promotions, the noisiest stat lines, strong drift, minors recorded from 2010',
+      description: '5 minor levels, uncertain promotions, the noisiest stat lines, strong drift, minors recorded from 2004',
       options: {
-        seed: 404, firstSeason: 2002, lastSeason: 2026, targetPlayerSeasons: size(0.9),
-        promotionMargin: 0.1, promotionChance: 0.7, showingNoise: 0.35, statNoise: 0.25, eraDrift: 0.03, minorsRecordedFrom: 2010,
+        seed: 404, firstSeason: 1998, lastSeason: 2026, targetPlayerSeasons: size(0.9),
+        promotionMargin: 0.1, promotionChance: 0.7, showingNoise: 0.35, statNoise: 0.25, eraDrift: 0.03, minorsRecordedFrom: 2004,
       },
     },
   ];

@@ -1,105 +1,138 @@
 /**
- * Honesty check of the prospect outlook on simulated leagues (src/sim), bigger than the one in the tests:
- *   node --import tsx bench/outlook.bench.ts [playerSeasons] [seeds] [configs] [maxTargets]
- * e.g. `... 120000 1,2 25,10,50,25p2 4000`. A config is the number of comps k, with `pN` for --path N.
+ * Honesty of the prospect outlook on the standard varied simulated leagues (bench/leagues.ts):
+ *   node --import tsx bench/outlook.bench.ts [playerSeasons] [leagues] [perSeason]
+ * e.g. `... 15000 home,slow,fast,drifting 80`.
  *
- * Each target is a minor-league player-season s whose own next 6 seasons are in the data (one per player,
- * see src/outlook/evaluateOutlook.ts). It is forecast from comps with outcomes cut off at s (only comp
- * seasons up to s - 6, whose follow-up had ended by s), then compared with what he did next. The same is
- * done with the level-and-age base rate (every such player-season of the pool, unweighted). Printed side
- * by side, for hitters (peak OPS+, 300+ PA) and pitchers (best FIP-, 50+ IP):
- * - Brier score of reached_mlb (lower is better) and the skill over the base rate, 1 - BS / BS_base;
- * - how often the p10 to p90 range of the peak holds the true peak (aim: about 0.80), among targets with a
- *   qualifying MLB season;
- * - Spearman correlation of the forecast peak p50 with the true peak (higher is better);
- * - the same two for MLB seasons played (the Spearman on the forecast mean).
+ * For each league: the roster is built, every prospect-season (sampled, `perSeason` per season and kind)
+ * is forecast as of its own season (collectForecasts), and the rolling-origin backtest (runBacktest)
+ * fits the calibration at each cut on what was known then and scores the cut's prospects. Printed per
+ * league and kind, with 95% bootstrap intervals: Brier skill of the calibrated probability against the
+ * level-and-age base rate and against the matched base rate, Murphy reliability and resolution,
+ * Spearman of the peak p50 with the realised peak, p10-p90 coverage of the peak (after and before the
+ * conformal adjustment) and of top-level seasons. Then the alternatives the defaults were chosen from
+ * (pool with a playing-time band, level path; calibration maps), and mean and spread over leagues.
  */
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { simulateLeague } from '../src/sim/simulateLeague.ts';
-import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
-import { buildStore } from '../src/build/buildStore.ts';
-import { loadProfileStore } from '../src/query/loadProfileStore.ts';
+import { benchLeagues, withBenchLeague } from './leagues.ts';
 import { loadOutcomes } from '../src/outlook/loadOutcomes.ts';
-import { evaluateOutlook, type FigureCheck, type KindEvaluation } from '../src/outlook/evaluateOutlook.ts';
+import { collectForecasts, type RawForecast } from '../src/outlook/collectForecasts.ts';
+import { runBacktest, trainingFor, type KindBacktest, type WithInterval } from '../src/outlook/runBacktest.ts';
+import { fitLogistic, logisticProbability } from '../src/outlook/fitLogistic.ts';
+import { brierScore } from '../src/outlook/brierScore.ts';
+import { spearmanCorrelation } from '../src/outlook/spearmanCorrelation.ts';
+import { playerIndexOf } from '../src/sim/SimTruth.ts';
+import type { SimLeague } from '../src/sim/simTypes.ts';
+import type { ProfileStore } from '../src/query/ProfileStore.ts';
 import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from '../src/outlook/findProspectComps.ts';
+import { DEFAULT_CALIBRATION, type CalibrationChoice } from '../src/outlook/calibrateForecast.ts';
 
-const playerSeasons = Number(process.argv[2] ?? 120_000);
-const seeds = (process.argv[3] ?? '1,2').split(',').map(Number);
-const configs = (process.argv[4] ?? '25,10,50,25p2').split(',');
-const maxTargets = Number(process.argv[5] ?? 4000);
+const playerSeasons = Number(process.argv[2] ?? 15000);
+const wanted = (process.argv[3] ?? 'home,slow,fast,drifting').split(',');
+const perSeason = Number(process.argv[4] ?? 80);
 
-const fmt = (x: number, digits = 3): string => (Number.isFinite(x) ? x.toFixed(digits) : '-');
-const pair = (f: FigureCheck, digits = 3): string => `${fmt(f.comps, digits)} vs ${fmt(f.baseline, digits)}`;
+const POOLS: Record<string, Partial<ProspectOptions>> = {
+  'level+age (default)': {},
+  'PA/BF band x2': { sampleBand: 2 },
+  'band x2 + level path': { sampleBand: 2, levelPath: true },
+};
+const MAPS: Record<string, CalibrationChoice> = {
+  'logistic: comps, PA (default)': DEFAULT_CALIBRATION,
+  'logistic: comps only': { ...DEFAULT_CALIBRATION, features: ['comps'] },
+  'isotonic on shrunk comps share': { ...DEFAULT_CALIBRATION, method: 'isotonic', features: ['comps'] },
+};
 
-function optionsOf(config: string): ProspectOptions {
-  const m = /^(\d+)(?:p(\d+))?$/.exec(config);
-  if (!m) throw new Error(`config "${config}": expected k or kpN, e.g. 25 or 25p2`);
-  return { ...DEFAULT_PROSPECT_OPTIONS, comps: { ...DEFAULT_PROSPECT_OPTIONS.comps, k: Number(m[1]) }, path: m[2] ? Number(m[2]) : 1 };
-}
+const f = (x: number, d = 3): string => (Number.isFinite(x) ? x.toFixed(d) : '-');
+const ci = (w: WithInterval, d = 2): string => `${f(w.value, d)} [${f(w.low, d)}, ${f(w.high, d)}]`;
 
-function row(kind: string, e: KindEvaluation): string {
-  const skill = 1 - e.brier.comps / e.brier.baseline;
+type Figures = { skill: number; skillM: number; rho: number; cover: number; coverS: number };
+const table = new Map<string, Figures[]>();
+const add = (key: string, k: KindBacktest): void => {
+  const list = table.get(key) ?? [];
+  list.push({ skill: k.skillVsLevelAge.value, skillM: k.skillVsMatched.value, rho: k.spearman.value, cover: k.peakCoverage.value, coverS: k.seasonsCoverage.value });
+  table.set(key, list);
+};
+
+function line(k: KindBacktest): string {
   return [
-    kind.padEnd(8),
-    String(e.targets).padStart(6),
-    fmt(e.reachedShare, 3).padStart(6),
-    `${pair(e.brier, 4)} (${fmt(100 * skill, 1)}%)`.padEnd(26),
-    `${pair(e.peakCoverage, 2)} (n ${e.peakCoverage.n})`.padEnd(22),
-    pair(e.peakSpearman, 2).padEnd(13),
-    pair(e.seasonsCoverage, 2).padEnd(13),
-    pair(e.seasonsSpearman, 2),
+    `${k.kind.padEnd(7)} n ${String(k.targets).padStart(5)} reached ${f(k.reachedShare, 2)}`,
+    `Brier cal ${f(k.brier.calibrated, 4)} comps ${f(k.brier.comps, 4)} matched ${f(k.brier.matched, 4)} lvl-age ${f(k.brier.levelAge, 4)}`,
+    `skill vs lvl-age ${ci(k.skillVsLevelAge, 3)} vs matched ${ci(k.skillVsMatched, 3)}`,
+    `REL ${f(k.murphy.reliability, 4)} RES ${f(k.murphy.resolution, 4)}`,
+    `rho ${ci(k.spearman)} (n ${k.peakTargets})`,
+    `peak cover ${ci(k.peakCoverage)} (comps' own ${f(k.peakCoverageRaw, 2)})`,
+    `seasons cover ${ci(k.seasonsCoverage)}`,
   ].join('  ');
 }
 
-const header = [
-  'kind'.padEnd(8),
-  'n'.padStart(6),
-  'reach'.padStart(6),
-  'Brier comps vs base (skill)'.padEnd(26),
-  'peak p10-p90 cover'.padEnd(22),
-  'peak rho p50'.padEnd(13),
-  'seasons cover'.padEnd(13),
-  'seasons rho',
-].join('  ');
-
-const totals = new Map<string, { brier: number[]; rho: number[]; cover: number[] }>();
-for (const seed of seeds) {
-  const dir = await mkdtemp(join(tmpdir(), 'kindred-outlook-bench-'));
-  try {
-    let t = performance.now();
-    const league = simulateLeague({ seed, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: playerSeasons });
-    await writeLeagueCsv(league, join(dir, 'roster'));
-    await buildStore(join(dir, 'roster'), join(dir, 'store'), { lenient: false });
-    const store = await loadProfileStore(join(dir, 'store'));
-    const outcomes = await loadOutcomes(join(dir, 'store'), store);
-    console.log(`\nseed ${seed}: ${league.truth.length.toLocaleString('en-US')} player-seasons ${outcomes.firstSeason}-${outcomes.lastSeason}, built in ${((performance.now() - t) / 1000).toFixed(1)} s`);
-    for (const config of configs) {
-      t = performance.now();
-      const ev = evaluateOutlook(store, outcomes, { prospect: optionsOf(config), maxTargets });
-      const n = ev.hitter.targets + ev.pitcher.targets;
-      const ms = (performance.now() - t) / Math.max(1, n + ev.withoutComps);
-      console.log(`  k ${config}: ${n} targets (${ev.withoutComps} without comps), ${ms.toFixed(1)} ms a target`);
-      console.log(`  ${header}`);
-      for (const [kind, e] of [['hitters', ev.hitter], ['pitchers', ev.pitcher]] as const) {
-        console.log(`  ${row(kind, e)}`);
-        const key = `${config} ${kind}`;
-        const sum = totals.get(key) ?? { brier: [], rho: [], cover: [] };
-        sum.brier.push(1 - e.brier.comps / e.brier.baseline);
-        sum.rho.push(e.peakSpearman.comps - e.peakSpearman.baseline);
-        sum.cover.push(e.peakCoverage.comps);
-        totals.set(key, sum);
+for (const spec of benchLeagues(playerSeasons).filter((s) => wanted.includes(s.name))) {
+  await withBenchLeague(spec, async ({ store, storeDir, league, seconds }) => {
+    const outcomes = await loadOutcomes(storeDir, store);
+    console.log(`\n${spec.name}: ${spec.description}`);
+    console.log(`  ${league.truth.length.toLocaleString('en-US')} player-seasons, levels ${league.levels.join(' ')}, ${outcomes.firstSeason}-${outcomes.lastSeason}, built in ${seconds.toFixed(0)} s`);
+    for (const [poolName, extra] of Object.entries(POOLS)) {
+      const t = performance.now();
+      const rows: RawForecast[] = collectForecasts(store, outcomes, {
+        prospect: { ...DEFAULT_PROSPECT_OPTIONS, ...extra }, perSeason,
+        seasons: [outcomes.firstSeason + 6, outcomes.lastSeason - 6],
+      });
+      const secs = (performance.now() - t) / 1000;
+      for (const [mapName, choice] of Object.entries(MAPS)) {
+        if (poolName !== 'level+age (default)' && mapName !== 'logistic: comps, PA (default)') continue;
+        const usedChoice: CalibrationChoice = poolName === 'level+age (default)' ? choice : { ...choice, features: ['comps', 'matched', 'sample'] };
+        const b = runBacktest(rows, outcomes.lastSeason, { horizon: 6, calibration: usedChoice, rounds: 300 });
+        console.log(`  pool ${poolName}, map ${mapName}: cuts ${b.cuts.join(',') || 'none'} (${rows.length} forecasts in ${secs.toFixed(0)} s)`);
+        if (b.tooShort) console.log(`    ${b.tooShort}`);
+        for (const k of b.kinds) {
+          console.log(`    ${line(k)}`);
+          add(`${poolName} | ${mapName} | ${k.kind}`, k);
+          if (poolName === 'level+age (default)' && mapName === 'logistic: comps, PA (default)') {
+            const o = oracle(rows, b.cuts, k.kind, league, store);
+            console.log(`      unreachable true-talent reference (the simulator's ceiling value, same rolling origin): skill vs lvl-age ${f(o.skill)}, rho of ceiling with peak ${f(o.rho, 2)}`);
+            const list = oracles.get(k.kind) ?? [];
+            list.push(o);
+            oracles.set(k.kind, list);
+          }
+        }
       }
     }
-  } finally {
-    await rm(dir, { recursive: true, force: true });
-  }
+  });
 }
 
+/**
+ * What perfect knowledge of a prospect's true ceiling (the simulator's peakValue) would give under the same
+ * rolling origin: a logistic on the ceiling with the level-and-age base rate as offset, fitted at each cut on
+ * the training forecasts; and the Spearman of the ceiling with the realised peak. Unreachable for a club.
+ */
+function oracle(rows: readonly RawForecast[], cuts: readonly number[], kind: string, league: SimLeague, store: ProfileStore): { skill: number; rho: number } {
+  const ceiling = (r: RawForecast): number => league.players.peakValue[playerIndexOf(store.players[r.player]?.playerId ?? '')] ?? 0;
+  const logit = (p: number): number => Math.log(Math.min(0.99, Math.max(0.01, p)) / (1 - Math.min(0.99, Math.max(0.01, p))));
+  const mine = rows.filter((r) => r.kind === kind);
+  const fc: number[] = [], base: number[] = [], y: boolean[] = [], peaks: number[] = [], ceil: number[] = [];
+  for (const cut of cuts) {
+    const training = trainingFor(mine, cut, 6);
+    if (training.length < 100) continue;
+    const fit = fitLogistic(training.map((r) => [ceiling(r)]), training.map((r) => r.truth?.reached === true), { ridge: 2, penaliseIntercept: true, offsets: training.map((r) => logit(r.levelAge.share)) });
+    for (const r of mine.filter((x) => x.season === cut && x.truth !== null)) {
+      const b = Number.isFinite(r.levelAge.share) ? r.levelAge.share : 0.15;
+      fc.push(logisticProbability(fit, [ceiling(r)], logit(b)));
+      base.push(b);
+      y.push(r.truth?.reached === true);
+      if (r.truth?.peak !== null && r.truth?.peak !== undefined) {
+        peaks.push(r.truth.peak);
+        ceil.push(kind === 'hitter' ? ceiling(r) : -ceiling(r));
+      }
+    }
+  }
+  return { skill: 1 - brierScore(fc, y) / brierScore(base, y), rho: spearmanCorrelation(ceil, peaks) };
+}
+const oracles = new Map<string, { skill: number; rho: number }[]>();
+
 const mean = (xs: readonly number[]): number => xs.reduce((a, b) => a + b, 0) / xs.length;
-console.log(`\nOver ${seeds.length} league${seeds.length === 1 ? '' : 's'}: Brier skill over the base rate, peak rho gain over the base rate, peak p10-p90 coverage`);
-for (const [key, s] of totals) {
-  const beats = mean(s.brier) > 0 && mean(s.rho) > 0 ? 'beats the base rate on both' : 'does NOT beat the base rate on both';
-  console.log(`  k ${key.padEnd(14)} skill ${fmt(100 * mean(s.brier), 1)}%  rho +${fmt(mean(s.rho), 2)}  cover ${fmt(mean(s.cover), 2)}  (${beats})`);
+const sd = (xs: readonly number[]): number => Math.sqrt(xs.reduce((a, b) => a + (b - mean(xs)) ** 2, 0) / Math.max(1, xs.length - 1));
+const ms = (xs: readonly number[]): string => `${f(mean(xs))} +/- ${f(sd(xs))} (min ${f(Math.min(...xs))})`;
+console.log('\nOver leagues (mean +/- sd, min); aims: skill vs level-and-age >= 0.15, rho >= 0.60, peak coverage 0.75-0.85');
+for (const [kind, list] of oracles) console.log(`  true-talent reference, ${kind}: skill vs lvl-age ${ms(list.map((x) => x.skill))}; rho ${ms(list.map((x) => x.rho))}`);
+for (const [key, list] of table) {
+  console.log(`  ${key}: leagues ${list.length}`);
+  console.log(`    skill vs lvl-age ${ms(list.map((x) => x.skill))}; vs matched ${ms(list.map((x) => x.skillM))}`);
+  console.log(`    rho ${ms(list.map((x) => x.rho))}; peak cover ${ms(list.map((x) => x.cover))}; seasons cover ${ms(list.map((x) => x.coverS))}`);
 }

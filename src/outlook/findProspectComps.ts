@@ -18,6 +18,7 @@ import type { Outcomes } from './Outcomes.ts';
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 import { pathDistance, pathTargetSteps, type PathScore } from './pathDistance.ts';
 import { summariseOutlook } from './summariseOutlook.ts';
+import { effectiveCount } from './effectiveCount.ts';
 import type { CompOutcome, OutcomeKind, PathStep, ProspectComp, ProspectPoolEcho, ProspectResult } from './types.ts';
 
 export interface ProspectOptions {
@@ -33,6 +34,16 @@ export interface ProspectOptions {
    * earlier than the data's end makes a forecast that could have been made then (honesty checks).
    */
   readonly asOf?: number;
+  /**
+   * Playing-time band: comps' samples (PA for hitters, BF for pitchers) within this factor of the target's
+   * (2: from half to twice his); absent or 0: no band. The base rate uses the same pool.
+   */
+  readonly sampleBand?: number;
+  /**
+   * Level-by-age path: comps must have been at the target's level of the season before (his highest level
+   * in his group that season, or nowhere) at the same age offset. The base rate uses the same pool.
+   */
+  readonly levelPath?: boolean;
 }
 
 /**
@@ -89,6 +100,21 @@ function rowLookup(g: StoredGroup): Map<string, number> {
   return m;
 }
 
+/** Highest level of each player-season of a group (cached per loaded group). */
+const highestLevels = new WeakMap<StoredGroup, Map<number, number>>();
+function highestLevelOf(g: StoredGroup): Map<number, number> {
+  let m = highestLevels.get(g);
+  if (!m) {
+    m = new Map();
+    for (let i = 0; i < g.n; i++) {
+      const key = valueAt(g.player, i) * 10000 + valueAt(g.season, i);
+      m.set(key, Math.max(m.get(key) ?? -1, valueAt(g.level, i)));
+    }
+    highestLevels.set(g, m);
+  }
+  return m;
+}
+
 /** The target's aligned seasons: his season, then each season before it at his highest level that season. */
 function targetSteps(store: ProfileStore, g: StoredGroup, target: Target, season: number, n: number): TargetStep[] {
   const steps: TargetStep[] = [{ row: target.row, season, level: valueAt(g.level, target.row) }];
@@ -133,7 +159,7 @@ function prospectTarget(store: ProfileStore, target: Target, options: ProspectOp
  * The prospect pool rules on top of the caller's filter: the target's level, earlier seasons, an age
  * within OUTLOOK_CONSTANTS.ageWindow, and with a path the same level at each aligned earlier season.
  */
-function prospectPool(g: StoredGroup, steps: readonly TargetStep[], season: number, age: number, callerFilter: PoolFilter): ProspectPool {
+function prospectPool(g: StoredGroup, steps: readonly TargetStep[], season: number, age: number, callerFilter: PoolFilter, options: ProspectOptions): ProspectPool {
   const lookup = steps.length > 1 ? rowLookup(g) : null;
   const levelIdx = steps[0]?.level ?? -1;
   const ageMin = age - OUTLOOK_CONSTANTS.ageWindow;
@@ -151,6 +177,13 @@ function prospectPool(g: StoredGroup, steps: readonly TargetStep[], season: numb
     return out;
   };
   const callerInclude = callerFilter.include;
+  const band = options.sampleBand !== undefined && options.sampleBand > 0 ? options.sampleBand : 0;
+  if (band !== 0 && !(band >= 1)) throw new UsageError(`sample band ${band}: expected a factor of 1 or more`, { value: band });
+  const targetRow = steps[0]?.row ?? -1;
+  const targetSample = targetRow >= 0 ? valueAt(g.sample, targetRow) : 0;
+  const highest = options.levelPath ? highestLevelOf(g) : null;
+  const levelBefore = (row: number): number => highest?.get(valueAt(g.player, row) * 10000 + valueAt(g.season, row) - 1) ?? -1;
+  const targetBefore = highest && targetRow >= 0 ? levelBefore(targetRow) : -1;
   const include = (row: number): boolean => {
     const a = valueAt(g.age, row);
     return (
@@ -159,6 +192,8 @@ function prospectPool(g: StoredGroup, steps: readonly TargetStep[], season: numb
       a >= ageMin &&
       a <= ageMax &&
       (lookup === null || offsetsOf(row) !== null) &&
+      (band === 0 || (valueAt(g.sample, row) * band >= targetSample && valueAt(g.sample, row) <= targetSample * band)) &&
+      (highest === null || levelBefore(row) === targetBefore) &&
       (callerInclude === undefined || callerInclude(row))
     );
   };
@@ -228,7 +263,7 @@ export function findProspectComps(store: ProfileStore, outcomes: Outcomes, targe
   const asOf = options.asOf ?? outcomes.lastSeason;
   const kind: OutcomeKind = isPitcherGroup(target.group) ? 'pitcher' : 'hitter';
   const steps = targetSteps(store, g, target, season, options.path);
-  const pool = prospectPool(g, steps, season, age, options.comps.filter);
+  const pool = prospectPool(g, steps, season, age, options.comps.filter, options);
   const q = prepareQuery(store, target, { ...options.comps, filter: pool.filter });
   const { scored, censoredRows } = scoreProspects(q, pool, steps, horizon, asOf);
   const { used, left } = chooseProspects(g, scored, options.comps);
@@ -261,6 +296,7 @@ export function findProspectComps(store: ProfileStore, outcomes: Outcomes, targe
       as_of_season: asOf,
       comps_used: used.length,
       comps_censored: left.length,
+      comps_effective: round(effectiveCount(used.map(likenessOf)), 1),
       ...summariseOutlook(used.map((s) => ({ weight: likenessOf(s), outcome: outcomeOf(s) })), kind),
       baseline,
     },

@@ -24,11 +24,15 @@ export interface LogisticOptions {
   /** Penalty lambda sum b_j^2 / 2 on the slopes (not the intercept); default 1e-3. */
   readonly ridge?: number;
   readonly weights?: readonly number[];
+  /** A known term added to each row's linear predictor (an offset, as in a GLM); default none. */
+  readonly offsets?: readonly number[];
+  /** Penalise the intercept too, shrinking it toward 0 (default false). */
+  readonly penaliseIntercept?: boolean;
 }
 
-export function logisticProbability(fit: LogisticFit, x: readonly number[]): number {
+export function logisticProbability(fit: LogisticFit, x: readonly number[], offset = 0): number {
   const c = fit.coefficients;
-  let eta = c[0] as number;
+  let eta = (c[0] as number) + offset;
   for (let j = 0; j < x.length; j++) eta += (c[j + 1] as number) * (x[j] as number);
   return 1 / (1 + Math.exp(-eta));
 }
@@ -45,7 +49,7 @@ export function fitLogistic(x: readonly (readonly number[])[], y: readonly boole
     for (let i = 0; i < x.length; i++) {
       const row = x[i] as readonly number[];
       const wi = options.weights ? (options.weights[i] as number) : 1;
-      let eta = beta[0] as number;
+      let eta = (beta[0] as number) + (options.offsets ? (options.offsets[i] as number) : 0);
       for (let j = 1; j < d; j++) eta += (beta[j] as number) * (row[j - 1] as number);
       const p = 1 / (1 + Math.exp(-eta));
       const r = ((y[i] ? 1 : 0) - p) * wi;
@@ -59,7 +63,7 @@ export function fitLogistic(x: readonly (readonly number[])[], y: readonly boole
         }
       }
     }
-    for (let a = 1; a < d; a++) {
+    for (let a = options.penaliseIntercept ? 0 : 1; a < d; a++) {
       g[a] = (g[a] as number) - ridge * (beta[a] as number);
       h[a * d + a] = (h[a * d + a] as number) + ridge;
     }

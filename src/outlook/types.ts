@@ -74,6 +74,8 @@ export type Outlook = OutlookFigures & {
   readonly comps_used: number;
   /** Players who would have been among the comps but whose follow-up is incomplete (censored). */
   readonly comps_censored: number;
+  /** Kish's effective number of comps, (sum w)^2 / sum w^2 over their likeness weights. */
+  readonly comps_effective: number;
   readonly baseline: BaselineFigures;
 };
 
@@ -119,11 +121,50 @@ export interface ProspectPoolEcho extends PoolEcho {
   readonly censored: number;
 }
 
+/** A figure of the roster's backtest with its 95% bootstrap interval. */
+export interface BacktestFigure {
+  readonly value: number | null;
+  readonly low: number | null;
+  readonly high: number | null;
+}
+
+/**
+ * The outlook calibrated on this roster's own history (kindred build's backtest): the probability from
+ * the fitted map, the ranges adjusted by split conformal prediction, and how outlooks like this fared
+ * when replayed at past cut seasons.
+ */
+export interface CalibratedOutlook {
+  /** How the figures were made, in words (the pool, the probability map, the ranges). */
+  readonly method: string;
+  readonly reached_mlb: number;
+  /** p10 / p50 / p90 of the peak OPS+ (hitters) or best FIP- (pitchers), adjusted to 80% coverage. */
+  readonly peak: { readonly p10: number | null; readonly p50: number | null; readonly p90: number | null };
+  readonly mlb_seasons: { readonly p10: number | null; readonly p50: number | null; readonly p90: number | null };
+  /** On this roster, replayed at past cuts with only what was known then. */
+  readonly backtest: {
+    readonly cuts: readonly number[];
+    readonly targets: number;
+    readonly reached_share: number | null;
+    readonly brier: number | null;
+    readonly skill_vs_level_age: BacktestFigure;
+    readonly reliability: number | null;
+    readonly resolution: number | null;
+    readonly spearman_peak: BacktestFigure;
+    readonly peak_coverage: BacktestFigure;
+    readonly seasons_coverage: BacktestFigure;
+  };
+}
+
 export interface ProspectResult {
   readonly query: ProspectQueryEcho;
   readonly pool: ProspectPoolEcho;
   readonly comps: readonly ProspectComp[];
-  readonly outlook: Outlook;
+  readonly outlook: Outlook & {
+    /** Present when the store holds a backtest matching these settings (kindred build); else null with `calibration_note`. */
+    readonly calibrated?: CalibratedOutlook | null;
+    /** Why there is no calibrated outlook (null when there is one). */
+    readonly calibration_note?: string | null;
+  };
 }
 
 export interface CheaperComp extends Comp {

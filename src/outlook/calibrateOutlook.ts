@@ -1,0 +1,81 @@
+import { isPitcherGroup } from '../profiles/positionGroup.ts';
+import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { Target } from '../query/Target.ts';
+import type { BacktestFile } from './backtestFile.ts';
+import { fittedFromFile } from './backtestStore.ts';
+import { calibrateForecast } from './calibrateForecast.ts';
+import { rawForecastOf, rowOutcomes } from './collectForecasts.ts';
+import type { ProspectOptions } from './findProspectComps.ts';
+import type { Outcomes } from './Outcomes.ts';
+import type { CalibratedOutlook, ProspectResult } from './types.ts';
+
+const r1 = (x: number): number | null => (Number.isFinite(x) ? Number(x.toFixed(1)) : null);
+
+/** Cached per loaded group: whether each row's player reached the top level in its complete window. */
+const cache = new WeakMap<object, Float64Array>();
+
+/** The settings a stored backtest was made with must be those of the query for its calibration to apply; else why not. */
+function mismatch(file: BacktestFile, options: ProspectOptions): string | null {
+  if (file.horizon !== options.horizon) return `the backtest used --horizon ${file.horizon}`;
+  if (file.k !== options.comps.k) return `the backtest used --k ${file.k}`;
+  if (options.path !== 1) return 'the backtest matched single seasons (no --path)';
+  const f = options.comps.filter;
+  if (f.bats || f.throws || f.positions || f.seasonFrom !== undefined || f.seasonTo !== undefined || f.ageMin !== undefined || f.ageMax !== undefined) return 'the backtest used no pool filters';
+  return null;
+}
+
+/**
+ * Adds `outlook.calibrated` to a prospect result: the stored calibration of his kind (kindred build's
+ * backtest, fitted on every forecast of the roster with a known follow-up) applied to this outlook, with
+ * the backtest figures of his kind beside it. When the store has no usable backtest, or it was made with
+ * other settings, `calibrated` is null and `calibration_note` says why.
+ */
+export function calibrateOutlook(
+  store: ProfileStore, outcomes: Outcomes, target: Target, result: ProspectResult, options: ProspectOptions,
+  backtest: { file: BacktestFile | null; reason: string | null },
+): ProspectResult {
+  const none = (note: string): ProspectResult => ({ ...result, outlook: { ...result.outlook, calibrated: null, calibration_note: note } });
+  const file = backtest.file;
+  if (!file) return none(backtest.reason ?? 'no backtest stored');
+  const kind = isPitcherGroup(target.group) ? 'pitcher' : 'hitter';
+  if (file.too_short) return none(`on this roster, no backtest was possible: ${file.too_short}`);
+  const why = mismatch(file, options);
+  if (why) return none(`calibration not applied: ${why}`);
+  const fit = fittedFromFile(file, kind);
+  const summary = file.kinds.find((k) => k.kind === kind);
+  if (!fit || !summary) return none(`on this roster, too few ${kind} forecasts with a known follow-up to calibrate`);
+  const g = store.groups.get(target.group);
+  if (!g || target.row < 0) return none('calibration needs a player-season target');
+  let reached = cache.get(g);
+  if (!reached) {
+    reached = rowOutcomes(g, outcomes, kind, options.horizon);
+    cache.set(g, reached);
+  }
+  const raw = rawForecastOf(g, target.group, target.row, result.outlook, outcomes, options.horizon, reached);
+  const c = calibrateForecast(fit, raw, options.horizon);
+  const peakName = kind === 'hitter' ? 'peak OPS+' : 'best FIP-';
+  const calibrated: CalibratedOutlook = {
+    method:
+      `pool: his level, age +/- 1, earlier seasons (no playing-time band: in the backtest a band cost accuracy); ` +
+      `probability: logistic map (Platt 1999) of the comps' share shrunk toward the base rate by ${fit.choice.shrink} ` +
+      `(effective comps ${result.outlook.comps_effective}), the base rates and his playing time (log ${kind === 'hitter' ? 'PA' : 'BF'}), ` +
+      `fitted on ${fit.training} earlier forecasts of this roster; ranges: comps' and base rate's p10-p90 of ${peakName} and MLB seasons ` +
+      `adjusted by split conformal prediction (Lei et al. 2018) to ${Math.round((1 - fit.choice.alpha) * 100)}% coverage`,
+    reached_mlb: Number(c.reached.toFixed(3)),
+    peak: { p10: r1(c.peak.p10), p50: r1(c.peak.p50), p90: r1(c.peak.p90) },
+    mlb_seasons: { p10: r1(c.seasons.p10), p50: r1(c.seasons.p50), p90: r1(c.seasons.p90) },
+    backtest: {
+      cuts: file.cuts,
+      targets: summary.targets,
+      reached_share: summary.reached_share,
+      brier: summary.brier.calibrated,
+      skill_vs_level_age: summary.skill_vs_level_age,
+      reliability: summary.reliability,
+      resolution: summary.resolution,
+      spearman_peak: summary.spearman_peak,
+      peak_coverage: summary.peak_coverage,
+      seasons_coverage: summary.seasons_coverage,
+    },
+  };
+  return { ...result, outlook: { ...result.outlook, calibrated, calibration_note: null } };
+}

@@ -1,0 +1,149 @@
+import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts';
+import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
+import { playerTarget } from '../query/playerTarget.ts';
+import { findProspectComps, type ProspectOptions } from './findProspectComps.ts';
+import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
+import { peakOf, type Outcomes } from './Outcomes.ts';
+import { peakSummaryOf } from './summariseOutlook.ts';
+import type { OutcomeKind, Outlook } from './types.ts';
+
+/** A distribution's p10, p50, p90 (NaN when it has no values) and how many values it rests on. */
+export interface Spread {
+  readonly n: number;
+  readonly p10: number;
+  readonly p50: number;
+  readonly p90: number;
+}
+
+/** One prospect-season forecast as it could have been made at the end of its own season, and (when known) what followed. */
+export interface RawForecast {
+  readonly kind: OutcomeKind;
+  readonly group: PositionGroup;
+  readonly player: number;
+  readonly row: number;
+  readonly season: number;
+  readonly level: number;
+  readonly age: number;
+  /** PA (hitters) or BF (pitchers) that season. */
+  readonly sample: number;
+  readonly comps: {
+    readonly used: number;
+    readonly effective: number;
+    /** Likeness-weighted share who reached the top level (NaN without comps). */
+    readonly share: number;
+    readonly peak: Spread;
+    readonly seasons: Spread;
+  };
+  /** The base rate of the same pool (level, age, and any band or path of the options). */
+  readonly matched: { readonly n: number; readonly share: number; readonly peak: Spread; readonly seasons: Spread };
+  /** The plain level-and-age base rate: every earlier complete-window player-season at his level, age +/- 1, in his group. */
+  readonly levelAge: { readonly n: number; readonly share: number };
+  /** What followed in season + 1 .. season + horizon, or null when the window runs past the data. */
+  readonly truth: { readonly reached: boolean; readonly peak: number | null; readonly seasons: number } | null;
+}
+
+export interface CollectOptions {
+  readonly prospect: ProspectOptions;
+  readonly groups?: readonly PositionGroup[];
+  /** At most this many targets per season and kind (a fixed pseudo-random choice); default 150. */
+  readonly perSeason?: number;
+  /** Only seasons in this range (default: every season with earlier complete-window seasons). */
+  readonly seasons?: readonly [number, number];
+}
+
+const nan = (x: number | null): number => (x === null ? NaN : x);
+const spreadOf = (q: { n: number; p10: number | null; p50: number | null; p90: number | null }): Spread => ({
+  n: q.n, p10: nan(q.p10), p50: nan(q.p50), p90: nan(q.p90),
+});
+
+/**
+ * Forecasts every prospect-season (a player's highest level below the top in a season, in his group,
+ * with an age) as of the end of that season: findProspectComps with asOf = his season, so that only
+ * what was known then enters (pool seasons before his, comp outcomes whose window had ended). These are
+ * the raw material of the rolling-origin backtest (runBacktest): a forecast at season t, with its
+ * truth known by t + horizon, may calibrate forecasts at cuts from t + horizon on.
+ * Per season and kind at most `perSeason` targets, chosen by Knuth's multiplicative hash of the player.
+ */
+export function collectForecasts(store: ProfileStore, outcomes: Outcomes, options: CollectOptions): RawForecast[] {
+  const horizon = options.prospect.horizon;
+  const top = store.levels.indexOf(outcomes.topLevel);
+  const perSeason = options.perSeason ?? 150;
+  const first = options.seasons?.[0] ?? outcomes.firstSeason + horizon;
+  const last = options.seasons?.[1] ?? outcomes.lastSeason;
+  const out: RawForecast[] = [];
+  for (const [group, g] of store.groups) {
+    if (options.groups && !options.groups.includes(group)) continue;
+    const kind: OutcomeKind = isPitcherGroup(group) ? 'pitcher' : 'hitter';
+    const reachedOf = rowOutcomes(g, outcomes, kind, horizon);
+    const bySeason = new Map<number, number[]>();
+    const best = new Map<string, number>();
+    for (let i = 0; i < g.n; i++) {
+      const s = g.season[i] as number;
+      if (g.level[i] === top || Number.isNaN(g.age[i] as number) || s < first || s > last) continue;
+      const key = `${g.player[i]}|${s}`;
+      const b = best.get(key);
+      if (b === undefined || (g.level[i] as number) > (g.level[b] as number)) best.set(key, i);
+    }
+    for (const i of best.values()) {
+      const s = g.season[i] as number;
+      const list = bySeason.get(s);
+      if (list) list.push(i);
+      else bySeason.set(s, [i]);
+    }
+    for (const [season, rows] of [...bySeason].sort((a, b) => a[0] - b[0])) {
+      const hash = (r: number): number => (((g.player[r] as number) + 1) * 2654435761 + season * 40503) % 4294967296;
+      const chosen = rows.length > perSeason ? [...rows].sort((a, b) => hash(a) - hash(b)).slice(0, perSeason) : rows;
+      for (const row of chosen.sort((a, b) => a - b)) {
+        const target = playerTarget(store, { group, row });
+        const result = findProspectComps(store, outcomes, target, { ...options.prospect, asOf: season, includeCensored: false });
+        out.push(rawForecastOf(g, group, row, result.outlook, outcomes, horizon, reachedOf));
+      }
+    }
+  }
+  return out;
+}
+
+/** The forecast of one prospect-season from its outlook (made as of `outlook.as_of_season`), with its truth when the data holds it. */
+export function rawForecastOf(
+  g: StoredGroup, group: PositionGroup, row: number, o: Outlook, outcomes: Outcomes, horizon: number, reachedOf: Float64Array,
+): RawForecast {
+  const kind: OutcomeKind = isPitcherGroup(group) ? 'pitcher' : 'hitter';
+  const season = g.season[row] as number;
+  const complete = season + horizon <= outcomes.lastSeason && o.as_of_season === season;
+  const future = complete ? outcomes.futureOf(g.player[row] as number, kind, season, horizon) : null;
+  return {
+    kind, group, player: g.player[row] as number, row, season,
+    level: g.level[row] as number, age: g.age[row] as number, sample: g.sample[row] as number,
+    comps: { used: o.comps_used, effective: o.comps_effective, share: nan(o.reached_mlb), peak: spreadOf(peakSummaryOf(o)), seasons: spreadOf(o.mlb_seasons) },
+    matched: { n: o.baseline.player_seasons, share: nan(o.baseline.reached_mlb), peak: spreadOf(peakSummaryOf(o.baseline)), seasons: spreadOf(o.baseline.mlb_seasons) },
+    levelAge: levelAgeRate(g, row, Math.min(season, o.as_of_season), horizon, reachedOf),
+    truth: future ? { reached: future.reached_mlb, peak: peakOf(future), seasons: future.mlb_seasons } : null,
+  };
+}
+
+/** Whether each row's player reached the top level in its complete window (NaN when incomplete). */
+export function rowOutcomes(g: StoredGroup, outcomes: Outcomes, kind: OutcomeKind, horizon: number): Float64Array {
+  const out = new Float64Array(g.n).fill(NaN);
+  for (let i = 0; i < g.n; i++) {
+    const s = g.season[i] as number;
+    if (s + horizon > outcomes.lastSeason) continue;
+    out[i] = outcomes.futureOf(g.player[i] as number, kind, s, horizon).reached_mlb ? 1 : 0;
+  }
+  return out;
+}
+
+/** Share reached among earlier rows of the group at the row's level, age within the outlook's window, window complete by `season`. */
+function levelAgeRate(g: StoredGroup, row: number, season: number, horizon: number, reached: Float64Array): { n: number; share: number } {
+  const level = g.level[row] as number, age = g.age[row] as number, w = OUTLOOK_CONSTANTS.ageWindow;
+  let n = 0, hits = 0;
+  for (let i = 0; i < g.n; i++) {
+    if (g.level[i] !== level || (g.season[i] as number) + horizon > season || i === row || g.player[i] === g.player[row]) continue;
+    const a = g.age[i] as number;
+    if (!(a >= age - w && a <= age + w)) continue;
+    const r = reached[i] as number;
+    if (Number.isNaN(r)) continue;
+    n++;
+    hits += r;
+  }
+  return { n, share: n > 0 ? hits / n : NaN };
+}
