@@ -43,6 +43,7 @@ const MAPS: Record<string, CalibrationChoice> = {
 const f = (x: number, d = 3): string => (Number.isFinite(x) ? x.toFixed(d) : '-');
 const ci = (w: WithInterval, d = 2): string => `${f(w.value, d)} [${f(w.low, d)}, ${f(w.high, d)}]`;
 
+const oracles = new Map<string, { skill: number; rho: number }[]>();
 type Figures = { skill: number; skillM: number; rho: number; cover: number; coverS: number };
 const table = new Map<string, Figures[]>();
 const add = (key: string, k: KindBacktest): void => {
@@ -124,7 +125,6 @@ function oracle(rows: readonly RawForecast[], cuts: readonly number[], kind: str
   }
   return { skill: 1 - brierScore(fc, y) / brierScore(base, y), rho: spearmanCorrelation(ceil, peaks) };
 }
-const oracles = new Map<string, { skill: number; rho: number }[]>();
 
 const mean = (xs: readonly number[]): number => xs.reduce((a, b) => a + b, 0) / xs.length;
 const sd = (xs: readonly number[]): number => Math.sqrt(xs.reduce((a, b) => a + (b - mean(xs)) ** 2, 0) / Math.max(1, xs.length - 1));

@@ -13,6 +13,7 @@ import { serveCommand } from './commands/serveCommand.ts';
 import { prospectCommand } from './commands/prospectCommand.ts';
 import { cheaperCommand } from './commands/cheaperCommand.ts';
 import { matchCommand } from './commands/matchCommand.ts';
+import { backtestCommand } from './commands/backtestCommand.ts';
 
 /** Most input problems printed one per line before "and N more". */
 const MAX_ISSUES_SHOWN = 50;
@@ -32,7 +33,7 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
   const setExit = (code: number): void => {
     exitCode = code;
   };
-  const commands = [buildCommand(io), compsCommand(io, setExit), dimsCommand(io), demoCommand(io), serveCommand(io), embeddingCommand(io), prospectCommand(io, setExit), cheaperCommand(io, setExit), matchCommand(io, setExit)];
+  const commands = [buildCommand(io), compsCommand(io, setExit), dimsCommand(io), demoCommand(io), serveCommand(io), embeddingCommand(io), prospectCommand(io, setExit), cheaperCommand(io, setExit), matchCommand(io, setExit), backtestCommand(io)];
   for (const c of commands) {
     c.exitOverride().configureOutput({ writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s) });
     program.addCommand(c);

@@ -16,7 +16,7 @@ export interface StoreBacktestOptions {
   readonly cuts?: readonly number[];
   readonly groups?: readonly PositionGroup[];
   readonly calibration?: CalibrationChoice;
-  /** Targets per season and kind (default 80). */
+  /** Targets per season and position group (default 40). */
   readonly perSeason?: number;
   readonly minTraining?: number;
   readonly rounds?: number;
@@ -66,7 +66,7 @@ export function backtestStore(store: ProfileStore, outcomes: Outcomes, options: 
   const choice = options.calibration ?? DEFAULT_CALIBRATION;
   const rows = collectForecasts(store, outcomes, {
     prospect,
-    perSeason: options.perSeason ?? 80,
+    perSeason: options.perSeason ?? 40,
     seasons: [outcomes.firstSeason + horizon, outcomes.lastSeason - horizon],
     ...(options.groups ? { groups: options.groups } : {}),
   });

@@ -56,9 +56,9 @@ export function calibrateOutlook(
   const peakName = kind === 'hitter' ? 'peak OPS+' : 'best FIP-';
   const calibrated: CalibratedOutlook = {
     method:
-      `pool: his level, age +/- 1, earlier seasons (no playing-time band: in the backtest a band cost accuracy); ` +
-      `probability: logistic map (Platt 1999) of the comps' share shrunk toward the base rate by ${fit.choice.shrink} ` +
-      `(effective comps ${result.outlook.comps_effective}), the base rates and his playing time (log ${kind === 'hitter' ? 'PA' : 'BF'}), ` +
+      `pool: his level, age +/- 1, earlier seasons (playing time is not a pool band: on the benched leagues a band of x2 did not help); ` +
+      `probability: logistic map (Platt 1999) starting from the level-and-age base rate, moved by the comps' share shrunk toward it ` +
+      `(prior weight ${fit.choice.shrink} against ${result.outlook.comps_effective} effective comps) and by his playing time for his level (log ${kind === 'hitter' ? 'PA' : 'BF'}), ` +
       `fitted on ${fit.training} earlier forecasts of this roster; ranges: comps' and base rate's p10-p90 of ${peakName} and MLB seasons ` +
       `adjusted by split conformal prediction (Lei et al. 2018) to ${Math.round((1 - fit.choice.alpha) * 100)}% coverage`,
     reached_mlb: Number(c.reached.toFixed(3)),

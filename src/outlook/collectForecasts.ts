@@ -45,7 +45,7 @@ export interface RawForecast {
 export interface CollectOptions {
   readonly prospect: ProspectOptions;
   readonly groups?: readonly PositionGroup[];
-  /** At most this many targets per season and kind (a fixed pseudo-random choice); default 150. */
+  /** At most this many targets per season and position group (a fixed pseudo-random choice); default 150. */
   readonly perSeason?: number;
   /** Only seasons in this range (default: every season with earlier complete-window seasons). */
   readonly seasons?: readonly [number, number];
@@ -62,7 +62,7 @@ const spreadOf = (q: { n: number; p10: number | null; p50: number | null; p90: n
  * what was known then enters (pool seasons before his, comp outcomes whose window had ended). These are
  * the raw material of the rolling-origin backtest (runBacktest): a forecast at season t, with its
  * truth known by t + horizon, may calibrate forecasts at cuts from t + horizon on.
- * Per season and kind at most `perSeason` targets, chosen by Knuth's multiplicative hash of the player.
+ * Per season and position group at most `perSeason` targets, chosen by Knuth's multiplicative hash of the player.
  */
 export function collectForecasts(store: ProfileStore, outcomes: Outcomes, options: CollectOptions): RawForecast[] {
   const horizon = options.prospect.horizon;

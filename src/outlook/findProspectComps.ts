@@ -178,7 +178,7 @@ function prospectPool(g: StoredGroup, steps: readonly TargetStep[], season: numb
   };
   const callerInclude = callerFilter.include;
   const band = options.sampleBand !== undefined && options.sampleBand > 0 ? options.sampleBand : 0;
-  if (band !== 0 && !(band >= 1)) throw new UsageError(`sample band ${band}: expected a factor of 1 or more`, { value: band });
+  if (band !== 0 && !(band >= 1)) throw new ParameterError('sampleBand', `expected a factor of 1 or more, got ${band}`, { context: { value: band } });
   const targetRow = steps[0]?.row ?? -1;
   const targetSample = targetRow >= 0 ? valueAt(g.sample, targetRow) : 0;
   const highest = options.levelPath ? highestLevelOf(g) : null;

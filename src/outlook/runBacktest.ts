@@ -94,7 +94,8 @@ export function trainingFor(rows: readonly RawForecast[], cut: number, horizon: 
 /** Cut seasons that can be scored: a complete follow-up after the cut and enough training before it. */
 export function defaultCuts(rows: readonly RawForecast[], horizon: number, minTraining: number, lastSeason: number): number[] {
   const seasons = [...new Set(rows.map((r) => r.season))].sort((a, b) => a - b);
-  return seasons.filter((c) => c + horizon <= lastSeason && KINDS.every((k) => trainingFor(rows.filter((r) => r.kind === k), c, horizon).length >= minTraining));
+  const present = KINDS.filter((k) => rows.some((r) => r.kind === k));
+  return seasons.filter((c) => c + horizon <= lastSeason && present.length > 0 && present.every((k) => trainingFor(rows.filter((r) => r.kind === k), c, horizon).length >= minTraining));
 }
 
 /**

@@ -6,6 +6,26 @@ const pct = (x: number | null): string => (x === null ? '-' : `${Math.round(x * 
 const num = (x: number | null, digits = 0): string => (x === null ? '-' : x.toFixed(digits));
 const range = (q: QuantileSummary, digits = 0): string => (q.n === 0 ? '-' : `${num(q.p10, digits)} / ${num(q.p50, digits)} / ${num(q.p90, digits)}`);
 
+const signed = (x: number | null): string => (x === null ? '-' : `${x >= 0 ? '+' : ''}${x.toFixed(2)}`);
+const span = (lo: number | null, hi: number | null): string => (lo === null || hi === null ? '' : ` (95% ${signed(lo)} to ${signed(hi)})`);
+
+/** The calibrated outlook and, beside it, how outlooks like this did in the roster's backtest; or why there is none. */
+function calibratedLines(result: ProspectResult, peakLabel: string): string[] {
+  const c = result.outlook.calibrated;
+  if (!c) return [`Calibrated outlook: none (${result.outlook.calibration_note ?? 'no backtest'})`];
+  const b = c.backtest;
+  const tri = (q: { p10: number | null; p50: number | null; p90: number | null }, d = 0): string => `${num(q.p10, d)} / ${num(q.p50, d)} / ${num(q.p90, d)}`;
+  const cov = (x: number | null): string => (x === null ? '-' : `${Math.round(x * 100)}%`);
+  return [
+    `Calibrated on this roster's history: reached MLB ${pct(c.reached_mlb)}; ${peakLabel} p10 / p50 / p90 ${tri(c.peak)}; MLB seasons ${tri(c.mlb_seasons)}`,
+    `On this roster, ${result.query.group === 'SP' || result.query.group === 'RP' ? 'pitcher' : 'hitter'} outlooks replayed at ${b.cuts[0] ?? '-'}-${b.cuts[b.cuts.length - 1] ?? '-'} (${b.targets.toLocaleString('en-US')} prospects, ${pct(b.reached_share)} reached MLB):`,
+    `  Brier skill against the level-and-age base rate ${signed(b.skill_vs_level_age.value)}${span(b.skill_vs_level_age.low, b.skill_vs_level_age.high)};` +
+      ` p10-p90 held the ${peakLabel} ${cov(b.peak_coverage.value)} of the time and the MLB seasons ${cov(b.seasons_coverage.value)} (nominal 80%);` +
+      ` Spearman of p50 with the realised ${peakLabel} ${num(b.spearman_peak.value, 2)}`,
+    `  How: ${c.method}.`,
+  ];
+}
+
 /**
  * The prospect comps as a terminal table within 100 columns: the target and pool rules, the comps
  * with what each did next, then the outlook beside the level-and-age base rate.
@@ -70,6 +90,8 @@ export function prospectTable(result: ProspectResult): string {
       : 'Best FIP-: lowest FIP- in an MLB season of 50+ IP, against that MLB season of this roster (no park factor; 100 average, lower better).',
   );
   lines.push('Base rate: every earlier player-season at this level and age with a complete follow-up, unweighted.');
+  lines.push('');
+  lines.push(...calibratedLines(result, peakLabel));
   lines.push('Comps describe what earlier players did, not what this one will do.');
   return lines.join('\n') + '\n';
 }

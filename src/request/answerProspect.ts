@@ -5,13 +5,22 @@ import type { ProfileStore } from '../query/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
 import { targetFrom } from './targetFrom.ts';
+import { calibrateOutlook } from '../outlook/calibrateOutlook.ts';
+import type { BacktestFile } from '../outlook/backtestFile.ts';
 
 export function prospectOptionsFrom(req: JobRequest, store: ProfileStore): ProspectOptions {
   return { comps: compsOptionsFrom(req, store), horizon: req.need('horizon'), path: req.need('path'), includeCensored: req.need('includeCensored') };
 }
 
-/** The prospect job: earlier players at his level and age, and what became of them. */
-export function answerProspect(store: ProfileStore, outcomes: Outcomes, req: JobRequest): ProspectResult {
+/** What a prospect answer is calibrated with: the store's backtest, or why there is none. */
+export type StoredBacktest = { readonly file: BacktestFile | null; readonly reason: string | null };
+
+/**
+ * The prospect job: earlier players at his level and age, and what became of them, with the outlook
+ * calibrated on the roster's own history when the store holds a matching backtest (calibrateOutlook).
+ */
+export function answerProspect(store: ProfileStore, outcomes: Outcomes, req: JobRequest, backtest: StoredBacktest): ProspectResult {
   const options = prospectOptionsFrom(req, store);
-  return findProspectComps(store, outcomes, targetFrom(store, req), options);
+  const target = targetFrom(store, req);
+  return calibrateOutlook(store, outcomes, target, findProspectComps(store, outcomes, target, options), options, backtest);
 }

@@ -6,12 +6,15 @@ import { AnswerCache } from './AnswerCache.ts';
 import type { ServedStore } from './loadServedStore.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import type { StoreError } from '../errors/KindredError.ts';
+import type { BacktestFile } from '../outlook/backtestFile.ts';
 
 /** A store as the server holds it: the store, when it was loaded, and what is computed from it on demand. */
 export class LoadedStore {
   readonly store: ProfileStore;
   /** The top-level outcomes, or why the store has none. */
   readonly outcomes: Outcomes | StoreError;
+  /** The store's backtest, or why there is none (prospect answers carry its calibration). */
+  readonly backtest: { readonly file: BacktestFile | null; readonly reason: string | null };
   readonly loadedAt: Date;
   readonly generation: number;
   /** Serialised answers of cacheable endpoints for this store. */
@@ -22,6 +25,7 @@ export class LoadedStore {
   constructor(served: ServedStore, generation: number, cacheEntries: number, loadedAt: Date = new Date()) {
     this.store = served.store;
     this.outcomes = served.outcomes;
+    this.backtest = served.backtest ?? { file: null, reason: 'no backtest stored with this store' };
     this.generation = generation;
     this.loadedAt = loadedAt;
     this.answers = new AnswerCache(cacheEntries);

@@ -6,12 +6,16 @@ import { loadProfileStore } from '../query/loadProfileStore.ts';
 import type { ProfileStore } from '../query/ProfileStore.ts';
 import { loadOutcomes } from '../outlook/loadOutcomes.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
+import { readBacktestFile } from '../outlook/backtestStore.ts';
+import type { BacktestFile } from '../outlook/backtestFile.ts';
 
 /** What the server answers from: the profiles and, when the store has them, the top-level outcomes. */
 export interface ServedStore {
   readonly store: ProfileStore;
   /** The outcomes, or why they could not be read (the prospect endpoint answers with that error). */
   readonly outcomes: Outcomes | StoreError;
+  /** The store's backtest (backtest.json) when present and from this build, else null with the reason. */
+  readonly backtest?: { readonly file: BacktestFile | null; readonly reason: string | null };
 }
 
 /** Attempts before giving up on a store that keeps changing while it is read. */
@@ -32,7 +36,8 @@ export async function loadServedStore(dir: string): Promise<ServedStore> {
       if (e instanceof StoreError) return e;
       throw e;
     });
-    if ((await manifestText(dir)) === before) return { store, outcomes };
+    const backtest = await readBacktestFile(store);
+    if ((await manifestText(dir)) === before) return { store, outcomes, backtest };
     if (attempt >= ATTEMPTS) {
       throw new StoreError('kindred.store.corrupt', `${dir} changed ${ATTEMPTS} times while it was read; try the reload again when the build is done`, { dir });
     }

@@ -133,7 +133,12 @@ const prospectView: ViewDef = {
     const m = peakMeasure(result);
     const o = result.outlook;
     const pct = (v: number | null): string => (v === null ? 'n/a' : `${Math.round(v * 100)}%`);
-    const note = `Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_mlb)} reached the top level, against a base rate of ${pct(o.baseline.reached_mlb)} for ${o.baseline.player_seasons} player-seasons at that level and age.`;
+    const c = o.calibrated;
+    const bt = c?.backtest;
+    const calibrated = c && bt
+      ? ` Calibrated on this roster's history: ${pct(c.reached_mlb)}. On this roster, outlooks replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''} scored a Brier skill of ${bt.skill_vs_level_age.value ?? 'n/a'} against the level-and-age base rate, and their p10-p90 held the realised peak ${pct(bt.peak_coverage.value)} of the time (nominal 80%).`
+      : ` No calibrated outlook: ${o.calibration_note ?? 'no backtest stored'}.`;
+    const note = `Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_mlb)} reached the top level, against a base rate of ${pct(o.baseline.reached_mlb)} for ${o.baseline.player_seasons} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
       note,
       extra: [

@@ -32,7 +32,7 @@ describe('kindred build with bad input', () => {
     await cp(roster, bad, { recursive: true });
     await setCell(join(bad, 'batting.csv'), 5, 'H', '999');
     await setCell(join(bad, 'pitching.csv'), 3, 'IP', '6.3');
-    const out = await runCli('build', bad, '--store', join(dir, 'never'));
+    const out = await runCli('build', bad, '--store', join(dir, 'never'), '--no-backtest');
     expect(out.code).toBe(1);
     expect(out.stderr).toMatch(/batting\.csv:5:\d+: .*"999".*expected/);
     expect(out.stderr).toMatch(/pitching\.csv:3:\d+: IP "6\.3": expected/);
@@ -42,23 +42,27 @@ describe('kindred build with bad input', () => {
 
   it('leaves an existing store untouched when a rebuild fails', async () => {
     const storeDir = join(dir, 'kept');
-    expect((await runCli('build', roster, '--store', storeDir)).code).toBe(0);
+    const built = await runCli('build', roster, '--store', storeDir);
+    expect(built.code).toBe(0);
+    // the build also replays the prospect outlook and stores it (backtest.json)
+    expect(built.stderr).toMatch(/Backtest \(cuts \d{4}/);
+    expect((await stat(join(storeDir, 'backtest.json'))).isFile()).toBe(true);
     const before = await readFile(join(storeDir, 'manifest.json'), 'utf8');
     const bad = join(dir, 'bad2');
     await cp(roster, bad, { recursive: true });
     await setCell(join(bad, 'fielding.csv'), 4, 'PO', '-3');
-    const out = await runCli('build', bad, '--store', storeDir);
+    const out = await runCli('build', bad, '--store', storeDir, '--no-backtest');
     expect(out.code).toBe(1);
     expect(await readFile(join(storeDir, 'manifest.json'), 'utf8')).toBe(before);
     expect((await runCli('comps', '--want', 'obp=.350', '--position', 'SS', '--store', storeDir, '--k', '1')).code).toBe(0);
-  });
+  }, 300_000);
 
   it('with --lenient builds from the good rows and writes every skipped row with its reason to a rejects file', async () => {
     const bad = join(dir, 'bad3');
     await cp(roster, bad, { recursive: true });
     await setCell(join(bad, 'batting.csv'), 7, 'SO', 'abc');
     const storeDir = join(dir, 'lenient');
-    const out = await runCli('build', bad, '--store', storeDir, '--lenient');
+    const out = await runCli('build', bad, '--store', storeDir, '--lenient', '--no-backtest');
     expect(out.code).toBe(0);
     expect(out.stderr).toMatch(/Rows rejected: 1 \(every one with its reason in (.*)\)/);
     const path = /reason in (.*)\)/.exec(out.stderr)?.[1] ?? '';
@@ -79,7 +83,7 @@ describe('kindred build --columns map.json', () => {
     await writeFile(join(club, 'batting.csv'), '');
     const map = join(dir, 'map.json');
     await writeFile(map, JSON.stringify({ files: { 'batting.csv': 'hitting_export.csv' }, columns: { 'batting.csv': { PA: 'plate_app' } } }));
-    const out = await runCli('build', club, '--store', join(dir, 'clubstore'), '--columns', map);
+    const out = await runCli('build', club, '--store', join(dir, 'clubstore'), '--columns', map, '--no-backtest');
     expect(out.stderr).toMatch(/Rows rejected: 0/);
     expect(out.code).toBe(0);
   });
@@ -88,7 +92,7 @@ describe('kindred build --columns map.json', () => {
 describe('a corrupted store', () => {
   it('is refused with a clear message and exit 1, in a separate process that does not crash', async () => {
     const storeDir = join(dir, 'corrupt');
-    expect((await runCli('build', roster, '--store', storeDir)).code).toBe(0);
+    expect((await runCli('build', roster, '--store', storeDir, '--no-backtest')).code).toBe(0);
     const indexFile = (await readdir(storeDir)).find((f) => f.endsWith('.hnsw'));
     if (!indexFile) throw new Error('the demo store has no index file');
     const group = /^group-([A-Z]+)\./.exec(indexFile)?.[1] ?? '';

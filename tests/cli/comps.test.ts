@@ -17,7 +17,7 @@ let catcher: { id: string; name: string };
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'kindred-cli-'));
   store = join(dir, 'store');
-  const built = await runCli('build', DEMO_ROSTER, '--store', store);
+  const built = await runCli('build', DEMO_ROSTER, '--store', store, '--no-backtest');
   expect(built.code).toBe(0);
   profiles = await loadProfileStore(store);
   const c = profiles.groups.get('C');
@@ -29,7 +29,7 @@ beforeAll(async () => {
 
 describe('kindred build <demo-roster>', () => {
   it('reports rows read, rows rejected and profiles per group on stderr', async () => {
-    const out = await runCli('build', DEMO_ROSTER, '--store', join(dir, 'again'));
+    const out = await runCli('build', DEMO_ROSTER, '--store', join(dir, 'again'), '--no-backtest');
     expect(out.code).toBe(0);
     expect(out.stdout).toBe('');
     expect(out.stderr).toMatch(/Rows read: .*batting\.csv 10,305/);

@@ -7,6 +7,7 @@ import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { z } from 'zod';
 import { UsageError } from '../../errors/KindredError.ts';
 import { addEmbedOptions, embedSettingsFrom } from './embedOptions.ts';
+import { storeBacktest } from './storeBacktest.ts';
 
 const buildOptionsSchema = z.object({
   store: z.string(),
@@ -32,6 +33,7 @@ const buildOptionsSchema = z.object({
   searchRows: z.number(),
   embedInput: z.enum(['z', 'weighted']),
   drivers: z.number(),
+  backtest: z.boolean(),
 });
 
 /** The build summary: rows read and rejected per file, profiles per group, time. */
@@ -60,7 +62,8 @@ export function buildCommand(io: CliIo): Command {
     .option('--store <dir>', 'store folder to write (replaced only when the build succeeds)', DEFAULT_STORE)
     .option('--lenient', 'skip bad rows (each written with its reason to a rejects file) instead of stopping', false)
     .option('--columns <map.json>', 'map your export\u2019s file and column names to the canonical ones')
-    .option('--rejects <file>', 'where --lenient writes skipped rows (default <store>.rejects.csv)');
+    .option('--rejects <file>', 'where --lenient writes skipped rows (default <store>.rejects.csv)')
+    .option('--no-backtest', 'skip the backtest of the prospect outlook (then shown uncalibrated)');
   return addEmbedOptions(cmd).action(async (rosterDir: string, raw: unknown) => {
       const parsed = buildOptionsSchema.safeParse(raw);
       if (!parsed.success) throw new UsageError(`bad build options: ${parsed.error.issues[0]?.message ?? ''}`);
@@ -92,6 +95,7 @@ export function buildCommand(io: CliIo): Command {
         });
         bar?.stop();
         io.stderr.write(formatBuildSummary(summary));
+        if (o.backtest) await storeBacktest(o.store, io);
       } finally {
         bar?.stop();
       }

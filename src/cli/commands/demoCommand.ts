@@ -6,6 +6,7 @@ import { loadProfileStore } from '../../query/loadProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../../query/findComps.ts';
 import { playerTarget } from '../../query/playerTarget.ts';
 import { compsTable } from '../../report/compsTable.ts';
+import { storeBacktest } from './storeBacktest.ts';
 import { formatBuildSummary } from './buildCommand.ts';
 import { DEFAULT_STORE } from '../../request/parameters.ts';
 import type { ProfileStore } from '../../query/ProfileStore.ts';
@@ -37,6 +38,7 @@ export function demoCommand(io: CliIo): Command {
       io.stderr.write(`Building the demo store from ${DEMO_ROSTER} (an invented league)...\n`);
       const summary = await buildStore(DEMO_ROSTER, raw.store, { lenient: false });
       io.stderr.write(formatBuildSummary(summary));
+      await storeBacktest(raw.store, io);
       const store = await loadProfileStore(raw.store);
       const at = featuredTarget(store);
       if (!at) {

@@ -7,6 +7,8 @@ import { loadProfileStore } from '../../query/loadProfileStore.ts';
 import { loadOutcomes } from '../../outlook/loadOutcomes.ts';
 import { findProspectComps } from '../../outlook/findProspectComps.ts';
 import type { ProspectResult } from '../../outlook/types.ts';
+import { calibrateOutlook } from '../../outlook/calibrateOutlook.ts';
+import { readBacktestFile } from '../../outlook/backtestStore.ts';
 import { prospectTable } from '../../report/prospectTable.ts';
 import { prospectCsv } from '../../report/prospectCsv.ts';
 import { answerProspect, prospectOptionsFrom } from '../../request/answerProspect.ts';
@@ -30,6 +32,7 @@ export function prospectCommand(io: CliIo, setExit: (code: number) => void): Com
     const req = requestFrom(cmd, 'prospect', { player });
     const store = await loadProfileStore(req.need('store'));
     const outcomes = await loadOutcomes(req.need('store'), store);
+    const backtest = await readBacktestFile(store);
     const format = req.need('format');
     const batch = req.get('batch');
     if (batch !== undefined) {
@@ -38,13 +41,16 @@ export function prospectCommand(io: CliIo, setExit: (code: number) => void): Com
       setExit(
         await runBatch(
           io, batch, format,
-          (t) => findProspectComps(store, outcomes, targetFrom(store, req.with({ player: t.playerId, season: t.season, level: t.level })), options),
+          (t) => {
+            const target = targetFrom(store, req.with({ player: t.playerId, season: t.season, level: t.level }));
+            return calibrateOutlook(store, outcomes, target, findProspectComps(store, outcomes, target, options), options, backtest);
+          },
           (r) => prospectCsv(r),
         ),
       );
       return;
     }
-    writeProspect(io, answerProspect(store, outcomes, req), format);
+    writeProspect(io, answerProspect(store, outcomes, req, backtest), format);
   });
   return cmd;
 }

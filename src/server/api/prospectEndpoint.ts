@@ -12,7 +12,7 @@ import type { Endpoint } from '../Endpoint.ts';
 export function answerProspectOver(loaded: LoadedStore, query: URLSearchParams): ProspectResult {
   const req = readRequest('prospect', 'http', query);
   if (loaded.outcomes instanceof StoreError) throw loaded.outcomes;
-  return answerProspect(loaded.store, loaded.outcomes, req);
+  return answerProspect(loaded.store, loaded.outcomes, req, loaded.backtest);
 }
 
 export const prospectEndpoint: Endpoint = {

@@ -1,0 +1,22 @@
+import type { CliIo } from '../CliIo.ts';
+import { loadProfileStore } from '../../query/loadProfileStore.ts';
+import { loadOutcomes } from '../../outlook/loadOutcomes.ts';
+import { backtestStore, writeBacktestFile } from '../../outlook/backtestStore.ts';
+
+/**
+ * After a build: backtests the prospect outlook on the new store and keeps the summary and the fitted
+ * calibration in its backtest.json (read by kindred prospect and the page), with one line on stderr.
+ */
+export async function storeBacktest(storeDir: string, io: CliIo): Promise<void> {
+  io.stderr.write('backtesting the prospect outlook...\n');
+  const store = await loadProfileStore(storeDir);
+  const outcomes = await loadOutcomes(storeDir, store);
+  const { file } = backtestStore(store, outcomes);
+  await writeBacktestFile(storeDir, file);
+  if (file.too_short) {
+    io.stderr.write(`Backtest: this roster is too short (${file.too_short}); outlooks are shown uncalibrated\n`);
+    return;
+  }
+  const part = file.kinds.map((k) => `${k.kind}s skill ${k.skill_vs_level_age.value ?? '-'} vs the level-and-age base rate, peak range coverage ${k.peak_coverage.value ?? '-'}`);
+  io.stderr.write(`Backtest (cuts ${file.cuts.join(', ')}, ${file.seconds} s): ${part.join('; ')}; kindred backtest shows it all\n`);
+}

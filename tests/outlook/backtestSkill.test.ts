@@ -1,0 +1,50 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { loadOutcomes } from '../../src/outlook/loadOutcomes.ts';
+import { backtestStore } from '../../src/outlook/backtestStore.ts';
+import type { BacktestResult } from '../../src/outlook/runBacktest.ts';
+import { buildSimStore, type SimStore } from './simStore.ts';
+
+// The honest skill check: the calibrated probability against the level-and-age base rate (the same pool
+// rules, the rate known at each cut; not an in-sample constant), replayed by rolling origin on a league
+// of 15,000 player-seasons (the simulator's defaults). Reference figures: Brier (1950) and its skill
+// score 1 - BS / BS_ref; the interval is a percentile bootstrap (Efron and Tibshirani 1993).
+let sim: SimStore;
+let result: BacktestResult;
+
+beforeAll(async () => {
+  sim = await buildSimStore({ seed: 101, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: 15000 });
+  const store = await loadProfileStore(sim.storeDir);
+  const outcomes = await loadOutcomes(sim.storeDir, store);
+  result = backtestStore(store, outcomes, { perSeason: 60, rounds: 200 }).result;
+  for (const k of result.kinds) {
+    console.log(`${k.kind}: ${k.targets} at cuts ${result.cuts.join(',')}, Brier ${k.brier.calibrated.toFixed(4)} vs level-and-age ${k.brier.levelAge.toFixed(4)}, skill ${k.skillVsLevelAge.value.toFixed(3)} [${k.skillVsLevelAge.low.toFixed(3)}, ${k.skillVsLevelAge.high.toFixed(3)}], raw comps' share ${k.brier.comps.toFixed(4)}, REL ${k.murphy.reliability.toFixed(4)}, peak coverage ${k.peakCoverage.value.toFixed(2)}`);
+  }
+}, 600_000);
+afterAll(() => sim.remove());
+
+describe('backtestStore on a league large enough for the sign to be stable', () => {
+  it('scores hundreds of hitters and pitchers at several cuts', () => {
+    expect(result.cuts.length).toBeGreaterThanOrEqual(3);
+    for (const kind of ['hitter', 'pitcher'] as const) expect(result.kinds.find((k) => k.kind === kind)?.targets ?? 0).toBeGreaterThan(300);
+  });
+
+  it('hitters: the calibrated probability beats the level-and-age base rate (skill above 0)', () => {
+    const h = result.kinds.find((k) => k.kind === 'hitter');
+    expect(h?.skillVsLevelAge.value ?? -1).toBeGreaterThan(0);
+  });
+
+  it('pitchers: the calibrated probability does not yet beat the level-and-age base rate (skill under 0.05; a known gap, docs/jobs.md)', () => {
+    const p = result.kinds.find((k) => k.kind === 'pitcher');
+    expect(p?.skillVsLevelAge.value ?? 1).toBeLessThan(0.05);
+    expect(p?.skillVsLevelAge.value ?? -1).toBeGreaterThan(-0.15);
+  });
+
+  it('both: calibration keeps the forecasts reliable (Murphy reliability under 0.015) and the peak ranges near their 80%', () => {
+    for (const k of result.kinds) {
+      expect(k.murphy.reliability).toBeLessThan(0.015);
+      expect(k.peakCoverage.value).toBeGreaterThan(0.6);
+      expect(k.peakCoverage.value).toBeLessThan(0.95);
+    }
+  });
+});
