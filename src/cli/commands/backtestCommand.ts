@@ -15,7 +15,12 @@ import { backtestTable } from '../../report/backtestTable.ts';
 import { isPitcherGroup, POSITION_GROUPS } from '../../profiles/positionGroup.ts';
 
 function cutsOf(value: string): number[] {
-  const cuts: number[] = parse.list(value).map((v) => parse.season(v));
+  let cuts: number[];
+  try {
+    cuts = parse.list(value).map((v) => parse.season(v));
+  } catch (e) {
+    throw new UsageError(`--cuts ${JSON.stringify(value)}: ${e instanceof Error ? e.message : String(e)}`, { value });
+  }
   if (cuts.length === 0) throw new UsageError(`--cuts ${JSON.stringify(value)}: expected seasons, e.g. 2014,2016,2018`, { value });
   return [...new Set(cuts)].sort((a, b) => a - b);
 }
