@@ -43,21 +43,19 @@ export const DEFAULT_COMPS_OPTIONS: CompsOptions = {
   minCoverage: 0.5,
 };
 
-/** Below this share of the group's weight the target is searched exactly: the index would mislead. */
-const INDEX_MIN_TARGET_COVERAGE = 0.75;
 /** Fewest candidates the index proposes for the exact re-rank. */
 const CANDIDATES_MIN = 200;
 /** A pool this small is scanned exactly: faster than a filtered index search, and exact. */
 const INDEX_MIN_POOL = 2000;
 
 /**
- * Ranked comps for a target: HNSW proposes candidates from the pool (the target's own player is
- * never in it; in the input space each coverage partition's index proposes its own, on the
- * dimensions its rows have, so that seasons without tracking are not crowded out by seasons with it),
- * an exact missing-aware distance orders them, and each comp player appears once,
- * at his closest season, unless `allSeasons`. Falls back to a full scan of the pool when the
- * weighting differs from the one the index was built with, when the target lacks much of the
- * group's dimensions, when the pool is small, or on `exact`.
+ * Ranked comps for a target: candidates come from the pool (the target's own player is never in it;
+ * in the input space from every coverage partition, by its index when the target has the partition's
+ * dimensions, by a scan on the shared dimensions when it has only part of them, see
+ * partitionCandidates), an exact missing-aware distance orders them, and each comp player appears
+ * once, at his closest season, unless `allSeasons`. Falls back to a full scan of the pool when the
+ * weighting differs from the one the indexes were built with, when the pool is small, or on `exact`.
+ * `query.method` is `hnsw` when an index was searched.
  *
  * In a store built with a learned space for the group (and the default weighting, see
  * CompsOptions.space), the index holds the codes: candidates come from it (or a scan when the pool is
@@ -96,16 +94,15 @@ export function searchRanked(q: PreparedQuery, space: QuerySpace, options: Comps
   const g = q.group;
   const wanted = { k: options.k, allSeasons: options.allSeasons, minCoverage: options.minCoverage };
   const score = (rows: readonly number[]): ScoredRow[] => rows.map((r) => scoreRow(q, r, space));
-  const usedIndex = space
-    ? !options.exact && q.eligible >= INDEX_MIN_POOL
-    : !options.exact && q.defaultMetric && !g.embedding && q.targetWeight / sum(q.weights) >= INDEX_MIN_TARGET_COVERAGE && q.eligible >= INDEX_MIN_POOL;
-  if (!usedIndex) return { ranked: rankScored(g, score(poolRows(q)), wanted), usedIndex };
+  const indexed = space ? !options.exact && q.eligible >= INDEX_MIN_POOL : !options.exact && q.defaultMetric && !g.embedding && q.eligible >= INDEX_MIN_POOL;
+  if (!indexed) return { ranked: rankScored(g, score(poolRows(q)), wanted), usedIndex: false };
   let c = Math.min(q.eligible, options.candidates ?? Math.max(CANDIDATES_MIN, 20 * options.k));
+  let usedIndex = false;
   for (;;) {
-    const ranked = rankScored(g, score(candidateRows(q, space, c)), wanted);
+    const found = candidateRows(q, space, c, options.minCoverage);
+    usedIndex ||= found.viaIndex;
+    const ranked = rankScored(g, score(found.rows), wanted);
     if (ranked.length >= options.k || c >= q.eligible) return { ranked, usedIndex };
     c = Math.min(q.eligible, c * 4);
   }
 }
-
-const sum = (w: Float64Array): number => w.reduce((a, b) => a + b, 0);
