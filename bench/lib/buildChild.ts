@@ -2,10 +2,12 @@
  * Builds a store in a process of its own and prints one JSON line: seconds and peak resident memory.
  * `node --import tsx bench/lib/buildChild.ts <roster> <store>`
  */
+import { availableParallelism } from 'node:os';
 import { buildStore } from '../../src/build/buildStore.ts';
 
 const [roster, store] = process.argv.slice(2);
 if (!roster || !store) throw new Error('usage: buildChild.ts <roster> <store>');
 const summary = await buildStore(roster, store, { lenient: false });
 const profiles = Object.values(summary.profiles).reduce((a, b) => a + b, 0);
-console.log(JSON.stringify({ seconds: summary.seconds, maxRssMb: process.resourceUsage().maxRSS / 1024, profiles }));
+// maxRSS is the process's peak, worker threads included (they share the process)
+console.log(JSON.stringify({ seconds: summary.seconds, maxRssMb: process.resourceUsage().maxRSS / 1024, profiles, threads: availableParallelism() }));
