@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { rename, unlink, writeFile } from 'node:fs/promises';
 import { stringify } from 'csv-stringify/sync';
+import { stringifyCsv } from '../text/stringifyCsv.ts';
 import { KindredError } from '../errors/KindredError.ts';
 import type { RejectedRow } from './types.ts';
 
@@ -9,7 +10,9 @@ export const REJECTS_HEADER = ['file', 'line', 'column', 'field', 'value', 'code
 /**
  * Writes the rows left out under --lenient as CSV, one line per reason:
  * file, line, column, field, value, code, expected, raw_row (the row's cells
- * re-joined as one CSV line). Written to a temp file, then renamed.
+ * re-joined as one CSV line). Text cells that a spreadsheet would run as a
+ * formula get an apostrophe first (see safeCsvCell). Written to a temp file,
+ * then renamed.
  */
 export async function writeRejects(path: string, rejected: readonly RejectedRow[]): Promise<void> {
   const records: string[][] = [[...REJECTS_HEADER]];
@@ -21,7 +24,7 @@ export async function writeRejects(path: string, rejected: readonly RejectedRow[
       ]);
     }
   }
-  const text = stringify(records);
+  const text = stringifyCsv(records);
   const temp = `${path}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`;
   try {
     await writeFile(temp, text, 'utf8');

@@ -1,4 +1,4 @@
-import { stringify } from 'csv-stringify/sync';
+import { stringifyCsv } from '../text/stringifyCsv.ts';
 import type { CheaperResult } from '../outlook/types.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 
@@ -21,5 +21,5 @@ export function cheaperCsv(result: CheaperResult, dims: readonly DimensionInfo[]
     c.likeness.toFixed(1), String(Math.round(c.salary_usd)), c.likeness_per_million.toFixed(2), c.frontier ? 'yes' : 'no',
     labels(c.alike), labels(c.apart),
   ]);
-  return stringify(header ? [head, ...rows] : rows);
+  return stringifyCsv(header ? [head, ...rows] : rows);
 }

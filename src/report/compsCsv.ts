@@ -1,4 +1,4 @@
-import { stringify } from 'csv-stringify/sync';
+import { stringifyCsv } from '../text/stringifyCsv.ts';
 import type { CompsResult } from '../query/types.ts';
 
 /**
@@ -18,5 +18,5 @@ export function compsCsv(result: CompsResult, header = true): string {
     c.alike.join(';'), c.apart.join(';'),
     ...c.dimensions.flatMap((d) => [d.comp ?? '', d.comp_grade ?? '', Number(d.share.toFixed(4))]),
   ]);
-  return stringify(header ? [head, ...rows] : rows);
+  return stringifyCsv(header ? [head, ...rows] : rows);
 }

@@ -1,4 +1,4 @@
-import { stringify } from 'csv-stringify/sync';
+import { stringifyCsv } from '../text/stringifyCsv.ts';
 import type { MatchResult } from '../outlook/types.ts';
 
 /** A match as CSV: one row per dimension, with the target, the candidate, his likeness and percentile on every row. */
@@ -13,5 +13,5 @@ export function matchCsv(result: MatchResult, header = true): string {
     q.player_id ?? '', q.season ?? '', q.level ?? '', c.player_id, c.name, c.season, c.level, c.likeness, c.coverage, c.rank, c.percentile ?? '',
     d.name, d.target ?? '', d.target_grade ?? '', d.comp ?? '', d.comp_grade ?? '', Number(d.share.toFixed(4)), String(d.missing),
   ]);
-  return stringify(header ? [head, ...rows] : rows);
+  return stringifyCsv(header ? [head, ...rows] : rows);
 }

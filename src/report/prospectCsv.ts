@@ -1,4 +1,4 @@
-import { stringify } from 'csv-stringify/sync';
+import { stringifyCsv } from '../text/stringifyCsv.ts';
 import type { ProspectResult } from '../outlook/types.ts';
 
 /**
@@ -22,5 +22,5 @@ export function prospectCsv(result: ProspectResult, header = true): string {
       (o.kind === 'hitter' ? o.peak_ops_plus : o.peak_fip_minus) ?? '', o.peak_season ?? '',
     ];
   });
-  return stringify(header ? [head, ...rows] : rows);
+  return stringifyCsv(header ? [head, ...rows] : rows);
 }

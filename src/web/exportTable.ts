@@ -1,6 +1,11 @@
-/** One cell as RFC 4180 CSV: quoted when it holds a comma, quote or line break; quotes doubled. */
+import { safeCsvCell } from '../text/safeCsvCell.ts';
+
+/**
+ * One cell as RFC 4180 CSV: quoted when it holds a comma, quote or line break; quotes doubled. Text that
+ * a spreadsheet would run as a formula is made safe first (see safeCsvCell).
+ */
 export function csvCell(value: string | number | boolean | null): string {
-  const s = value === null ? '' : String(value);
+  const s = value === null ? '' : typeof value === 'string' ? safeCsvCell(value) : String(value);
   return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 

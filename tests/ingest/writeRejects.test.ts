@@ -30,6 +30,16 @@ describe('writeRejects(path, rejected)', () => {
     expect(raw[0]?.slice(0, 4)).toEqual(['p2', '2021', 'AA', 'T,"2"']);
     expect(readdirSync(out)).toEqual(['rejects.csv']);
   });
+  it('writes text cells that begin with = + - @ as text, apostrophe first (OWASP CSV injection guidance)', async () => {
+    const roster = await readRoster(rosterDir({
+      'batting.csv': csv('batting', [{ player_id: '=HYPERLINK(1)', team: '@SUM(A1)' }]),
+    }), { lenient: true });
+    const path = join(out, 'formula.csv');
+    await writeRejects(path, roster.rejected);
+    const records: string[][] = parse(readFileSync(path, 'utf8'));
+    expect(records[1]?.slice(3, 5)).toEqual(['player_id', "'=HYPERLINK(1)"]);
+    expect(records[1]?.[7]?.startsWith("'=HYPERLINK(1),2021,AA,@SUM(A1),")).toBe(true);
+  });
   it('writes only the header when nothing was rejected', async () => {
     const path = join(out, 'none.csv');
     await writeRejects(path, []);
