@@ -1,5 +1,5 @@
 import type { InputIssue } from '../errors/InputError.ts';
-import { isRequiredColumn, type ColumnOf, type RosterFile } from './fileColumns.ts';
+import { columnSpec, type RosterFile } from './fileColumns.ts';
 
 /** A canonical column located in a file's header (`index` -1 when the optional column is absent). */
 export interface Column<N extends string = string> {
@@ -45,9 +45,11 @@ export class HeaderColumns<F extends RosterFile> {
     });
   }
 
-  /** Locates a canonical column; a required one that is absent is reported. */
-  col<N extends ColumnOf<F>>(name: N): Column<N> {
-    const required = isRequiredColumn(this.canonicalFile, name);
+  /** Locates a canonical column of the file's table; a required one that is absent is reported. */
+  col(name: string): Column {
+    const spec = columnSpec(this.canonicalFile, name);
+    if (spec === undefined) throw new RangeError(`${this.canonicalFile} has no column ${name}`);
+    const { required } = spec;
     const club = this.renames[name];
     const index = this.positions.get(club ?? name) ?? -1;
     if (index >= 0) {

@@ -2,7 +2,6 @@ import type { ErrorCode } from '../errors/KindredError.ts';
 import type { InputIssue } from '../errors/InputError.ts';
 import type { Column } from './HeaderColumns.ts';
 import { parseThirds, THIRDS_EXPECTED } from './parseThirds.ts';
-import { PLAUSIBLE_RANGES, type MeasuredColumn } from './plausibleRanges.ts';
 
 const WHOLE = /^\s*\d+(?:\.0*)?\s*$/;
 const DECIMAL = /^\s*[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*$/;
@@ -100,12 +99,6 @@ export class RowReader {
       return undefined;
     }
     return value;
-  }
-
-  /** A measurement within its plausible range (see PLAUSIBLE_RANGES). */
-  measured(col: Column<MeasuredColumn>): number | undefined {
-    const range = PLAUSIBLE_RANGES[col.name];
-    return this.numberOpt(col, range.min, range.max, `a plausible value in ${range.unit}`);
   }
 
   /** A percent, 0 to 100. */

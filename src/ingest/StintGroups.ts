@@ -28,16 +28,16 @@ export class StintGroups<S> {
   constructor(private readonly describe: string) {}
 
   /** Reports a duplicate of `key` + `sub` on the row (nothing else is recorded). */
-  checkDuplicate(row: RowReader, key: string, sub: string, shown: string, subOf: (s: S) => string): void {
+  checkDuplicate(row: RowReader, key: string, sub: string, shown: string): void {
     const group = this.groups.get(key);
     this.lastKey = key;
     this.lastGroup = group;
     let first: number | undefined;
     if (group !== undefined) {
-      if (subOf(group.first) === sub) first = group.firstLine;
+      if (group.firstSub === sub) first = group.firstLine;
       else if (group.more !== undefined) {
-        const i = group.more.findIndex((s) => subOf(s) === sub);
-        if (i >= 0) first = group.moreLines?.[i];
+        const i = group.more.findIndex((m) => m.sub === sub);
+        if (i >= 0) first = group.more[i]?.line;
       }
     }
     if (first === undefined && this.rejected.size > 0) first = this.rejected.get(`${key}\u0000${sub}`);
@@ -51,7 +51,7 @@ export class StintGroups<S> {
    * Returns the season key when the row is clean; null when it is left out, its key remembered so a
    * later duplicate still names its line. A key that could not be read is not checked.
    */
-  settleRow(row: RowReader, k: StintKey, settle: () => boolean, subOf: (s: S) => string): string | null {
+  settleRow(row: RowReader, k: StintKey, settle: () => boolean): string | null {
     const keyed = k.playerId !== '' && !Number.isNaN(k.season) && k.level !== '' && k.part !== null;
     const key = k.part === undefined || k.part === null
       ? `${k.playerId}\u0000${k.season}\u0000${k.level}`
@@ -59,7 +59,7 @@ export class StintGroups<S> {
     const sub = k.team ?? '';
     if (keyed) {
       const shown = `${k.playerId} ${k.season} ${k.level} ${k.team ?? '(no team)'}${k.part ? ` ${k.part}` : ''}`;
-      this.checkDuplicate(row, key, sub, shown, subOf);
+      this.checkDuplicate(row, key, sub, shown);
     }
     if (settle()) return key;
     if (keyed) this.rejectedRow(key, sub, row.line);
@@ -72,18 +72,17 @@ export class StintGroups<S> {
     if (!this.rejected.has(full)) this.rejected.set(full, line);
   }
 
-  add(key: string, stint: S, line: number): void {
+  /** Adds a clean stint under its key; `sub` is what tells it from the key's other stints (the team). */
+  add(key: string, stint: S, line: number, sub: string): void {
     const group = key === this.lastKey ? this.lastGroup : this.groups.get(key);
     this.lastKey = undefined;
     this.lastGroup = undefined;
     if (group === undefined) {
-      this.groups.set(key, { first: stint, firstLine: line, more: undefined, moreLines: undefined });
-    } else if (group.more === undefined || group.moreLines === undefined) {
-      group.more = [stint];
-      group.moreLines = [line];
+      this.groups.set(key, { first: stint, firstLine: line, firstSub: sub, more: undefined });
+    } else if (group.more === undefined) {
+      group.more = [{ stint, line, sub }];
     } else {
-      group.more.push(stint);
-      group.moreLines.push(line);
+      group.more.push({ stint, line, sub });
     }
   }
 
@@ -91,7 +90,7 @@ export class StintGroups<S> {
   collect<T>(single: (s: S) => T, combine: (stints: readonly S[]) => T): T[] {
     const out: T[] = [];
     for (const group of this.groups.values()) {
-      out.push(group.more === undefined ? single(group.first) : combine([group.first, ...group.more]));
+      out.push(group.more === undefined ? single(group.first) : combine([group.first, ...group.more.map((m) => m.stint)]));
     }
     return out;
   }
@@ -100,6 +99,6 @@ export class StintGroups<S> {
 interface Group<S> {
   readonly first: S;
   readonly firstLine: number;
-  more: S[] | undefined;
-  moreLines: number[] | undefined;
+  readonly firstSub: string;
+  more: { readonly stint: S; readonly line: number; readonly sub: string }[] | undefined;
 }

@@ -1,42 +1,26 @@
+import { BATTING_COLUMNS } from './battingColumns.ts';
+import type { ColumnSpec, ColumnTable, CsvNameOf, PlausibleRange } from './ColumnSpec.ts';
+import { CONTRACTS_COLUMNS } from './contractsColumns.ts';
+import { FIELDING_COLUMNS } from './fieldingColumns.ts';
+import { LEVELS_COLUMNS } from './levelsColumns.ts';
+import { PITCHING_COLUMNS } from './pitchingColumns.ts';
+import { PLAYERS_COLUMNS } from './playersColumns.ts';
+
 /**
- * The canonical roster files and their columns (required, then optional).
- * A roster folder's files are read under these names unless a column map
- * renames them.
+ * The canonical roster files and their column tables. A roster folder's
+ * files are read under these names unless a column map renames them.
  */
 export const FILE_COLUMNS = {
-  'levels.csv': {
-    required: ['level'],
-    optional: [],
-  },
-  'players.csv': {
-    required: ['player_id', 'name'],
-    optional: ['birth_date', 'bats', 'throws'],
-  },
-  'batting.csv': {
-    required: ['player_id', 'season', 'level', 'PA', 'AB', 'H', '2B', '3B', 'HR', 'BB', 'HBP', 'SF', 'SO'],
-    optional: [
-      'team', 'G', 'IBB', 'SB', 'CS',
-      'bbe', 'ev_avg_mph', 'ev_p90_mph', 'la_avg_deg', 'hard_hit_pct', 'sweet_spot_pct', 'sprint_ft_s',
-    ],
-  },
-  'fielding.csv': {
-    required: ['player_id', 'season', 'level', 'pos', 'inn', 'PO', 'A', 'E'],
-    optional: ['team', 'G', 'arm_mph', 'pop_2b_s', 'exchange_s', 'sb_against', 'cs_caught'],
-  },
-  'pitching.csv': {
-    required: ['player_id', 'season', 'level', 'G', 'GS', 'IP', 'BF', 'H', 'HR', 'BB', 'HBP', 'SO', 'ER'],
-    optional: ['team', 'fb_mph', 'fb_spin_rpm', 'whiff_pct', 'gb_pct'],
-  },
-  'contracts.csv': {
-    required: ['player_id', 'season', 'salary_usd'],
-    optional: [],
-  },
-} as const;
+  'levels.csv': LEVELS_COLUMNS,
+  'players.csv': PLAYERS_COLUMNS,
+  'batting.csv': BATTING_COLUMNS,
+  'fielding.csv': FIELDING_COLUMNS,
+  'pitching.csv': PITCHING_COLUMNS,
+  'contracts.csv': CONTRACTS_COLUMNS,
+} as const satisfies Readonly<Record<string, ColumnTable>>;
 
 export type RosterFile = keyof typeof FILE_COLUMNS;
-export type ColumnOf<F extends RosterFile> =
-  | (typeof FILE_COLUMNS)[F]['required'][number]
-  | (typeof FILE_COLUMNS)[F]['optional'][number];
+export type ColumnOf<F extends RosterFile> = CsvNameOf<(typeof FILE_COLUMNS)[F]>;
 
 export const ROSTER_FILES: readonly RosterFile[] = [
   'levels.csv', 'players.csv', 'batting.csv', 'fielding.csv', 'pitching.csv', 'contracts.csv',
@@ -45,14 +29,29 @@ export const ROSTER_FILES: readonly RosterFile[] = [
 /** Files a roster folder must have; the others are read as empty when absent. */
 export const REQUIRED_FILES: ReadonlySet<RosterFile> = new Set<RosterFile>(['players.csv', 'batting.csv']);
 
-export function isRequiredColumn(file: RosterFile, column: string): boolean {
-  const required: readonly string[] = FILE_COLUMNS[file].required;
-  return required.includes(column);
+/** The column table of a file (as a plain table, for code that works on any file). */
+export function tableOf(file: RosterFile): ColumnTable {
+  return FILE_COLUMNS[file];
 }
 
+/** The spec of a canonical column, undefined for a name the file lacks. */
+export function columnSpec(file: RosterFile, csv: string): ColumnSpec | undefined {
+  return tableOf(file).find((c) => c.csv === csv);
+}
+
+export function isRequiredColumn(file: RosterFile, column: string): boolean {
+  return columnSpec(file, column)?.required ?? false;
+}
+
+/** A file's canonical column names: required first, then optional, each in table order. */
 export function columnsOf(file: RosterFile): readonly string[] {
-  const spec = FILE_COLUMNS[file];
-  const required: readonly string[] = spec.required;
-  const optional: readonly string[] = spec.optional;
-  return [...required, ...optional];
+  const table = tableOf(file);
+  return [...table.filter((c) => c.required), ...table.filter((c) => !c.required)].map((c) => c.csv);
+}
+
+/** The plausible range of a measured column; throws on a column without one (a programming error). */
+export function plausibleRange(file: RosterFile, csv: string): PlausibleRange {
+  const range = columnSpec(file, csv)?.range;
+  if (range === undefined) throw new RangeError(`${file} has no measured column ${csv}`);
+  return range;
 }

@@ -1,3 +1,5 @@
+import { LEVELS_COLUMNS } from './levelsColumns.ts';
+import { RecordReader } from './RecordReader.ts';
 import { DEFAULT_LEVELS, KeyLines } from './RosterLookups.ts';
 import { readTable, type TableOptions } from './readTable.ts';
 
@@ -9,18 +11,19 @@ export interface LevelsRead {
   readonly ignored: readonly string[];
 }
 
-/** Reads levels.csv (one column `level`, rows low to high), or gives the default order without it. */
+/** Reads levels.csv (levelsColumns.ts: one column `level`, rows low to high), or gives the default order without it. */
 export async function readLevels(options: TableOptions): Promise<LevelsRead> {
   const levels: string[] = [];
   const keys = new KeyLines('level');
   const read = await readTable(options, 'levels.csv', (ctx) => {
-    const c = { level: ctx.header.col('level') };
+    const reader = new RecordReader(LEVELS_COLUMNS, ctx, undefined);
     return (cells, line) => {
       const { row } = ctx;
       row.start(line, cells);
-      const level = row.text(c.level);
+      const fields = reader.read(line);
+      const level = typeof fields['level'] === 'string' ? fields['level'] : '';
       if (level !== '') keys.check(row, level, level);
-      if (ctx.settle()) levels.push(level);
+      if (ctx.settle()) levels.push(reader.record(fields).level);
     };
   });
   if (!read.present) return { levels: DEFAULT_LEVELS, file: undefined, rows: 0, ignored: [] };

@@ -1,25 +1,26 @@
 /**
  * The roster as Kindred holds it after reading and checking the CSV files:
  * canonical names, numbers converted, innings in outs, stints combined.
- * A missing optional measurement is `undefined` (never zero).
+ * A missing optional measurement is absent (never zero). The record types
+ * follow from the column tables (`*Columns.ts`).
  */
 import type { InputIssue } from '../errors/InputError.ts';
+import type { BATTING_COLUMNS } from './battingColumns.ts';
+import type { RecordOf } from './ColumnSpec.ts';
+import type { CONTRACTS_COLUMNS } from './contractsColumns.ts';
+import type { FIELD_POSITIONS, FIELDING_COLUMNS } from './fieldingColumns.ts';
+import type { PITCHING_COLUMNS } from './pitchingColumns.ts';
+import type { BATS, PLAYERS_COLUMNS, THROWS } from './playersColumns.ts';
 
-export type Bats = 'L' | 'R' | 'S';
-export type Throws = 'L' | 'R';
+export type Bats = (typeof BATS)[number];
+export type Throws = (typeof THROWS)[number];
 /** Fielding positions profiled by Kindred. */
-export type FieldPosition = 'C' | '1B' | '2B' | '3B' | 'SS' | 'LF' | 'CF' | 'RF';
+export type FieldPosition = (typeof FIELD_POSITIONS)[number];
 /** A season's position: a fielding position, DH for a hitter with no fielding, SP or RP for pitchers. */
 export type Position = FieldPosition | 'DH' | 'SP' | 'RP';
 
-export interface Player {
-  readonly playerId: string;
-  readonly name: string;
-  /** YYYY-MM-DD */
-  readonly birthDate?: string;
-  readonly bats?: Bats;
-  readonly throws?: Throws;
-}
+/** A player of players.csv (see playersColumns.ts). */
+export type Player = RecordOf<typeof PLAYERS_COLUMNS>;
 
 /** Key of a player-season at one level. */
 export interface SeasonKey {
@@ -28,79 +29,17 @@ export interface SeasonKey {
   readonly level: string;
 }
 
-/** Batting for one player, season and level, all stints combined. */
-export interface BattingSeason extends SeasonKey {
-  readonly teams: readonly string[];
-  readonly G?: number;
-  readonly PA: number;
-  readonly AB: number;
-  readonly H: number;
-  readonly doubles: number;
-  readonly triples: number;
-  readonly HR: number;
-  readonly BB: number;
-  readonly HBP: number;
-  readonly SF: number;
-  readonly SO: number;
-  readonly IBB?: number;
-  readonly SB?: number;
-  readonly CS?: number;
-  /** Batted-ball events behind the batted-ball averages. */
-  readonly bbe?: number;
-  readonly evAvgMph?: number;
-  readonly evP90Mph?: number;
-  readonly laAvgDeg?: number;
-  /** 0 to 100 */
-  readonly hardHitPct?: number;
-  /** 0 to 100 */
-  readonly sweetSpotPct?: number;
-  readonly sprintFtS?: number;
-}
+/** Batting for one player, season and level, all stints combined (fields: battingColumns.ts). */
+export type BattingSeason = RecordOf<typeof BATTING_COLUMNS>;
 
-/** Fielding for one player, season, level and position, stints combined. */
-export interface FieldingSeason extends SeasonKey {
-  readonly pos: FieldPosition;
-  readonly teams: readonly string[];
-  readonly G?: number;
-  /** Innings in outs (thirds): 6.2 innings is 20 outs. */
-  readonly outs: number;
-  readonly PO: number;
-  readonly A: number;
-  readonly E: number;
-  readonly armMph?: number;
-  readonly pop2bS?: number;
-  readonly exchangeS?: number;
-  readonly sbAgainst?: number;
-  readonly csCaught?: number;
-}
+/** Fielding for one player, season, level and position, stints combined; innings in outs (fieldingColumns.ts). */
+export type FieldingSeason = RecordOf<typeof FIELDING_COLUMNS>;
 
-/** Pitching for one player, season and level, stints combined. */
-export interface PitchingSeason extends SeasonKey {
-  readonly teams: readonly string[];
-  readonly G: number;
-  readonly GS: number;
-  /** Innings pitched in outs (thirds). */
-  readonly outs: number;
-  readonly BF: number;
-  readonly H: number;
-  readonly HR: number;
-  readonly BB: number;
-  readonly HBP: number;
-  readonly SO: number;
-  readonly ER: number;
-  readonly fbMph?: number;
-  readonly fbSpinRpm?: number;
-  /** 0 to 100 */
-  readonly whiffPct?: number;
-  /** 0 to 100 */
-  readonly gbPct?: number;
-}
+/** Pitching for one player, season and level, stints combined; innings in outs (pitchingColumns.ts). */
+export type PitchingSeason = RecordOf<typeof PITCHING_COLUMNS>;
 
-export interface Contract {
-  readonly playerId: string;
-  readonly season: number;
-  readonly salaryUsd: number;
-}
+/** A row of contracts.csv (contractsColumns.ts). */
+export type Contract = RecordOf<typeof CONTRACTS_COLUMNS>;
 
 /** A row left out under --lenient, with every reason found in it. */
 export interface RejectedRow {

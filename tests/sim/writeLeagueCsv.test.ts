@@ -1,6 +1,6 @@
 import { readdir, rm } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { PLAUSIBLE_RANGES } from '../../src/ingest/plausibleRanges.ts';
+import { plausibleRange } from '../../src/ingest/fileColumns.ts';
 import { readCsv, smallLeague, writeToTemp } from './smallLeague.ts';
 
 const league = smallLeague();
@@ -94,8 +94,8 @@ describe('writeLeagueCsv(league, dir)', () => {
       }
       for (const m of ['ev_avg_mph', 'ev_p90_mph', 'la_avg_deg', 'sprint_ft_s'] as const) {
         if (r[m] === '') continue;
-        expect(Number(r[m])).toBeGreaterThanOrEqual(PLAUSIBLE_RANGES[m].min);
-        expect(Number(r[m])).toBeLessThanOrEqual(PLAUSIBLE_RANGES[m].max);
+        expect(Number(r[m])).toBeGreaterThanOrEqual(plausibleRange('batting.csv', m).min);
+        expect(Number(r[m])).toBeLessThanOrEqual(plausibleRange('batting.csv', m).max);
       }
     }
   });
@@ -109,16 +109,16 @@ describe('writeLeagueCsv(league, dir)', () => {
       if (r['pos'] === 'C') {
         expect(count(r, 'cs_caught')).toBeLessThanOrEqual(count(r, 'sb_against'));
         if (r['pop_2b_s'] !== '') {
-          expect(Number(r['pop_2b_s'])).toBeGreaterThanOrEqual(PLAUSIBLE_RANGES.pop_2b_s.min);
-          expect(Number(r['pop_2b_s'])).toBeLessThanOrEqual(PLAUSIBLE_RANGES.pop_2b_s.max);
+          expect(Number(r['pop_2b_s'])).toBeGreaterThanOrEqual(plausibleRange('fielding.csv', 'pop_2b_s').min);
+          expect(Number(r['pop_2b_s'])).toBeLessThanOrEqual(plausibleRange('fielding.csv', 'pop_2b_s').max);
           expect(Number(r['exchange_s'])).toBeLessThan(Number(r['pop_2b_s']));
         }
       } else {
         for (const c of ['pop_2b_s', 'exchange_s', 'sb_against', 'cs_caught']) expect(r[c]).toBe('');
       }
       if (r['arm_mph'] !== '') {
-        expect(Number(r['arm_mph'])).toBeGreaterThanOrEqual(PLAUSIBLE_RANGES.arm_mph.min);
-        expect(Number(r['arm_mph'])).toBeLessThanOrEqual(PLAUSIBLE_RANGES.arm_mph.max);
+        expect(Number(r['arm_mph'])).toBeGreaterThanOrEqual(plausibleRange('fielding.csv', 'arm_mph').min);
+        expect(Number(r['arm_mph'])).toBeLessThanOrEqual(plausibleRange('fielding.csv', 'arm_mph').max);
       }
     }
   });
@@ -142,8 +142,8 @@ describe('writeLeagueCsv(league, dir)', () => {
       }
       for (const m of ['fb_mph', 'fb_spin_rpm'] as const) {
         if (r[m] === '') continue;
-        expect(Number(r[m])).toBeGreaterThanOrEqual(PLAUSIBLE_RANGES[m].min);
-        expect(Number(r[m])).toBeLessThanOrEqual(PLAUSIBLE_RANGES[m].max);
+        expect(Number(r[m])).toBeGreaterThanOrEqual(plausibleRange('pitching.csv', m).min);
+        expect(Number(r[m])).toBeLessThanOrEqual(plausibleRange('pitching.csv', m).max);
       }
     }
     expect(starters).toBeGreaterThan(100);
