@@ -26,6 +26,9 @@ export type ErrorCode =
   | 'kindred.input.missingFile'
   | 'kindred.input.badColumnMap'
   | 'kindred.input.rejected'
+  | 'kindred.input.badEncoding'
+  | 'kindred.input.controlCharacter'
+  | 'kindred.input.nothingLeft'
   // store
   | 'kindred.store.missing'
   | 'kindred.store.corrupt'

@@ -33,6 +33,7 @@ export class RecordReader<T extends ColumnTable> {
   team: string | undefined = undefined;
   partValue: string | undefined = undefined;
   private readonly fieldNames: readonly string[];
+  private readonly seasonCol: Column | undefined;
   private readonly present: readonly boolean[];
 
   constructor(
@@ -49,6 +50,7 @@ export class RecordReader<T extends ColumnTable> {
     });
     this.part = table.some((s) => s.kind === 'season') ? this.located.find((l) => l.spec.kind === 'choice') : undefined;
     this.numbers = new Array<number | undefined>(table.length);
+    this.seasonCol = this.located.find((l) => l.spec.kind === 'season')?.col;
     this.fieldNames = table.map((spec) => spec.field);
     this.present = table.map((spec) => spec.required || spec.kind === 'team');
     const indexOf = (csv: string): number => {
@@ -77,6 +79,7 @@ export class RecordReader<T extends ColumnTable> {
       this.numbers[i] = typeof value === 'number' ? value : undefined;
       if (value !== undefined) out[l.spec.field] = value;
     }
+    if (this.lookups !== undefined && this.seasonCol !== undefined) this.lookups.bornBefore(row, this.playerId, this.season, this.seasonCol);
     for (const c of this.checks) {
       let lhs = 0;
       let known = true;
@@ -110,7 +113,7 @@ export class RecordReader<T extends ColumnTable> {
         this.playerId = this.lookups === undefined ? row.text(col) : this.lookups.player(row, col);
         return this.playerId;
       case 'season':
-        this.season = row.season(col);
+        this.season = this.lookups === undefined ? row.season(col) : this.lookups.season(row, col);
         return this.season;
       case 'level':
         this.level = this.lookups === undefined ? row.text(col) : this.lookups.level(row, col);

@@ -2,6 +2,20 @@ import type { Column } from './HeaderColumns.ts';
 import type { RowReader } from './RowReader.ts';
 import type { Player } from './types.ts';
 
+/** Seasons a roster may hold, first and last year inclusive. */
+export interface SeasonSpan {
+  readonly from: number;
+  readonly to: number;
+}
+
+/**
+ * The default plausible seasons: from 1860 (project choice: before the first
+ * professional leagues, common practice dates them to the 1870s) to next year.
+ */
+export function defaultSeasonSpan(now: Date = new Date()): SeasonSpan {
+  return { from: 1860, to: now.getUTCFullYear() + 1 };
+}
+
 /** The default order of levels, low to high, used when a roster has no levels.csv. */
 export const DEFAULT_LEVELS: readonly string[] = ['Rk', 'A', 'A+', 'AA', 'AAA', 'MLB'];
 
@@ -19,6 +33,7 @@ export class RosterLookups {
     private readonly playersFile: string,
     readonly levels: readonly string[],
     levelsFile: string | undefined,
+    private readonly seasons: SeasonSpan = defaultSeasonSpan(),
   ) {
     this.levelSet = new Set(levels);
     const source = levelsFile === undefined
@@ -39,12 +54,24 @@ export class RosterLookups {
     return id;
   }
 
-  /** Reads whose season row it is: a known player_id, the season, a known level and the optional team. */
-  stintOf(
-    row: RowReader,
-    c: { readonly playerId: Column; readonly season: Column; readonly level: Column; readonly team: Column },
-  ): { readonly playerId: string; readonly season: number; readonly level: string; readonly team: string | undefined } {
-    return { playerId: this.player(row, c.playerId), season: row.season(c.season), level: this.level(row, c.level), team: row.textOpt(c.team) };
+  /** Reads a season: a 4-digit year within the plausible span. */
+  season(row: RowReader, col: Column): number {
+    const season = row.season(col);
+    if (Number.isNaN(season) || (season >= this.seasons.from && season <= this.seasons.to)) return season;
+    row.report('kindred.input.outOfRange', col, String(season),
+      `a season from ${this.seasons.from} to ${this.seasons.to} (the plausible span; another span can be given when building)`);
+    return Number.NaN;
+  }
+
+  /** Reports a season that does not come after the player's birth date (players.csv). */
+  bornBefore(row: RowReader, playerId: string, season: number, col: Column): void {
+    const born = this.players.get(playerId)?.birthDate;
+    if (born === undefined || Number.isNaN(season)) return;
+    const year = Number(born.slice(0, 4));
+    if (year < season) return;
+    const value = col.index < 0 ? '' : (row.cells[col.index] ?? '').trim();
+    row.report('kindred.input.inconsistent', col, value,
+      `a season after the player's birth (${playerId} was born ${born}, per ${this.playersFile})`);
   }
 
   /** Reads a level that must be in the known order. */

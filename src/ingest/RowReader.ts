@@ -142,7 +142,9 @@ export class RowReader {
     const m = DATE.exec(text);
     if (m !== null) {
       const [y, mo, d] = [Number(m[1]), Number(m[2]), Number(m[3])];
-      const date = new Date(Date.UTC(y, mo - 1, d));
+      // setUTCFullYear, not Date.UTC: Date.UTC reads the years 0 to 99 as 1900 to 1999.
+      const date = new Date(0);
+      date.setUTCFullYear(y, mo - 1, d);
       if (date.getUTCFullYear() === y && date.getUTCMonth() === mo - 1 && date.getUTCDate() === d) return text;
     }
     this.report('kindred.input.badDate', col, text, 'a calendar date YYYY-MM-DD');

@@ -1,5 +1,5 @@
 import { IssueLog } from './IssueLog.ts';
-import { RosterLookups } from './RosterLookups.ts';
+import { RosterLookups, defaultSeasonSpan, type SeasonSpan } from './RosterLookups.ts';
 import { EMPTY_COLUMN_MAP, type ColumnMap } from './loadColumnMap.ts';
 import { readBatting } from './readBatting.ts';
 import { readContracts } from './readContracts.ts';
@@ -17,6 +17,8 @@ export interface ReadRosterOptions {
   readonly lenient?: boolean;
   /** The club's file and column names (see loadColumnMap). */
   readonly columnMap?: ColumnMap;
+  /** Seasons the roster may hold (default: 1860 to next year); a season outside is refused. */
+  readonly seasons?: SeasonSpan;
   /** Called every 100,000 rows and at the end of each file with the file name as read and the rows so far. */
   readonly onProgress?: (file: string, rows: number) => void;
 }
@@ -42,7 +44,9 @@ export async function readRoster(dir: string, options: ReadRosterOptions = {}): 
   };
   const levels = await readLevels(table);
   const players = await readPlayers(table);
-  const lookups = new RosterLookups(players.players, players.rejectedAt, players.fileName, levels.levels, levels.file);
+  const lookups = new RosterLookups(
+    players.players, players.rejectedAt, players.fileName, levels.levels, levels.file, options.seasons ?? defaultSeasonSpan(),
+  );
   const batting = await readBatting(table, lookups);
   const fielding = await readFielding(table, lookups);
   const pitching = await readPitching(table, lookups);

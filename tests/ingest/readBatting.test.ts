@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { readRoster } from '../../src/ingest/readRoster.ts';
-import { col, csv, expectOneIssue, removeRosterDirs, rosterDir, strictIssues } from './rosterFixture.ts';
+import { col, csv, expectOneIssue, PLAYER_ROWS, removeRosterDirs, rosterDir, strictIssues } from './rosterFixture.ts';
 
 afterAll(removeRosterDirs);
 
@@ -112,6 +112,22 @@ describe('readRoster: batting.csv keys', () => {
   it('refuses a season that is not a 4-digit year', async () => {
     const issues = await battingIssues([{ season: '21' }]);
     expectOneIssue(issues, { code: 'kindred.input.badValue', file: 'batting.csv', line: 2, column: col('batting', 'season'), value: '21' });
+  });
+  it('refuses a season outside the plausible span (9999), and one outside a span given when reading', async () => {
+    const issues = await battingIssues([{ season: '9999' }]);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'season'), value: '9999' });
+    expect(issue.expected).toMatch(/a season from 1860 to \d{4}/);
+    const narrow = await strictIssues(rosterDir({ 'batting.csv': csv('batting', [{}]) }), { seasons: { from: 2022, to: 2030 } });
+    expectOneIssue(narrow.issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'season'), value: '2021' });
+  });
+  it('refuses a season that does not come after the birth date in players.csv (born 2090, season 2021)', async () => {
+    const dir = rosterDir({
+      'players.csv': csv('players', [{ birth_date: '2090-01-01' }, ...PLAYER_ROWS.slice(1)]),
+      'batting.csv': csv('batting', [{}]),
+    });
+    const { issues } = await strictIssues(dir);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.inconsistent', file: 'batting.csv', line: 2, column: col('batting', 'season'), value: '2021' });
+    expect(issue.expected).toContain('born 2090-01-01');
   });
   it('refuses an unknown level, naming the known levels and levels.csv', async () => {
     const issues = await battingIssues([{ level: 'AAAA' }]);

@@ -21,6 +21,13 @@ describe('readRoster: players.csv', () => {
       ['players.csv', 3, col('players', 'birth_date'), '1999-02-30'],
     ]);
   });
+  it('accepts 0001-01-01, a valid date of the proleptic Gregorian calendar (ISO 8601), and 2000-02-29 (leap year)', async () => {
+    const roster = await readRoster(rosterDir({
+      'players.csv': csv('players', [{ birth_date: '0001-01-01' }, { player_id: 'p2', birth_date: '2000-02-29' }, { player_id: 'p3' }]),
+    }));
+    expect(roster.players.get('p1')?.birthDate).toBe('0001-01-01');
+    expect(roster.players.get('p2')?.birthDate).toBe('2000-02-29');
+  });
   it('refuses bats not L, R or S', async () => {
     const issues = await playerIssues([{ bats: 'X' }, ...PLAYER_ROWS.slice(1)]);
     expectOneIssue(issues, { code: 'kindred.input.badValue', file: 'players.csv', line: 2, column: col('players', 'bats'), value: 'X' });

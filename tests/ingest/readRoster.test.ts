@@ -33,7 +33,7 @@ describe('readRoster(dir) strict (the default)', () => {
     expect(err.message).toContain('4 more problems');
   });
   it(`keeps the first ${ISSUE_CAP} issues and says how many there were in all`, async () => {
-    const rows = Array.from({ length: 250 }, (_, i) => ({ season: String(2000 + i), level: 'AA', SO: 'x' }));
+    const rows = Array.from({ length: 250 }, (_, i) => ({ team: `T${i}`, level: 'AA', SO: 'x' }));
     const { issues, message } = await strictIssues(rosterDir({ 'batting.csv': csv('batting', rows) }));
     expect(issues).toHaveLength(ISSUE_CAP);
     expect(issues[ISSUE_CAP - 1]?.line).toBe(ISSUE_CAP + 1);
