@@ -17,9 +17,12 @@ export interface InputIssue {
   readonly expected: string;
 }
 
-/** `batting.csv:12:7: H "130" > AB "120" (expected H <= AB)` */
+/**
+ * `batting.csv:12:7: H "130": expected H <= AB [...]`; the line and column
+ * only when known (`players.csv: ...` for a whole file).
+ */
 export function formatIssue(issue: InputIssue): string {
-  const where = `${issue.file}:${issue.line}:${issue.column}`;
+  const where = issue.line <= 0 ? issue.file : `${issue.file}:${issue.line}:${issue.column}`;
   const what = issue.field ? `${issue.field} ${JSON.stringify(issue.value)}` : JSON.stringify(issue.value);
   return `${where}: ${what}: expected ${issue.expected} [${issue.code}]`;
 }

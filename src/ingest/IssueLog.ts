@@ -4,6 +4,11 @@ import type { RejectedRow } from './types.ts';
 /** How many issues a strict read keeps before it only counts them. */
 export const ISSUE_CAP = 200;
 
+/** Cells of a rejected row kept for the rejects file (the rest only counted): bounds memory on ragged rows. */
+export const REJECTED_CELLS_KEPT = 64;
+/** Characters kept of each cell of a rejected row. */
+export const REJECTED_CELL_CHARS = 256;
+
 /**
  * Collects what is wrong with a roster. File-level problems (a missing file or
  * column, a wrong delimiter, a percent column in fractions) always fail the
@@ -28,7 +33,7 @@ export class IssueLog {
   /** Every problem found in one data row. */
   rowProblems(file: string, line: number, raw: readonly string[], issues: readonly InputIssue[]): void {
     if (this.lenient) {
-      this.rejected.push({ file, line, raw: [...raw], issues: [...issues] });
+      this.rejected.push({ file, line, raw: keptPrefix(raw), rawCells: raw.length, issues: [...issues] });
       return;
     }
     for (const issue of issues) this.count(issue);
@@ -53,4 +58,17 @@ export class IssueLog {
     this.total += 1;
     if (this.kept.length < ISSUE_CAP) this.kept.push(issue);
   }
+}
+
+/**
+ * The first cells of a rejected row, each cut to its first characters, as
+ * fresh strings (a slice could keep a huge parent cell alive).
+ */
+function keptPrefix(raw: readonly string[]): string[] {
+  const kept = raw.length > REJECTED_CELLS_KEPT ? raw.slice(0, REJECTED_CELLS_KEPT) : [...raw];
+  for (let i = 0; i < kept.length; i++) {
+    const cell = kept[i] ?? '';
+    if (cell.length > REJECTED_CELL_CHARS) kept[i] = Buffer.from(cell.slice(0, REJECTED_CELL_CHARS), 'utf8').toString('utf8');
+  }
+  return kept;
 }

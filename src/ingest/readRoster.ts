@@ -1,4 +1,5 @@
-import { IssueLog } from './IssueLog.ts';
+import { InputError, type InputIssue } from '../errors/InputError.ts';
+import { ISSUE_CAP, IssueLog } from './IssueLog.ts';
 import { RosterLookups, defaultSeasonSpan, type SeasonSpan } from './RosterLookups.ts';
 import { EMPTY_COLUMN_MAP, type ColumnMap } from './loadColumnMap.ts';
 import { readBatting } from './readBatting.ts';
@@ -8,7 +9,7 @@ import { readLevels } from './readLevels.ts';
 import { readPitching } from './readPitching.ts';
 import { readPlayers } from './readPlayers.ts';
 import type { TableOptions, TableRead } from './readTable.ts';
-import type { Roster } from './types.ts';
+import type { RejectedRow, Roster } from './types.ts';
 
 export type { ColumnMap } from './loadColumnMap.ts';
 
@@ -32,7 +33,8 @@ export interface ReadRosterOptions {
  * problems are left out and listed in `rejected` with all their reasons;
  * problems of a whole file or column (missing file or column, wrong
  * delimiter, duplicate header names, CSV syntax, percents given as
- * fractions) still throw. No row is dropped silently.
+ * fractions) still throw, and so does a lenient read that leaves no batting
+ * or pitching row. No row is dropped silently.
  */
 export async function readRoster(dir: string, options: ReadRosterOptions = {}): Promise<Roster> {
   const log = new IssueLog(options.lenient ?? false);
@@ -52,6 +54,9 @@ export async function readRoster(dir: string, options: ReadRosterOptions = {}): 
   const pitching = await readPitching(table, lookups);
   const contracts = await readContracts(table, lookups);
   log.throwIfFailed();
+  if (batting.batting.length === 0 && pitching.pitching.length === 0 && log.rejected.length > 0) {
+    throw nothingLeft(batting.fileName, pitching.fileName, log.rejected);
+  }
 
   const reads: readonly [string, TableRead][] = [
     ['levels.csv', { present: levels.file !== undefined, fileName: levels.file ?? 'levels.csv', rows: levels.rows, ignored: levels.ignored }],
@@ -79,5 +84,33 @@ export async function readRoster(dir: string, options: ReadRosterOptions = {}): 
     rejected: log.rejected,
     ignoredColumns,
     pitcherFieldingRows: fielding.pitcherRows,
+    notices: emptyGroups(batting, fielding, pitching),
   };
+}
+
+/** Lenient, yet every batting and pitching row was left out: nothing to profile. The first reasons are listed. */
+function nothingLeft(battingFile: string, pitchingFile: string, rejected: readonly RejectedRow[]): InputError {
+  const head: InputIssue = {
+    code: 'kindred.input.nothingLeft', file: battingFile, line: 0, column: 0, field: '', value: `${rejected.length} rows rejected`,
+    expected: `at least one good row in ${battingFile} or ${pitchingFile} (--lenient left out every row; no store is written)`,
+  };
+  const reasons = rejected.flatMap((r) => r.issues).slice(0, ISSUE_CAP - 1);
+  return new InputError([head, ...reasons],
+    `every row of ${battingFile} and ${pitchingFile} was rejected (${rejected.length} rows in all): nothing to build a store from`);
+}
+
+/** What the files leave empty, in words: a batting-only roster makes every hitter a DH. */
+function emptyGroups(
+  batting: TableRead & { readonly batting: readonly unknown[] },
+  fielding: TableRead & { readonly fielding: readonly unknown[] },
+  pitching: TableRead & { readonly pitching: readonly unknown[] },
+): string[] {
+  const none = (read: TableRead): string => (read.present ? `${read.fileName} has no usable rows` : `no ${read.fileName}`);
+  const notices: string[] = [];
+  if (batting.batting.length === 0) notices.push(`${none(batting)}: no hitter profiles (C, IF, OF, DH)`);
+  else if (fielding.fielding.length === 0) {
+    notices.push(`${none(fielding)}: every hitter is profiled as DH (no C, IF or OF profiles)`);
+  }
+  if (pitching.pitching.length === 0) notices.push(`${none(pitching)}: no pitcher profiles (SP, RP)`);
+  return notices;
 }

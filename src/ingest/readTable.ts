@@ -53,10 +53,12 @@ export async function readTable<F extends RosterFile>(
   const renames = columnMap.columns[file] ?? {};
   if (!(await isFile(path))) {
     if (REQUIRED_FILES.has(file)) {
-      const renamed = fileName === file ? '' : ` (the column map's name for ${file})`;
+      const renamed = fileName === file
+        ? ` (or name your export's file in a column map: --columns map.json with {"files": {"${file}": "<your file>"}})`
+        : ` (the column map's name for ${file})`;
       log.fileProblem({
         code: 'kindred.input.missingFile', file: fileName, line: 0, column: 0, field: '', value: path,
-        expected: `a file ${fileName}${renamed} in the roster folder`,
+        expected: `a file ${fileName} in the roster folder${renamed}`,
       });
     }
     return { present: false, fileName, rows: 0, ignored: [] };

@@ -45,7 +45,10 @@ export type Contract = RecordOf<typeof CONTRACTS_COLUMNS>;
 export interface RejectedRow {
   readonly file: string;
   readonly line: number;
+  /** The row's first cells (at most REJECTED_CELLS_KEPT, each cut to REJECTED_CELL_CHARS characters). */
   readonly raw: readonly string[];
+  /** How many cells the row had. */
+  readonly rawCells: number;
   readonly issues: readonly InputIssue[];
 }
 
@@ -64,4 +67,6 @@ export interface Roster {
   readonly ignoredColumns: Readonly<Record<string, readonly string[]>>;
   /** fielding.csv rows at position P: checked like the others, then left out (pitchers' fielding is not profiled). */
   readonly pitcherFieldingRows: number;
+  /** Position groups the files leave empty, in words (e.g. no fielding.csv: every hitter a DH). */
+  readonly notices: readonly string[];
 }

@@ -1,8 +1,8 @@
-import { writeFileSync } from 'node:fs';
+import { rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { formatIssue, InputError } from '../../src/errors/InputError.ts';
-import { ISSUE_CAP } from '../../src/ingest/IssueLog.ts';
+import { ISSUE_CAP, REJECTED_CELL_CHARS, REJECTED_CELLS_KEPT } from '../../src/ingest/IssueLog.ts';
 import { loadColumnMap } from '../../src/ingest/loadColumnMap.ts';
 import { readRoster } from '../../src/ingest/readRoster.ts';
 import { col, csv, expectOneIssue, PLAYER_ROWS, removeRosterDirs, rosterDir, strictIssues } from './rosterFixture.ts';
@@ -185,5 +185,41 @@ describe('readRoster with a column map', () => {
     const issue = expectOneIssue(issues, { code: 'kindred.input.missingColumn', file: 'their_batting.csv', line: 1, column: 0, value: 'strikeouts', field: 'SO' });
     expect(formatIssue(issue)).toContain('SO');
     expect(issue.expected).toContain('"strikeouts"');
+  });
+});
+
+describe('readRoster: what a roster leaves out', () => {
+  it('names --columns when players.csv is missing', async () => {
+    const dir = rosterDir();
+    rmSync(join(dir, 'players.csv'));
+    const { issues } = await strictIssues(dir);
+    const issue = expectOneIssue(issues, { code: 'kindred.input.missingFile', file: 'players.csv', line: 0, column: 0, value: join(dir, 'players.csv') });
+    expect(issue.expected).toContain('--columns');
+    expect(formatIssue(issue)).toMatch(/^players\.csv: /);
+  });
+  it('says so when the files leave groups empty: batting only makes every hitter a DH, and there are no pitchers', async () => {
+    const roster = await readRoster(rosterDir());
+    expect(roster.notices).toEqual([
+      'no fielding.csv: every hitter is profiled as DH (no C, IF or OF profiles)',
+      'no pitching.csv: no pitcher profiles (SP, RP)',
+    ]);
+    const full = await readRoster(rosterDir({ 'fielding.csv': csv('fielding', [{}]), 'pitching.csv': csv('pitching', [{}]) }));
+    expect(full.notices).toEqual([]);
+  });
+  it('refuses a lenient read that rejects every batting and pitching row (no store without profiles), listing the reasons', async () => {
+    const dir = rosterDir({ 'batting.csv': csv('batting', [{ H: 'x' }, { player_id: 'p2', AB: '-1' }]) });
+    const err = await readRoster(dir, { lenient: true }).then(() => undefined, (e: unknown) => e);
+    if (!(err instanceof InputError)) throw new Error('expected an InputError');
+    expect(err.code).toBe('kindred.input.nothingLeft');
+    expect(err.message).toContain('every row of batting.csv and pitching.csv was rejected (2 rows in all)');
+    expect(err.issues.slice(1).map((i) => [i.line, i.code])).toEqual([[2, 'kindred.input.notNumeric'], [3, 'kindred.input.negative']]);
+  });
+  it('keeps only the first cells of a rejected ragged row under --lenient (bounded memory)', async () => {
+    const wide = Array.from({ length: 5000 }, (_, i) => String(i)).join(',');
+    const long = 'x'.repeat(10_000);
+    const dir = rosterDir({ 'batting.csv': `${csv('batting', [{}])}${wide}\n${long}\n` });
+    const roster = await readRoster(dir, { lenient: true });
+    expect(roster.rejected.map((r) => [r.line, r.rawCells, r.raw.length])).toEqual([[3, 5000, REJECTED_CELLS_KEPT], [4, 1, 1]]);
+    expect(roster.rejected[1]?.raw[0]).toHaveLength(REJECTED_CELL_CHARS);
   });
 });

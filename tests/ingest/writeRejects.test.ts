@@ -32,13 +32,23 @@ describe('writeRejects(path, rejected)', () => {
   });
   it('writes text cells that begin with = + - @ as text, apostrophe first (OWASP CSV injection guidance)', async () => {
     const roster = await readRoster(rosterDir({
-      'batting.csv': csv('batting', [{ player_id: '=HYPERLINK(1)', team: '@SUM(A1)' }]),
+      'batting.csv': csv('batting', [{}, { player_id: '=HYPERLINK(1)', team: '@SUM(A1)' }]),
     }), { lenient: true });
     const path = join(out, 'formula.csv');
     await writeRejects(path, roster.rejected);
     const records: string[][] = parse(readFileSync(path, 'utf8'));
     expect(records[1]?.slice(3, 5)).toEqual(['player_id', "'=HYPERLINK(1)"]);
     expect(records[1]?.[7]?.startsWith("'=HYPERLINK(1),2021,AA,@SUM(A1),")).toBe(true);
+  });
+  it('ends the raw row of a long rejected row with a cell saying how many cells were not kept', async () => {
+    const wide = Array.from({ length: 100 }, (_, i) => String(i)).join(',');
+    const roster = await readRoster(rosterDir({ 'batting.csv': `${csv('batting', [{}])}${wide}\n` }), { lenient: true });
+    const path = join(out, 'wide.csv');
+    await writeRejects(path, roster.rejected);
+    const records: string[][] = parse(readFileSync(path, 'utf8'));
+    const raw: string[][] = parse(records[1]?.[7] ?? '');
+    expect(raw[0]?.length).toBe(65);
+    expect(raw[0]?.[64]).toBe('... 36 more cells not kept');
   });
   it('writes only the header when nothing was rejected', async () => {
     const path = join(out, 'none.csv');

@@ -23,5 +23,6 @@ export function roster(batting: BattingSeason[], pitching: PitchingSeason[], lev
     rejected: [],
     ignoredColumns: {},
     pitcherFieldingRows: 0,
+    notices: [],
   };
 }
