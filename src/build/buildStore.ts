@@ -44,6 +44,8 @@ export interface BuildSummary {
   readonly rowsRead: Readonly<Record<string, number>>;
   readonly rejected: number;
   readonly rejectsPath: string | null;
+  /** Position groups the roster's files leave empty, in words (Roster.notices). */
+  readonly notices: readonly string[];
   readonly profiles: Readonly<Partial<Record<PositionGroup, number>>>;
   readonly skipped: ProfileSet['skipped'];
   readonly seconds: number;
@@ -164,6 +166,7 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
     rowsRead: roster.rowsRead,
     rejected: roster.rejected.length,
     rejectsPath,
+    notices: roster.notices,
     profiles: counts,
     skipped: profiles.skipped,
     seconds: (performance.now() - started) / 1000,

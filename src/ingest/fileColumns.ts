@@ -55,3 +55,12 @@ export function plausibleRange(file: RosterFile, csv: string): PlausibleRange {
   if (range === undefined) throw new RangeError(`${file} has no measured column ${csv}`);
   return range;
 }
+
+/** The plausible range of a measured column of any roster file (dimension names reuse these CSV names), if it is one. */
+export function measuredRange(csv: string): PlausibleRange | undefined {
+  for (const file of ROSTER_FILES) {
+    const range = columnSpec(file, csv)?.range;
+    if (range !== undefined) return range;
+  }
+  return undefined;
+}

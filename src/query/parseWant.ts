@@ -6,7 +6,7 @@ import type { Target } from './Target.ts';
 import { groupOf } from '../profiles/positionGroup.ts';
 import { dimensionSuggestions, findDimension, suggestionHint } from './findDimension.ts';
 import { ParameterError } from '../errors/ParameterError.ts';
-import { PLAUSIBLE_RANGES, type MeasuredColumn } from '../ingest/plausibleRanges.ts';
+import { measuredRange } from '../ingest/fileColumns.ts';
 
 export interface WantOptions {
   readonly position: Position;
@@ -80,13 +80,13 @@ export const WANT_MAX_SD = 5;
 
 /**
  * The values a hand-built target may take for a dimension: the measured column's plausible range when
- * the dimension is one (src/ingest/plausibleRanges.ts, the same bounds the roster is checked against),
+ * the dimension is one (the roster's column tables, the same bounds the roster is checked against),
  * else the reference league mean plus or minus WANT_MAX_SD standard deviations, not below 0 when the
  * store holds no negative value of it.
  */
 function plausibleWant(g: StoredGroup, j: number, name: string, stats: { mean: number; sd: number }): { min: number; max: number; why: string } {
-  if (isMeasuredColumn(name)) {
-    const r = PLAUSIBLE_RANGES[name];
+  const r = measuredRange(name);
+  if (r !== undefined) {
     return { min: r.min, max: r.max, why: 'the plausible range of the measurement' };
   }
   if (!(stats.sd > 0)) return { min: -Infinity, max: Infinity, why: '' };
@@ -94,10 +94,6 @@ function plausibleWant(g: StoredGroup, j: number, name: string, stats: { mean: n
   for (let i = 0; i < g.n && !negative; i++) negative = (g.raw[i * g.d + j] as number) < 0;
   const low = stats.mean - WANT_MAX_SD * stats.sd;
   return { min: negative ? low : Math.max(0, low), max: stats.mean + WANT_MAX_SD * stats.sd, why: `within ${WANT_MAX_SD} standard deviations of the league mean` };
-}
-
-function isMeasuredColumn(name: string): name is MeasuredColumn {
-  return Object.hasOwn(PLAUSIBLE_RANGES, name);
 }
 
 function referenceStratum(

@@ -73,6 +73,28 @@ describe('kindred build with bad input', () => {
   });
 });
 
+describe('kindred build on a roster that leaves groups empty', () => {
+  it('says that a batting-only roster profiles every hitter as DH and has no pitchers', async () => {
+    const only = join(dir, 'batting-only');
+    await cp(roster, only, { recursive: true });
+    for (const f of ['fielding.csv', 'pitching.csv']) await writeFile(join(only, f), (await readFile(join(roster, f), 'utf8')).split('\n')[0] + '\n');
+    const out = await runCli('build', only, '--store', join(dir, 'only-store'));
+    expect(out.code).toBe(0);
+    expect(out.stderr).toContain('Note: fielding.csv has no usable rows: every hitter is profiled as DH (no C, IF or OF profiles)');
+    expect(out.stderr).toContain('Note: pitching.csv has no usable rows: no pitcher profiles (SP, RP)');
+  });
+  it('refuses to write a store when --lenient rejects every row, and leaves no store', async () => {
+    const bad = join(dir, 'all-bad');
+    await cp(roster, bad, { recursive: true });
+    await writeFile(join(bad, 'players.csv'), 'player_id,name\n');
+    const storeDir = join(dir, 'no-store');
+    const out = await runCli('build', bad, '--store', storeDir, '--lenient');
+    expect(out.code).toBe(1);
+    expect(out.stderr).toMatch(/batting\.csv: "\d+ rows rejected": expected at least one good row in batting\.csv or pitching\.csv \(--lenient left out every row; no store is written\) \[kindred\.input\.nothingLeft\]/);
+    expect(existsSync(storeDir)).toBe(false);
+  });
+});
+
 describe('kindred build --columns map.json', () => {
   it('reads a club export with its own file and column names', async () => {
     const club = join(dir, 'club');

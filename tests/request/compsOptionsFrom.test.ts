@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildStore } from '../../src/build/buildStore.ts';
 import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
-import { PLAUSIBLE_RANGES } from '../../src/ingest/plausibleRanges.ts';
+import { plausibleRange } from '../../src/ingest/fileColumns.ts';
 import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
 import type { ProfileStore } from '../../src/query/ProfileStore.ts';
 import { compsOptionsFrom } from '../../src/request/compsOptionsFrom.ts';
@@ -54,7 +54,7 @@ describe('targetFrom(store, request): want', () => {
     expect(() => want('obp=360')).toThrow(/obp=360 is not a plausible value/);
   });
   it('refuses a measurement outside the plausible range the roster is checked against', () => {
-    const r = PLAUSIBLE_RANGES.sprint_ft_s;
+    const r = plausibleRange('batting.csv', 'sprint_ft_s');
     expect(() => want(`sprint_ft_s=${r.max + 5}`)).toThrow(new RegExp(`expected ${r.min}\\.\\d to ${r.max}\\.\\d ft/s \\(the plausible range`));
   });
   it('refuses a number too long to read instead of answering with an empty pool', () => {

@@ -44,6 +44,7 @@ export function formatBuildSummary(s: BuildSummary): string {
   lines.push(`Rows rejected: ${s.rejected.toLocaleString('en-US')}${s.rejectsPath ? ` (every one with its reason in ${s.rejectsPath})` : ''}`);
   const groups = Object.entries(s.profiles).map(([g, n]) => `${g} ${n.toLocaleString('en-US')}`);
   lines.push(`Profiles: ${groups.join(', ')}`);
+  for (const notice of s.notices) lines.push(`Note: ${notice}`);
   const k = s.skipped;
   if (s.embedding) {
     const sizes = Object.entries(s.embedding.groups).map(([g, e]) => `${g} ${e.dim} (${e.seconds.toFixed(1)} s)`);
