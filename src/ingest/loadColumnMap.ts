@@ -1,8 +1,9 @@
 import { readFile } from 'node:fs/promises';
 import { z } from 'zod';
 import { KindredError } from '../errors/KindredError.ts';
-import { InputError, type InputIssue } from '../errors/InputError.ts';
+import { formatIssue, InputError, type InputIssue } from '../errors/InputError.ts';
 import { columnsOf, ROSTER_FILES, type RosterFile } from './fileColumns.ts';
+import { jsonKeyPositions, positionAt, type TextPosition } from './jsonKeyPositions.ts';
 
 /**
  * How a club's export differs from the canonical roster format: its file
@@ -13,11 +14,28 @@ export interface ColumnMap {
   readonly files: Readonly<Partial<Record<RosterFile, string>>>;
   /** Canonical file name -> canonical column -> the club's column name. */
   readonly columns: Readonly<Partial<Record<RosterFile, Readonly<Record<string, string>>>>>;
+  /** The map file and where each key sits in it, for errors found when the roster is read. */
+  readonly source?: ColumnMapSource;
+}
+
+export interface ColumnMapSource {
+  readonly path: string;
+  /** Key path (e.g. `files.fielding.csv`) -> its line and column in the file. */
+  readonly positions: ReadonlyMap<string, TextPosition>;
 }
 
 export const EMPTY_COLUMN_MAP: ColumnMap = { files: {}, columns: {} };
 
-const clubName = z.string().trim().min(1, 'expected a non-empty name');
+/** One problem of a column map: the key path, the offending value, what was expected. */
+export interface MapProblem {
+  readonly key: string;
+  readonly value: string;
+  readonly expected: string;
+  /** Where it is in the file when it is not the key's own position (a JSON syntax error). */
+  readonly at?: TextPosition;
+}
+
+const clubName = z.string().trim().min(1, 'a non-empty name');
 
 const columnMapSchema = z
   .object({
@@ -42,9 +60,10 @@ const columnMapSchema = z
 /**
  * Reads and checks a column map (`--columns map.json`):
  * `{ "files": { "batting.csv": "their_export.csv" }, "columns": { "batting.csv": { "PA": "plate_app" } } }`,
- * both parts optional. Unknown file or column keys, empty names and two
- * canonical columns mapped to one club column are refused with
- * `kindred.input.badColumnMap`, naming the key.
+ * both parts optional. Unknown file or column keys, empty names, two
+ * canonical columns mapped to one club column (also a club name that is
+ * another canonical column's own, unmapped name) are refused with
+ * `kindred.input.badColumnMap`, naming the key and its line and column.
  */
 export async function loadColumnMap(path: string): Promise<ColumnMap> {
   let text: string;
@@ -53,32 +72,35 @@ export async function loadColumnMap(path: string): Promise<ColumnMap> {
   } catch (cause) {
     throw new KindredError('kindred.input.missingFile', `${path}: cannot read the column map (${String(cause)})`, { path });
   }
+  const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   let json: unknown;
   try {
-    json = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    json = JSON.parse(body);
   } catch (cause) {
-    throw mapError(path, [{ key: '', message: `not valid JSON (${cause instanceof Error ? cause.message : String(cause)})` }]);
+    const message = cause instanceof Error ? cause.message : String(cause);
+    const offset = /position (\d+)/.exec(message)?.[1];
+    const at = positionAt(body, offset === undefined ? body.length : Number(offset));
+    throw mapError({ path, positions: new Map() }, [{ key: '', value: '', expected: `valid JSON (${message})`, at }]);
   }
+  const source: ColumnMapSource = { path, positions: jsonKeyPositions(body) };
   const parsed = columnMapSchema.safeParse(json);
   if (!parsed.success) {
     throw mapError(
-      path,
-      parsed.error.issues.map((issue) => {
+      source,
+      parsed.error.issues.flatMap((issue): MapProblem[] => {
         const at = issue.path.map(String).join('.');
-        const keys = issue.code === 'unrecognized_keys' ? issue.keys : [];
-        if (keys.length > 0) {
+        if (issue.code === 'unrecognized_keys') {
           const where = at === '' ? '' : `${at}.`;
           const known = at === '' ? ['files', 'columns'] : at === 'files' || at === 'columns' ? ROSTER_FILES : columnsOfKey(at);
-          return {
-            key: keys.map((k) => where + k).join(', '),
-            message: `unknown key (expected one of ${known.join(', ')})`,
-          };
+          const what = at === '' ? 'a known key' : at === 'files' || at === 'columns' ? 'a roster file' : `a column of ${at.slice('columns.'.length)}`;
+          return issue.keys.map((k) => ({ key: where + k, value: k, expected: `${what}: one of ${known.join(', ')}` }));
         }
-        return { key: at, message: issue.message };
+        if (issue.code === 'invalid_type') return [{ key: at, value: '', expected: `${issue.expected === 'object' ? 'an object of names' : 'a name as text'} (${issue.message})` }];
+        return [{ key: at, value: '', expected: issue.message }];
       }),
     );
   }
-  return toColumnMap(path, parsed.data);
+  return toColumnMap(source, parsed.data);
 }
 
 function columnsOfKey(at: string): readonly string[] {
@@ -86,10 +108,10 @@ function columnsOfKey(at: string): readonly string[] {
   return file === undefined ? [] : columnsOf(file);
 }
 
-function toColumnMap(path: string, data: z.infer<typeof columnMapSchema>): ColumnMap {
+function toColumnMap(source: ColumnMapSource, data: z.infer<typeof columnMapSchema>): ColumnMap {
   const files: Partial<Record<RosterFile, string>> = {};
   const columns: Partial<Record<RosterFile, Record<string, string>>> = {};
-  const problems: { key: string; message: string }[] = [];
+  const problems: MapProblem[] = [];
   for (const file of ROSTER_FILES) {
     const name = data.files?.[file];
     if (name !== undefined) files[file] = name;
@@ -101,35 +123,41 @@ function toColumnMap(path: string, data: z.infer<typeof columnMapSchema>): Colum
       if (club === undefined) continue;
       const earlier = seen.get(club);
       if (earlier !== undefined) {
-        problems.push({ key: `columns.${file}.${canonical}`, message: `"${club}" is already the column of ${earlier}` });
+        problems.push({ key: `columns.${file}.${canonical}`, value: club, expected: `a column of its own ("${club}" is already the column of ${earlier})` });
       }
       seen.set(club, canonical);
       renamed[canonical] = club;
+    }
+    // A club name that is another canonical column's own name, that column not mapped elsewhere: both would read it.
+    for (const [canonical, club] of Object.entries(renamed)) {
+      if (club === canonical || !columnsOf(file).includes(club) || renamed[club] !== undefined) continue;
+      problems.push({
+        key: `columns.${file}.${canonical}`, value: club,
+        expected: `a column of its own ("${club}" is where ${club} itself is read; map ${club} to another column too, or ${canonical} to its own)`,
+      });
     }
     columns[file] = renamed;
   }
   const clubFiles = new Map<string, RosterFile>();
   for (const [canonical, club] of Object.entries(files)) {
     const earlier = clubFiles.get(club);
-    if (earlier !== undefined) problems.push({ key: `files.${canonical}`, message: `"${club}" is already the file of ${earlier}` });
+    if (earlier !== undefined) problems.push({ key: `files.${canonical}`, value: club, expected: `a file of its own ("${club}" is already the file of ${earlier})` });
     const file = ROSTER_FILES.find((f) => f === canonical);
     if (file !== undefined) clubFiles.set(club, file);
   }
-  if (problems.length > 0) throw mapError(path, problems);
-  return { files, columns };
+  if (problems.length > 0) throw mapError(source, problems);
+  return { files, columns, source };
 }
 
-function mapError(path: string, problems: readonly { key: string; message: string }[]): InputError {
-  const issues: InputIssue[] = problems.map((p) => ({
-    code: 'kindred.input.badColumnMap',
-    file: path,
-    line: 0,
-    column: 0,
-    field: p.key,
-    value: '',
-    expected: p.message,
-  }));
-  const first = problems[0];
-  const summary = first === undefined ? `${path}: bad column map` : `${path}: bad column map: ${first.key === '' ? '' : `${first.key}: `}${first.message}`;
+/** A column map problem as an input issue located at its key (line 1 when the key cannot be found). */
+export function mapIssue(source: ColumnMapSource, p: MapProblem): InputIssue {
+  const at = p.at ?? source.positions.get(p.key) ?? { line: 1, column: 1 };
+  return { code: 'kindred.input.badColumnMap', file: source.path, line: at.line, column: at.column, field: p.key, value: p.value, expected: p.expected };
+}
+
+function mapError(source: ColumnMapSource, problems: readonly MapProblem[]): InputError {
+  const issues = problems.map((p) => mapIssue(source, p));
+  const first = issues[0];
+  const summary = first === undefined ? `${source.path}: bad column map` : `bad column map: ${formatIssue(first)}`;
   return new InputError(issues, summary);
 }

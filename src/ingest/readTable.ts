@@ -5,7 +5,7 @@ import { HeaderColumns, type Column } from './HeaderColumns.ts';
 import type { IssueLog } from './IssueLog.ts';
 import { RowReader } from './RowReader.ts';
 import { REQUIRED_FILES, type RosterFile } from './fileColumns.ts';
-import type { ColumnMap } from './loadColumnMap.ts';
+import { mapIssue, type ColumnMap } from './loadColumnMap.ts';
 import { streamCsv } from './streamCsv.ts';
 
 /** How often (in rows) progress is reported while a file is read. */
@@ -60,6 +60,13 @@ export async function readTable<F extends RosterFile>(
         code: 'kindred.input.missingFile', file: fileName, line: 0, column: 0, field: '', value: path,
         expected: `a file ${fileName} in the roster folder${renamed}`,
       });
+    } else if (columnMap.files[file] !== undefined || columnMap.columns[file] !== undefined) {
+      const key = columnMap.files[file] !== undefined ? `files.${file}` : `columns.${file}`;
+      const source = columnMap.source ?? { path: 'the column map', positions: new Map() };
+      log.fileProblem(mapIssue(source, {
+        key, value: fileName,
+        expected: `a file the roster folder has (the map names ${file} as ${fileName}, which is not in ${options.dir})`,
+      }));
     }
     return { present: false, fileName, rows: 0, ignored: [] };
   }

@@ -2,7 +2,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { InputError } from '../../src/errors/InputError.ts';
+import { formatIssue, InputError } from '../../src/errors/InputError.ts';
 import { loadColumnMap } from '../../src/ingest/loadColumnMap.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'kindred-map-'));
@@ -29,8 +29,9 @@ describe('loadColumnMap(path)', () => {
       files: { 'batting.csv': 'their_batting.csv' },
       columns: { 'batting.csv': { PA: 'plate_app' } },
     })));
-    expect(map).toEqual({ files: { 'batting.csv': 'their_batting.csv' }, columns: { 'batting.csv': { PA: 'plate_app' } } });
-    expect(await loadColumnMap(mapFile('{}'))).toEqual({ files: {}, columns: {} });
+    expect(map).toMatchObject({ files: { 'batting.csv': 'their_batting.csv' }, columns: { 'batting.csv': { PA: 'plate_app' } } });
+    expect(map.source?.positions.get('columns.batting.csv.PA')).toEqual({ line: 1, column: 72 });
+    expect(await loadColumnMap(mapFile('{}'))).toMatchObject({ files: {}, columns: {} });
   });
   it('refuses an unknown canonical column, naming the key', async () => {
     const err = await mapError(JSON.stringify({ columns: { 'batting.csv': { PAA: 'plate_app' } } }));
@@ -53,6 +54,27 @@ describe('loadColumnMap(path)', () => {
   });
   it('refuses text that is not JSON', async () => {
     const err = await mapError('{ files: ');
-    expect(err.message).toContain('not valid JSON');
+    expect(err.message).toContain('expected valid JSON');
+    expect(err.issues[0]).toMatchObject({ line: 1, column: 3 });
+  });
+  it('refuses a canonical column mapped to the column another canonical column reads (SO -> BB), at its line', async () => {
+    const err = await mapError('{\n  "columns": {\n    "batting.csv": { "SO": "BB" }\n  }\n}\n');
+    const issue = err.issues[0];
+    expect(issue).toMatchObject({ field: 'columns.batting.csv.SO', value: 'BB', line: 3, column: 22 });
+    expect(issue?.expected).toContain('where BB itself is read');
+  });
+  it('accepts swapping two columns (SO -> BB and BB -> SO): each reads a column of its own', async () => {
+    const map = await loadColumnMap(mapFile(JSON.stringify({ columns: { 'batting.csv': { SO: 'BB', BB: 'SO' } } })));
+    expect(map.columns['batting.csv']).toEqual({ SO: 'BB', BB: 'SO' });
+  });
+  it('words its errors as what was expected, located at a line and column, never "expected unknown key" or ":0:0:"', async () => {
+    const err = await mapError('{"columns": {"batting.csv": {"PAA": "x"}}}');
+    const text = formatIssue(err.issues[0] ?? { code: 'kindred.input.badColumnMap', file: '', line: 0, column: 0, field: '', value: '', expected: '' });
+    expect(text).toMatch(/map\d+\.json:1:30: columns\.batting\.csv\.PAA "PAA": expected a column of batting\.csv: one of player_id, /);
+    expect(text).not.toContain('expected unknown key');
+    const bad = await mapError('{\n  "files": \n}');
+    expect(bad.issues[0]?.line).toBe(3);
+    expect(formatIssue(bad.issues[0] ?? { code: 'kindred.input.badColumnMap', file: '', line: 0, column: 0, field: '', value: '', expected: '' })).not.toContain(':0:0:');
   });
 });
+

@@ -177,6 +177,15 @@ describe('readRoster with a column map', () => {
     expect(roster.players.get('p2')?.name).toBe('Bo Sample');
     expect(roster.rowsRead['batting.csv']).toBe(1);
   });
+  it('refuses a map that names a file the roster folder lacks, at the key and its line (not ignored)', async () => {
+    const dir = rosterDir();
+    const mapPath = join(dir, 'map.json');
+    writeFileSync(mapPath, '{\n  "files": {\n    "fielding.csv": "their_fielding.csv"\n  }\n}\n');
+    const { issues } = await strictIssues(dir, { columnMap: await loadColumnMap(mapPath) });
+    const issue = issues.find((i) => i.code === 'kindred.input.badColumnMap');
+    expect(issue).toMatchObject({ file: mapPath, line: 3, column: 5, field: 'files.fielding.csv', value: 'their_fielding.csv' });
+    expect(issue?.expected).toContain('not in');
+  });
   it("reports a mapped column that is absent under the club's name and the canonical name", async () => {
     const dir = rosterDir({ 'their_batting.csv': csv('batting', [{}]) });
     const mapPath = join(dir, 'map.json');
