@@ -1,5 +1,7 @@
 import type { InputIssue } from '../errors/InputError.ts';
+import { findControlCharacter, showControlCharacters } from '../text/controlCharacters.ts';
 import { columnSpec, type RosterFile } from './fileColumns.ts';
+import { controlExpected } from './RowReader.ts';
 
 /** A canonical column located in a file's header (`index` -1 when the optional column is absent). */
 export interface Column<N extends string = string> {
@@ -35,6 +37,10 @@ export class HeaderColumns<F extends RosterFile> {
     }
     this.header.forEach((name, i) => {
       if (name === '') return;
+      if (findControlCharacter(name) >= 0) {
+        this.issues.push(this.headerIssue('kindred.input.controlCharacter', i + 1, '', showControlCharacters(name), controlExpected(name)));
+        return;
+      }
       const first = this.positions.get(name);
       if (first === undefined) {
         this.positions.set(name, i);

@@ -1,6 +1,7 @@
 import type { ErrorCode } from '../errors/KindredError.ts';
 import type { InputIssue } from '../errors/InputError.ts';
 import type { Column } from './HeaderColumns.ts';
+import { findControlCharacter, showControlCharacters } from '../text/controlCharacters.ts';
 import { parseThirds, THIRDS_EXPECTED } from './parseThirds.ts';
 
 const WHOLE = /^\s*\d+(?:\.0*)?\s*$/;
@@ -53,12 +54,16 @@ export class RowReader {
     return text;
   }
 
+  /** Text without control or bidi characters (a cell holding one is reported; '' is returned). */
   text(col: Column): string {
-    return this.raw(col) ?? '';
+    return this.textOpt(col) ?? '';
   }
 
   textOpt(col: Column): string | undefined {
-    return this.raw(col);
+    const text = this.raw(col);
+    if (text === undefined || findControlCharacter(text) < 0) return text;
+    this.report('kindred.input.controlCharacter', col, showControlCharacters(text), controlExpected(text));
+    return undefined;
   }
 
   count(col: Column): number {
@@ -160,4 +165,11 @@ export class RowReader {
     const value = col.index < 0 ? '' : (this.cells[col.index] ?? '').trim();
     this.report('kindred.input.inconsistent', col, value, `${lhsName} <= ${rhsName} (here ${lhs} > ${rhs})`);
   }
+}
+
+/** What a text cell holding a control or bidi character was expected to be, naming the character. */
+export function controlExpected(text: string): string {
+  const i = findControlCharacter(text);
+  const code = (text.codePointAt(i) ?? 0).toString(16).toUpperCase().padStart(4, '0');
+  return `text without control or bidirectional characters (character ${i + 1} is U+${code})`;
 }

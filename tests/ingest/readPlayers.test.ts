@@ -28,6 +28,19 @@ describe('readRoster: players.csv', () => {
     expect(roster.players.get('p1')?.birthDate).toBe('0001-01-01');
     expect(roster.players.get('p2')?.birthDate).toBe('2000-02-29');
   });
+  it('refuses a name holding an ESC sequence or a bidi override (U+202E), at file:line:column, the character shown as its code point', async () => {
+    const issues = await playerIssues([{ name: 'Ann\u001b]0;owned\u0007' }, { player_id: 'p2', name: 'Bo \u202eelpmaS' }, PLAYER_ROWS[2] ?? {}]);
+    const found = issues.filter((i) => i.code === 'kindred.input.controlCharacter');
+    expect(found.map((i) => [i.file, i.line, i.column, i.value])).toEqual([
+      ['players.csv', 2, col('players', 'name'), 'Ann<U+001B>]0;owned<U+0007>'],
+      ['players.csv', 3, col('players', 'name'), 'Bo <U+202E>elpmaS'],
+    ]);
+    expect(found[0]?.expected).toContain('character 4 is U+001B');
+  });
+  it('refuses a header name holding a control character', async () => {
+    const bad = (await strictIssues(rosterDir({ 'players.csv': 'player_id,name,x\u001b[2J\np1,Ann,1\n' }))).issues;
+    expectOneIssue(bad, { code: 'kindred.input.controlCharacter', file: 'players.csv', line: 1, column: 3, value: 'x<U+001B>[2J' });
+  });
   it('refuses bats not L, R or S', async () => {
     const issues = await playerIssues([{ bats: 'X' }, ...PLAYER_ROWS.slice(1)]);
     expectOneIssue(issues, { code: 'kindred.input.badValue', file: 'players.csv', line: 2, column: col('players', 'bats'), value: 'X' });
