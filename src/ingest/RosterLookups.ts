@@ -34,6 +34,8 @@ export class RosterLookups {
     readonly levels: readonly string[],
     levelsFile: string | undefined,
     private readonly seasons: SeasonSpan = defaultSeasonSpan(),
+    /** False when players.csv could not be read (its problem is reported once; ids are not checked against it). */
+    private readonly playersReadable = true,
   ) {
     this.levelSet = new Set(levels);
     const source = levelsFile === undefined
@@ -45,7 +47,7 @@ export class RosterLookups {
   /** Reads a player_id that must be in players.csv. */
   player(row: RowReader, col: Column): string {
     const id = row.text(col);
-    if (id === '' || this.players.has(id)) return id;
+    if (id === '' || this.players.has(id) || !this.playersReadable) return id;
     const rejectedAt = this.rejectedPlayers.get(id);
     const expected = rejectedAt === undefined
       ? `a player_id listed in ${this.playersFile}`

@@ -11,6 +11,8 @@ export interface PlayersRead {
   readonly fileName: string;
   readonly rows: number;
   readonly ignored: readonly string[];
+  /** False when players.csv could not be read through: season rows are then not checked against it. */
+  readonly readable: boolean;
 }
 
 /** Reads players.csv as its column table says (playersColumns.ts); one row per player_id. */
@@ -33,5 +35,5 @@ export async function readPlayers(options: TableOptions): Promise<PlayersRead> {
       players.set(playerId, reader.record(fields));
     };
   });
-  return { players, rejectedAt, fileName: read.fileName, rows: read.rows, ignored: read.ignored };
+  return { players, rejectedAt, fileName: read.fileName, rows: read.rows, ignored: read.ignored, readable: read.readable };
 }

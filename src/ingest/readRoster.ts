@@ -47,7 +47,7 @@ export async function readRoster(dir: string, options: ReadRosterOptions = {}): 
   const levels = await readLevels(table);
   const players = await readPlayers(table);
   const lookups = new RosterLookups(
-    players.players, players.rejectedAt, players.fileName, levels.levels, levels.file, options.seasons ?? defaultSeasonSpan(),
+    players.players, players.rejectedAt, players.fileName, levels.levels, levels.file, options.seasons ?? defaultSeasonSpan(), players.readable,
   );
   const batting = await readBatting(table, lookups);
   const fielding = await readFielding(table, lookups);
@@ -59,8 +59,8 @@ export async function readRoster(dir: string, options: ReadRosterOptions = {}): 
   }
 
   const reads: readonly [string, TableRead][] = [
-    ['levels.csv', { present: levels.file !== undefined, fileName: levels.file ?? 'levels.csv', rows: levels.rows, ignored: levels.ignored }],
-    ['players.csv', { present: true, fileName: players.fileName, rows: players.rows, ignored: players.ignored }],
+    ['levels.csv', { present: levels.file !== undefined, fileName: levels.file ?? 'levels.csv', rows: levels.rows, ignored: levels.ignored, readable: true }],
+    ['players.csv', { present: true, fileName: players.fileName, rows: players.rows, ignored: players.ignored, readable: players.readable }],
     ['batting.csv', batting],
     ['fielding.csv', fielding],
     ['pitching.csv', pitching],

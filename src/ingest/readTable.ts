@@ -35,6 +35,8 @@ export interface TableRead {
   readonly fileName: string;
   readonly rows: number;
   readonly ignored: readonly string[];
+  /** False when the file could not be read through (missing, header refused, CSV syntax or encoding). */
+  readonly readable: boolean;
 }
 
 /**
@@ -68,7 +70,7 @@ export async function readTable<F extends RosterFile>(
         expected: `a file the roster folder has (the map names ${file} as ${fileName}, which is not in ${options.dir})`,
       }));
     }
-    return { present: false, fileName, rows: 0, ignored: [] };
+    return { present: false, fileName, rows: 0, ignored: [], readable: false };
   }
 
   const row = new RowReader(fileName);
@@ -125,7 +127,7 @@ export async function readTable<F extends RosterFile>(
     if (issue !== undefined) log.fileProblem(issue);
   }
   onProgress?.(fileName, rows);
-  return { present: true, fileName, rows, ignored };
+  return { present: true, fileName, rows, ignored, readable: handle !== undefined && syntax === undefined };
 }
 
 async function isFile(path: string): Promise<boolean> {

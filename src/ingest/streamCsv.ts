@@ -1,6 +1,7 @@
 import { createReadStream } from 'node:fs';
 import { parse, type CsvError } from 'csv-parse';
 import type { InputIssue } from '../errors/InputError.ts';
+import { EncodingProblem, Utf8Check } from './Utf8Check.ts';
 
 /** Longest record accepted (bytes): bounds memory on an unterminated quote. */
 export const MAX_RECORD_BYTES = 1 << 20;
@@ -16,7 +17,9 @@ export interface CsvSink {
  * Streams a comma-separated file into a sink: records as arrays of strings
  * (no casting), BOM dropped, empty lines skipped, ragged rows passed on for
  * the caller to report. Resolves with the number of data records, or with a
- * `kindred.input.csvSyntax` issue when the file cannot be parsed further.
+ * `kindred.input.csvSyntax` issue when the file cannot be parsed further, or
+ * a `kindred.input.badEncoding` issue (one, with its line) when the file is
+ * not UTF-8 (see Utf8Check).
  */
 export function streamCsv(path: string, fileName: string, sink: CsvSink): Promise<{ rows: number; syntax?: InputIssue }> {
   return new Promise((resolve, reject) => {
@@ -31,6 +34,7 @@ export function streamCsv(path: string, fileName: string, sink: CsvSink): Promis
       max_record_size: MAX_RECORD_BYTES,
     });
     const input = createReadStream(path);
+    const check = new Utf8Check();
     let rows = 0;
     let seenHeader = false;
     let stopped = false;
@@ -39,9 +43,20 @@ export function streamCsv(path: string, fileName: string, sink: CsvSink): Promis
       if (stopped) return;
       stopped = true;
       input.destroy();
+      check.destroy();
       parser.destroy();
       resolve(syntax === undefined ? { rows } : { rows, syntax });
     };
+    check.on('error', (err) => {
+      if (err instanceof EncodingProblem) {
+        finish({ code: 'kindred.input.badEncoding', file: fileName, line: err.line, column: 0, field: '', value: err.value, expected: err.expected });
+      } else if (!stopped) {
+        stopped = true;
+        input.destroy();
+        parser.destroy();
+        reject(err);
+      }
+    });
     input.on('error', (err) => {
       if (!stopped) {
         stopped = true;
@@ -92,7 +107,7 @@ export function streamCsv(path: string, fileName: string, sink: CsvSink): Promis
         finish();
       }
     });
-    input.pipe(parser);
+    input.pipe(check).pipe(parser);
   });
 }
 

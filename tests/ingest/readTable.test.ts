@@ -1,6 +1,8 @@
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { readRoster } from '../../src/ingest/readRoster.ts';
-import { col, csv, expectOneIssue, removeRosterDirs, rosterDir, strictIssues } from './rosterFixture.ts';
+import { col, csv, expectOneIssue, PLAYER_ROWS, removeRosterDirs, rosterDir, strictIssues } from './rosterFixture.ts';
 
 afterAll(removeRosterDirs);
 
@@ -82,3 +84,38 @@ describe('readRoster: file shape', () => {
     expect(seen).toEqual([['players.csv', 3], ['batting.csv', 2]]);
   });
 });
+
+/** A roster whose players.csv holds the given bytes. */
+function playersBytes(bytes: Buffer): string {
+  const dir = rosterDir();
+  writeFileSync(join(dir, 'players.csv'), bytes);
+  return dir;
+}
+
+// Sources: RFC 3629 (UTF-8: 0xE9 alone is not a valid sequence), the Unicode Standard on UTF-16 and its
+// byte order mark (FF FE little-endian, FE FF big-endian).
+describe('readRoster: text encoding', () => {
+  it('refuses invalid UTF-8 with one error naming the file and line (Latin-1 "é" as byte E9), not a replacement character', async () => {
+    const text = Buffer.concat([Buffer.from('player_id,name\np1,Ann Example\np2,Ren'), Buffer.from([0xe9]), Buffer.from('e Sample\np3,Cy\n')]);
+    const { issues } = await strictIssues(playersBytes(text));
+    const issue = expectOneIssue(issues, { code: 'kindred.input.badEncoding', file: 'players.csv', line: 3, column: 0, value: 'bytes E9 65 20 53' });
+    expect(issue.expected).toContain('UTF-8');
+    expect(issues).toHaveLength(1);
+  });
+  it.each([
+    ['with a byte order mark (little-endian)', Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(csv('players', PLAYER_ROWS), 'utf16le')]), 'little-endian'],
+    ['without a byte order mark (little-endian)', Buffer.from(csv('players', PLAYER_ROWS), 'utf16le'), 'little-endian'],
+    ['without a byte order mark (big-endian)', Buffer.from(csv('players', PLAYER_ROWS), 'utf16le').swap16(), 'big-endian'],
+  ])('refuses UTF-16 %s with one line saying the encoding', async (_what, bytes, kind) => {
+    const { issues } = await strictIssues(playersBytes(bytes));
+    expect(issues.map((i) => [i.code, i.file, i.line])).toEqual([['kindred.input.badEncoding', 'players.csv', 1]]);
+    expect(issues[0]?.expected).toContain(`UTF-16, ${kind}`);
+  });
+  it('reads multi-byte UTF-8 names, also when a character is split across read chunks (64 KiB)', async () => {
+    const names = Array.from({ length: 8000 }, (_, i) => `p${i + 1},Zoë Ñandú 山田 ${i}`);
+    const roster = await readRoster(playersBytes(Buffer.from(['player_id,name', ...names].join('\n') + '\n')));
+    expect(roster.players.size).toBe(8000);
+    expect(roster.players.get('p7999')?.name).toBe('Zoë Ñandú 山田 7998');
+  });
+});
+
