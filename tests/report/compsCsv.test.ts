@@ -8,7 +8,7 @@ const result: CompsResult = {
     kind: 'player', player_id: '=p1', name: 'Ann Example', season: 2021, level: 'AA', position: 'C', group: 'C',
     age: 23, profile: { obp: 0.35 }, k: 1, method: 'exact', space: 'input',
   },
-  pool: { group_size: 2, eligible: 1, filters: {}, weights: { obp: 1 } },
+  pool: { group_size: 2, eligible: 1, filters: {}, weights: { obp: 1 }, preset: 'balanced', family_shares: { discipline: 1 } },
   comps: [{
     rank: 1, player_id: 'p2', name: '=HYPERLINK("http://example.invalid","click")', season: 2020, level: '+AA',
     position: 'C', age: 24, likeness: 90, distance: 0.4, coverage: 1, alike: ['obp'], apart: [],
