@@ -45,6 +45,9 @@ export type ErrorCode =
   | 'kindred.query.unknownDimension'
   | 'kindred.query.emptyPool'
   | 'kindred.query.badTarget'
+  // serving
+  | 'kindred.serve.portInUse'
+  | 'kindred.serve.listenFailed'
   // usage
   | 'kindred.usage.badOption'
   | 'kindred.usage.missingArgument';

@@ -9,6 +9,7 @@ export type HttpErrorCode =
   | 'kindred.http.badPath'
   | 'kindred.http.methodNotAllowed'
   | 'kindred.http.bodyTooLarge'
+  | 'kindred.http.aborted'
   | 'kindred.http.pageNotBuilt'
   | 'kindred.http.internal';
 

@@ -12,6 +12,7 @@ import type { LoadedStore } from './LoadedStore.ts';
 import type { Endpoint } from './Endpoint.ts';
 import { API_ENDPOINTS } from './apiEndpoints.ts';
 import { cacheKey } from './AnswerCache.ts';
+import { KindredError } from '../errors/KindredError.ts';
 
 /** Where `npm run build:web` writes the page. */
 export const DEFAULT_WEB_ROOT = fileURLToPath(new URL('../web/dist', import.meta.url));
@@ -26,6 +27,13 @@ export interface ServerLimits {
   /** node:http requestTimeout: time to receive the whole request. */
   readonly requestTimeoutMs: number;
   readonly keepAliveTimeoutMs: number;
+  /**
+   * Socket inactivity before the server closes it (node:http server.timeout): also a connection that
+   * never sends a request, which headersTimeout does not close.
+   */
+  readonly idleTimeoutMs: number;
+  /** Open connections at most (node:http maxConnections); sockets above it are closed at once. */
+  readonly maxConnections: number;
 }
 
 export const DEFAULT_LIMITS: ServerLimits = {
@@ -34,6 +42,8 @@ export const DEFAULT_LIMITS: ServerLimits = {
   headersTimeoutMs: 10_000,
   requestTimeoutMs: 30_000,
   keepAliveTimeoutMs: 5_000,
+  idleTimeoutMs: 30_000,
+  maxConnections: 512,
 };
 
 export interface ServerOptions {
@@ -94,6 +104,8 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
     },
   );
   server.maxHeadersCount = 100;
+  server.maxConnections = limits.maxConnections;
+  server.timeout = limits.idleTimeoutMs;
 
   async function handle(req: IncomingMessage, res: ServerResponse): Promise<void> {
     for (const [k, v] of Object.entries(SECURITY_HEADERS)) res.setHeader(k, v);
@@ -142,9 +154,10 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
   }
 
   await new Promise<void>((resolve, reject) => {
-    server.once('error', reject);
+    const failed = (e: Error): void => reject(listenError(e, options.host ?? '127.0.0.1', options.port ?? 8080));
+    server.once('error', failed);
     server.listen(options.port ?? 8080, options.host ?? '127.0.0.1', () => {
-      server.off('error', reject);
+      server.off('error', failed);
       resolve();
     });
   });
@@ -166,6 +179,16 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
         server.closeAllConnections();
       }),
   };
+}
+
+/** Why the server could not listen, in one line (a port in use is the usual case). */
+function listenError(e: Error, host: string, port: number): Error {
+  const code = 'code' in e ? e.code : undefined;
+  const where = `${host.includes(':') ? `[${host}]` : host}:${port}`;
+  if (code === 'EADDRINUSE') return new KindredError('kindred.serve.portInUse', `${where} is already in use (another server is listening there): choose another port`, { host, port });
+  if (code === 'EACCES') return new KindredError('kindred.serve.listenFailed', `not allowed to listen on ${where} (ports below 1024 need privileges): choose another port`, { host, port });
+  if (code === 'EADDRNOTAVAIL' || code === 'ENOTFOUND') return new KindredError('kindred.serve.listenFailed', `cannot listen on ${where}: ${host} is not an address of this machine`, { host, port });
+  return e;
 }
 
 /** The path of a request target, without its query string (for log lines). */

@@ -59,6 +59,7 @@ export function errorResponse(e: unknown): ErrorResponse {
     headers,
     unexpected,
   });
+  if (e instanceof HttpError && e.code === 'kindred.http.aborted') return { ...make(e.status, e.code, e.message, e.headers), logLine: e.message };
   if (e instanceof HttpError) return make(e.status, e.code, e.message, e.headers);
   if (e instanceof ParameterError) return { ...make(400, e.code, apiMessage(e)), body: { error: { code: e.code, message: apiMessage(e), parameter: e.parameter } } };
   if (e instanceof UsageError) return make(400, e.code, e.message);

@@ -32,3 +32,24 @@ describe('cacheKey(path, query)', () => {
     expect(cacheKey('/api/comps', new URLSearchParams('level=A%2B'))).not.toBe(cacheKey('/api/comps', new URLSearchParams('level=A+')));
   });
 });
+
+describe('AnswerCache limits in bytes', () => {
+  it('bounds the cache in bytes, not only in entries: 40 answers of 1 MB stay within the byte cap', () => {
+    const c = new AnswerCache(1000, { maxBytes: 4 * 1024 * 1024, maxEntryBytes: 2 * 1024 * 1024 });
+    const big = 'x'.repeat(1024 * 1024);
+    for (let i = 0; i < 40; i++) c.set(`k${i}`, big);
+    expect(c.bytes).toBeLessThanOrEqual(4 * 1024 * 1024);
+    expect(c.size).toBe(3);
+    expect(c.get('k39')).toBe(big);
+    expect(c.get('k0')).toBeUndefined();
+  });
+  it('never keeps an answer larger than the entry cap, and counts bytes as UTF-8', () => {
+    const c = new AnswerCache(10, { maxBytes: 1000, maxEntryBytes: 100 });
+    c.set('a', 'y'.repeat(200));
+    expect([c.get('a'), c.size, c.bytes]).toEqual([undefined, 0, 0]);
+    c.set('b', '\u00e9'.repeat(10));
+    expect(c.bytes).toBe(1 + 20);
+    c.set('b', 'z');
+    expect(c.bytes).toBe(2);
+  });
+});
