@@ -62,7 +62,7 @@ export interface ServerOptions {
   readonly cacheEntries?: number;
 }
 
-/** An answer is about 20 KB: some 20 MB at most. */
+/** An answer is about 20 KB; the cache is also bounded in bytes (AnswerCache's DEFAULT_CACHE_BYTES). */
 export const DEFAULT_CACHE_ENTRIES = 1000;
 
 export interface RunningServer {

@@ -56,6 +56,25 @@ describe('kindred serve', () => {
     }
   });
 
+  it('stops when started by npm exec (`npx kindred serve &`) and npm is killed: npm does not pass the signal on, so the server would keep the port', async () => {
+    const bin = join(process.cwd(), 'bin', 'kindred.js');
+    // A shell between, as npm exec puts one (`; :` keeps sh from replacing itself with node).
+    const wrapper = spawn('sh', ['-c', `"${process.execPath}" "${bin}" serve --store "${storeDir}" --port 0; :`], {
+      env: { ...process.env, npm_command: 'exec' },
+    });
+    try {
+      const [, url = ''] = await waitFor(wrapper.stdout, /Kindred is serving (http:\/\/127\.0\.0\.1:\d+\/)/);
+      expect((await fetch(new URL('/api/info', url))).status).toBe(200);
+      const stopped = waitFor(wrapper.stderr, /the npm process that started the server has ended: stopping/, 10_000);
+      wrapper.kill('SIGKILL');
+      await stopped;
+      await new Promise((r) => setTimeout(r, 500));
+      await expect(fetch(new URL('/api/info', url))).rejects.toThrow();
+    } finally {
+      if (wrapper.exitCode === null) wrapper.kill('SIGKILL');
+    }
+  });
+
   it('refuses a bad port with exit code 2 and a store that is not there with exit code 1', async () => {
     const a = captureIo();
     expect(await main(['serve', '--store', storeDir, '--port', '70000'], a.io)).toBe(2);

@@ -20,12 +20,32 @@ export function cacheSize(value: string): number {
 export interface ServeSignals {
   /** Registers a handler; returns a function that removes it. */
   on(signal: 'SIGHUP' | 'SIGINT' | 'SIGTERM', handler: () => void): () => void;
+  /**
+   * Calls `handler` once if the server was started by npm exec (`npx kindred serve`) and that npm
+   * process ends: npm does not pass a signal on to the command it started, so `kill <npx pid>` would
+   * otherwise leave the server running and holding its port. Returns a function that stops watching.
+   */
+  onLauncherGone(handler: () => void): () => void;
 }
+
+/** How often the server checks that the npm process that started it is still there. */
+const LAUNCHER_CHECK_MS = 500;
 
 const processSignals: ServeSignals = {
   on(signal, handler) {
     process.on(signal, handler);
     return () => process.off(signal, handler);
+  },
+  onLauncherGone(handler) {
+    if (process.env.npm_command !== 'exec') return () => {};
+    const parent = process.ppid;
+    const timer = setInterval(() => {
+      if (process.ppid === parent) return;
+      clearInterval(timer);
+      handler();
+    }, LAUNCHER_CHECK_MS);
+    timer.unref();
+    return () => clearInterval(timer);
   },
 };
 
@@ -65,6 +85,10 @@ export function serveCommand(io: CliIo, signals: ServeSignals = processSignals):
           }),
           signals.on('SIGINT', stop),
           signals.on('SIGTERM', stop),
+          signals.onLauncherGone(() => {
+            io.stderr.write('the npm process that started the server has ended: stopping\n');
+            stop();
+          }),
         );
       });
       io.stderr.write('stopped\n');
