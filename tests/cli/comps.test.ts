@@ -192,10 +192,11 @@ describe('usage errors exit 2, missing stores exit 1', () => {
 });
 
 describe('kindred dims', () => {
-  it('lists the catcher dimensions with units and direction', async () => {
+  it('lists the catcher dimensions with labels, units and direction, within 100 columns', async () => {
     const out = await runCli('dims', '--position', 'C');
     expect(out.code).toBe(0);
-    expect(out.stdout).toMatch(/pop_2b_s\s+│?\s*s\s+│?\s*lower/);
+    expect(out.stdout).toMatch(/pop_2b_s\s+│?\s*Pop 2B\s+│?\s*s\s+│?\s*lower/);
+    for (const line of out.stdout.split('\n')) expect([...line].length).toBeLessThanOrEqual(100);
     expect(out.stdout).not.toContain('fb_mph');
   });
 });

@@ -15,7 +15,7 @@ function familyLines(dims: readonly DimensionInfo[]): string[] {
   ];
 }
 
-/** `kindred dims`: the dimensions of each position group with units, direction and meaning (no store needed). */
+/** `kindred dims`: the dimensions of each position group with labels (accepted wherever names are), units, direction and meaning (no store needed). */
 export function dimsCommand(io: CliIo): Command {
   const cmd = new Command('dims').description('list the profile dimensions with units, direction and meaning');
   addRequestOptions(cmd, 'dims');
@@ -28,12 +28,12 @@ export function dimsCommand(io: CliIo): Command {
     }
     for (const [g, list] of Object.entries(dims)) {
       const t = new Table({
-        head: ['Dimension', 'Unit', 'Better', 'Meaning'],
-        colWidths: [16, 22, 8, 50],
+        head: ['Dimension', 'Label', 'Unit', 'Better', 'Meaning'],
+        colWidths: [15, 12, 17, 8, 40],
         wordWrap: true,
         style: { head: [], border: [] },
       });
-      for (const d of list) t.push([d.name, d.unit, d.direction, d.meaning]);
+      for (const d of list) t.push([d.name, d.label, d.unit, d.direction, d.meaning]);
       io.stdout.write(`${g} (${g === 'IF' ? '1B, 2B, 3B, SS' : g === 'OF' ? 'LF, CF, RF' : g})\n${t.toString()}\n${familyLines(list).join('\n')}\n\n`);
     }
   });
