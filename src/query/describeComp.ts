@@ -44,6 +44,8 @@ export function describeComp(q: PreparedQuery, s: ScoredRow, rank: number, setti
     level: store.levels[valueAt(g.level, s.row)] ?? '',
     position: g.position[s.row] ?? 'DH',
     age: Number.isNaN(age) ? null : age,
+    sample: valueAt(g.sample, s.row),
+    sample_unit: g.group === 'SP' || g.group === 'RP' ? 'BF' : 'PA',
     likeness: round(likeness(distance, settings.likenessWeight ?? (emb ? emb.pairScale : q.targetWeight)), 1),
     distance: round(distance, 4),
     coverage: round(s.coverage, 3),

@@ -32,6 +32,9 @@ export interface Comp {
   readonly level: string;
   readonly position: Position;
   readonly age: number | null;
+  /** Playing time of the comp's season: plate appearances (hitters) or batters faced (pitchers). */
+  readonly sample: number;
+  readonly sample_unit: 'PA' | 'BF';
   /** 0 to 100, 100 for an identical profile; 100 * exp(-distance^2 / (2 * W)), W the total weight in play. */
   readonly likeness: number;
   readonly distance: number;

@@ -35,11 +35,11 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     return lines.join('\n') + '\n';
   }
   const list = new Table({
-    head: ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', 'Like', 'Cov', 'Alike / apart'],
+    head: ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', result.comps[0]?.sample_unit ?? 'PA', 'Like', 'Cov', 'Alike / apart'],
     chars: PLAIN,
     style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
-    colAligns: ['right', 'left', 'left', 'left', 'left', 'right', 'right', 'right', 'left'],
-    colWidths: [3, 25, 7, 5, 4, 4, 5, 5, 32],
+    colAligns: ['right', 'left', 'left', 'left', 'left', 'right', 'right', 'right', 'right', 'left'],
+    colWidths: [3, 20, 7, 5, 4, 4, 5, 5, 5, 32],
     wordWrap: true,
   });
   const byName = new Map(dims.map((d) => [d.name, d]));
@@ -52,6 +52,7 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
       c.level,
       c.position,
       c.age === null ? '-' : String(c.age),
+      String(c.sample),
       c.likeness.toFixed(0),
       `${Math.round(c.coverage * 100)}%`,
       `= ${labels(c.alike)}\n\u2260 ${labels(c.apart)}`,

@@ -98,7 +98,7 @@ describe('kindred comps <player> --format json', () => {
     expect(out.code).toBe(0);
     const lines = out.stdout.trim().split('\n');
     expect(lines).toHaveLength(5);
-    expect(lines[0]).toMatch(/^target_player_id,target_season,target_level,rank,player_id,name,season,level,position,age,likeness/);
+    expect(lines[0]).toMatch(/^target_player_id,target_season,target_level,rank,player_id,name,season,level,position,age,sample,sample_unit,likeness/);
     expect(lines[0]).toContain('pop_2b_s_grade');
   });
 });
@@ -218,5 +218,23 @@ describe('kindred comps: alike and apart agree with the grade grid', () => {
       const shares = c.apart.map((n) => c.dimensions.find((x) => x.name === n)?.share ?? 0);
       expect(shares).toEqual([...shares].sort((a, b) => b - a));
     }
+  });
+});
+
+describe('kindred comps: playing time of every comp', () => {
+  it('shows PA for hitters in JSON, CSV and the table, the season sample the store holds', async () => {
+    const json = await runCli('comps', catcher.id, '--store', store, '--format', 'json');
+    const result = compsResultSchema.parse(JSON.parse(json.stdout));
+    const c = profiles.groups.get('C');
+    for (const comp of result.comps) {
+      expect(comp.sample_unit).toBe('PA');
+      const p = profiles.players.findIndex((x) => x.playerId === comp.player_id);
+      const rows = Array.from({ length: c?.n ?? 0 }, (_, i) => i).filter((i) => c?.player[i] === p && c.season[i] === comp.season);
+      expect(rows.map((i) => c?.sample[i])).toContain(comp.sample);
+    }
+    const csv = await runCli('comps', catcher.id, '--store', store, '--format', 'csv');
+    expect(csv.stdout.split('\n')[0]).toContain(',age,sample,sample_unit,likeness,');
+    const table = await runCli('comps', catcher.id, '--store', store);
+    expect(table.stdout).toMatch(/ Age\s+PA\s+Like /);
   });
 });

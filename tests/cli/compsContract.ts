@@ -25,6 +25,8 @@ export const compSchema = z.object({
   level: z.string(),
   position,
   age: z.number().int().nullable(),
+  sample: z.number().int().nonnegative(),
+  sample_unit: z.enum(['PA', 'BF']),
   likeness: z.number().min(0).max(100),
   distance: z.number().nonnegative(),
   coverage: z.number().min(0).max(1),
