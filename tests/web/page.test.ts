@@ -163,7 +163,7 @@ describe('the comps view', () => {
     expect(csvDownload.suggestedFilename()).toBe('kindred-comps.csv');
     const csv = await readFile(await csvDownload.path(), 'utf8');
     const lines = csv.trimEnd().split('\r\n');
-    expect(lines[0]).toBe('rank,player_id,name,season,level,position,age,likeness,distance,coverage,alike,apart');
+    expect(lines[0]).toBe('rank,player_id,name,season,level,position,age,sample,sample_unit,likeness,distance,coverage,alike,apart');
     expect(lines.length).toBe(6);
 
     const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
@@ -264,7 +264,7 @@ describe('the cheaper comps view', () => {
     expect(await page.locator('#extra-chart svg .mark-symbol.role-mark path').count()).toBe(expected.comps.length);
     const [csvDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-csv')]);
     const header = (await readFile(await csvDownload.path(), 'utf8')).split('\r\n')[0];
-    expect(header).toBe('rank,player_id,name,season,level,position,age,likeness,distance,coverage,salary (USD),likeness per $M,frontier,alike,apart');
+    expect(header).toBe('rank,player_id,name,season,level,position,age,sample,sample_unit,likeness,distance,coverage,salary (USD),likeness per $M,frontier,alike,apart');
     await page.screenshot({ path: join(ARTIFACTS, 'cheaper.png'), fullPage: true });
   });
 });
