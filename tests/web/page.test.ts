@@ -1,5 +1,5 @@
 /**
- * The page end to end in headless Chromium (Debian's /usr/bin/chromium driven by playwright-core):
+ * The page end to end in headless Chromium (a system Chromium, or the npm one; see findBrowser) driven by playwright-core:
  * search a player, run each job, check the table, the charts and the exports against the API.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -12,9 +12,9 @@ import type { ProfileStore } from '../../src/query/ProfileStore.ts';
 import type { CompsResult } from '../../src/query/types.ts';
 import { buildDemoStore, tempDir } from '../server/serverFixture.ts';
 import { ensureWebBuilt } from './ensureWebBuilt.ts';
+import { findBrowser } from '../helpers/findBrowser.ts';
 
 const ARTIFACTS = join(process.cwd(), 'tests', '.artifacts');
-const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run', '--disable-sync', '--disable-quic'];
 
 let srv: RunningServer;
 let browser: Browser;
@@ -85,7 +85,8 @@ beforeAll(async () => {
   await Promise.all([ensureWebBuilt(), buildDemoStore(storeDir), mkdir(ARTIFACTS, { recursive: true })]);
   store = await loadProfileStore(storeDir);
   srv = await createServer({ storeDir, port: 0 });
-  browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS });
+  const found = await findBrowser();
+  browser = await chromium.launch({ executablePath: found.executablePath, args: [...found.args] });
   context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 1000 } });
   page = await context.newPage();
   page.setDefaultTimeout(10_000);
