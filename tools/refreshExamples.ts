@@ -23,6 +23,8 @@ function run(command: string): string {
   }
 }
 
+// the examples run the compiled CLI: compile it first, so that no "older than src/" line is written into the docs
+execFileSync('npm', ['run', '--silent', 'build:cli'], { cwd: root, stdio: 'inherit' });
 for (const file of process.argv.slice(2)) {
   const text = await readFile(file, 'utf8');
   const out: string[] = [];
