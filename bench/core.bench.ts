@@ -18,6 +18,7 @@ import { loadProfileStore } from '../src/query/loadProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../src/query/findComps.ts';
 import { COVERAGE_CLASSES, drawTargets, type CoverageClass } from './lib/drawTargets.ts';
 import { nearestRankQuantile } from '../src/stats/quantile.ts';
+import { aim } from './lib/aim.ts';
 
 /** Latency percentile (0..100) by nearest rank. */
 const percentile = (times: readonly number[], q: number): number => nearestRankQuantile([...times].sort((a, b) => a - b), q / 100);
@@ -50,7 +51,7 @@ async function one(n: number): Promise<string[]> {
       maxBuffer: 1 << 24,
     });
     const build = JSON.parse(out.trim().split('\n').pop() ?? '{}') as { seconds: number; maxRssMb: number; profiles: number; threads: number };
-    say(`  build: ${build.seconds.toFixed(1)} s, peak memory ${build.maxRssMb.toFixed(0)} MB, ${build.profiles.toLocaleString('en-US')} profiles, indexes in ${build.threads} worker threads (aim at 1M: 60 s, 1.5 GB)`);
+    say(`  build: ${build.seconds.toFixed(1)} s, peak memory ${build.maxRssMb.toFixed(0)} MB, ${build.profiles.toLocaleString('en-US')} profiles, indexes in ${build.threads} worker threads${n >= 1_000_000 ? ` ${aim(`build time at ${n}`, build.seconds, { below: 60, unit: 's' })} ${aim(`build peak memory at ${n}`, build.maxRssMb, { below: 1536, unit: 'MB' })}` : ''}`);
 
     t = performance.now();
     const store = await loadProfileStore(storeDir);
@@ -93,13 +94,13 @@ async function one(n: number): Promise<string[]> {
       e.hits += a.comps.filter((c) => truth.has(c.player_id)).length;
       e.total += truth.size;
     }
-    say(`  batch comps, k 10, ${all.length} targets drawn uniformly: p50 ${ms(percentile(all, 50))}, p99 ${ms(percentile(all, 99))} (aim at 1M: 2 / 10 ms, recall@10 >= 0.99 in every class); CPU time p50 ${ms(percentile(cpu, 50))}, p99 ${ms(percentile(cpu, 99))}`);
+    say(`  batch comps, k 10, ${all.length} targets drawn uniformly: p50 ${ms(percentile(all, 50))}, p99 ${ms(percentile(all, 99))}${n >= 1_000_000 ? ` p50 ${aim(`comps p50 at ${n}`, percentile(all, 50), { below: 2, unit: 'ms' })} p99 ${aim(`comps p99 at ${n}`, percentile(all, 99), { below: 10, unit: 'ms' })}` : ''}; CPU time p50 ${ms(percentile(cpu, 50))}, p99 ${ms(percentile(cpu, 99))}`);
     say(`    ${'coverage class'.padEnd(30)} ${'targets'.padStart(7)} ${'via index'.padStart(9)} ${'p50'.padStart(9)} ${'p99'.padStart(9)} ${'exact p50'.padStart(10)} ${'exact p99'.padStart(10)}  recall@10`);
     for (const c of COVERAGE_CLASSES) {
       const e = by.get(c);
       if (!e) continue;
       say(
-        `    ${c.padEnd(30)} ${String(e.fast.length).padStart(7)} ${String(e.viaIndex).padStart(9)} ${ms(percentile(e.fast, 50)).padStart(9)} ${ms(percentile(e.fast, 99)).padStart(9)} ${ms(percentile(e.exact, 50)).padStart(10)} ${ms(percentile(e.exact, 99)).padStart(10)}  ${(e.hits / e.total).toFixed(4)}`,
+        `    ${c.padEnd(30)} ${String(e.fast.length).padStart(7)} ${String(e.viaIndex).padStart(9)} ${ms(percentile(e.fast, 50)).padStart(9)} ${ms(percentile(e.fast, 99)).padStart(9)} ${ms(percentile(e.exact, 50)).padStart(10)} ${ms(percentile(e.exact, 99)).padStart(10)}  ${(e.hits / e.total).toFixed(4)} ${aim(`recall@10 (${c}) at ${n}`, e.hits / e.total, { atLeast: 0.99 })}`,
       );
     }
 
@@ -112,7 +113,7 @@ async function one(n: number): Promise<string[]> {
         return `/api/comps?${q.toString()}`;
       });
     const served = await serveLoad(storeDir, paths, 20, 10);
-    say(`  kindred serve --cache 0, 20 connections, 10 s, ${paths.length} player targets: p50 ${served.p50} ms, p99 ${served.p99} ms, ${served.requests} requests, ${served.errors} errors, ${served.non2xx} non-2xx (aim: p99 20 ms, 0 errors)`);
+    say(`  kindred serve --cache 0, 20 connections, 10 s, ${paths.length} player targets: p50 ${served.p50} ms, p99 ${served.p99} ms, ${served.requests} requests, ${served.errors} errors, ${served.non2xx} non-2xx ${aim(`serve p99 at ${n}`, served.p99, { below: 20, unit: 'ms' })} ${aim(`serve errors at ${n}`, served.errors, { below: 1 })}`);
   } finally {
     await rm(dir, { recursive: true, force: true });
   }

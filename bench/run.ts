@@ -1,10 +1,13 @@
 /**
  * `npm run bench`: every bench of the project, one after another, each in its own process so that
  * memory figures are its own. Pass names to run a subset: `npm run bench -- core quality`.
- * Figures are printed, never asserted: speed and memory goals are read, not tested.
+ * Figures are printed with their aims (bench/lib/aim.ts), not timed in tests. With `--check`, each
+ * figure is compared with its aim and the run exits non-zero when one is missed (or a bench fails):
+ * `npm run bench -- --check core serve`.
  */
 import { spawnSync } from 'node:child_process';
 import { join } from 'node:path';
+import { CHECK_ENV, MISSED_AIM_EXIT } from './lib/aim.ts';
 
 const BENCHES: readonly { name: string; file: string; args: readonly string[]; what: string }[] = [
   { name: 'core', file: 'core.bench.ts', args: ['100000', '1000000'], what: 'build, load, comps latency and recall at 100k and 1M player-seasons' },
@@ -16,23 +19,30 @@ const BENCHES: readonly { name: string; file: string; args: readonly string[]; w
   { name: 'serve', file: 'serve.bench.ts', args: ['20', '20'], what: 'HTTP load on the comps endpoint (20 connections, 20 s)' },
 ];
 
-const wanted = process.argv.slice(2);
+const check = process.argv.includes('--check');
+const wanted = process.argv.slice(2).filter((a) => a !== '--check');
 const unknown = wanted.filter((w) => !BENCHES.some((b) => b.name === w));
 if (unknown.length > 0) {
   console.error(`unknown bench ${unknown.join(', ')}; known: ${BENCHES.map((b) => b.name).join(', ')}`);
   process.exitCode = 2;
 } else {
-  let failed = 0;
+  const failed: string[] = [];
+  const missed: string[] = [];
   for (const b of BENCHES) {
     if (wanted.length > 0 && !wanted.includes(b.name)) continue;
     console.log(`\n== ${b.name}: ${b.what}`);
     const started = performance.now();
-    const run = spawnSync(process.execPath, ['--import', 'tsx', join(import.meta.dirname, b.file), ...b.args], { stdio: 'inherit' });
+    const env = { ...process.env, [CHECK_ENV]: check ? '1' : '0' };
+    const run = spawnSync(process.execPath, ['--import', 'tsx', join(import.meta.dirname, b.file), ...b.args], { stdio: 'inherit', env });
     const seconds = ((performance.now() - started) / 1000).toFixed(0);
-    if (run.status !== 0) {
-      failed++;
+    if (run.status === MISSED_AIM_EXIT) {
+      missed.push(b.name);
+      console.log(`-- ${b.name} missed an aim (listed above) after ${seconds} s`);
+    } else if (run.status !== 0) {
+      failed.push(b.name);
       console.log(`-- ${b.name} failed (exit ${run.status ?? run.signal}) after ${seconds} s`);
     } else console.log(`-- ${b.name} done in ${seconds} s`);
   }
-  if (failed > 0) process.exitCode = 1;
+  if (check) console.log(`\naims: ${missed.length === 0 && failed.length === 0 ? 'all met' : `missed in ${missed.join(', ') || 'none'}; failed: ${failed.join(', ') || 'none'}`}`);
+  if (failed.length > 0 || missed.length > 0) process.exitCode = 1;
 }

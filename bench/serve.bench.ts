@@ -11,6 +11,7 @@ import { spawn } from 'node:child_process';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { aim } from './lib/aim.ts';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
 import { buildStore } from '../src/build/buildStore.ts';
@@ -71,13 +72,13 @@ async function run(label: string, extraArgs: string[]): Promise<void> {
     const line = (k: string, v: string): void => console.log(`  ${k.padEnd(22)} ${v}`);
     console.log(`${label}:`);
     line('latency p50', `${result.latency.p50} ms`);
-    line('latency p99', `${result.latency.p99} ms`);
+    line('latency p99', `${result.latency.p99} ms ${aim(`${label}: p99`, result.latency.p99, { below: 50, unit: 'ms' })}`);
     line('latency max', `${result.latency.max} ms`);
     line('requests / s (mean)', result.requests.average.toFixed(0));
     line('requests', String(result.requests.total));
-    line('errors', String(result.errors));
-    line('timeouts', String(result.timeouts));
-    line('non-2xx', String(result.non2xx));
+    line('errors', `${result.errors} ${aim(`${label}: errors`, result.errors, { below: 1 })}`);
+    line('timeouts', `${result.timeouts} ${aim(`${label}: timeouts`, result.timeouts, { below: 1 })}`);
+    line('non-2xx', `${result.non2xx} ${aim(`${label}: non-2xx answers`, result.non2xx, { below: 1 })}`);
   } finally {
     child.kill('SIGTERM');
     await new Promise((r) => child.once('exit', r));
