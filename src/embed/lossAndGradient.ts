@@ -10,8 +10,9 @@ import type { Rng } from './createRng.ts';
  *      + (l2 / 2) * sum of squared weights + l1 * sum of |weights|       (biases are not penalised)
  * where M is the number of present (non-NaN) entries in the batch. A missing input is fed as 0 and its
  * entry is left out of the error, so the network is never trained toward a made-up value. With M = 0 the
- * reconstruction term is 0. Dropout (Srivastava et al. 2014), inverted: a hidden unit is kept with
- * probability 1 - rate and scaled by 1 / (1 - rate) during training, untouched at inference.
+ * reconstruction term is 0. Dropout (Srivastava et al. 2014, who scale at test time) in its inverted
+ * form (common practice): a hidden unit is kept with probability 1 - rate and scaled by 1 / (1 - rate)
+ * during training, untouched at inference.
  *
  * @example
  * // one row [1, NaN]: only the first entry counts, M = 1

@@ -94,7 +94,9 @@ describe('lossAndGradient', () => {
   });
 
   it('inverted dropout keeps the expected hidden activation: kept units are scaled by 1 / (1 - rate)', () => {
-    // Source: Srivastava et al. 2014, "Dropout", JMLR 15 (inverted form: scale at training time).
+    // Dropout: Srivastava et al. 2014, "Dropout", JMLR 15, which scales the weights at test time by the
+    // keep probability; scaling the kept units by 1 / (1 - rate) at training time instead (inverted
+    // dropout, same expected activation) is common practice.
     const model = setup('tanh', [3]);
     const ws = createWorkspace(model, 5);
     loadRows(ws, x, 4, rows, 0, 5);

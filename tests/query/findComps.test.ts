@@ -18,7 +18,7 @@ const group = (): StoredGroup => {
   return g;
 };
 
-/** Rows spread over the group, skipping early seasons without tracking (coverage varies). */
+/** Rows spread evenly over the group, early seasons without tracking included (so coverage varies). */
 const sampleRows = (g: StoredGroup, count: number): number[] =>
   Array.from({ length: count }, (_, i) => Math.floor(((i + 0.5) * g.n) / count));
 
