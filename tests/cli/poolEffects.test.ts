@@ -154,14 +154,14 @@ describe('weights, by their effect', () => {
     for (const x of w) expect(x).toBe(w[0]);
   });
 
-  /** Mean grade gap between target and comp over the dimensions of the given skills, over all comps. */
-  function gapOn(results: readonly CompsResult[], skills: ReadonlySet<string>, skillOf: ReadonlyMap<string, string>): number {
+  /** Mean grade gap between target and comp over the dimensions of the given families, over all comps. */
+  function gapOn(results: readonly CompsResult[], families: ReadonlySet<string>, familyOf: ReadonlyMap<string, string>): number {
     let sum = 0;
     let n = 0;
     for (const r of results) {
       for (const c of r.comps) {
         for (const d of c.dimensions) {
-          if (!skills.has(skillOf.get(d.name) ?? '') || d.target_grade === null || d.comp_grade === null) continue;
+          if (!families.has(familyOf.get(d.name) ?? '') || d.target_grade === null || d.comp_grade === null) continue;
           sum += Math.abs(d.target_grade - d.comp_grade);
           n++;
         }
@@ -170,13 +170,16 @@ describe('weights, by their effect', () => {
     return sum / n;
   }
 
-  it.each(['glove', 'bat'] as const)('--preset %s brings the comps closer on the skills it weighs up (exact scan, 8 infielders)', async (preset) => {
-    const dims = JSON.parse((await runCli('dims', '--position', 'SS', '--format', 'json')).stdout) as Record<string, { name: string; skill: string }[]>;
-    const skillOf = new Map(Object.values(dims).flat().map((d) => [d.name, d.skill]));
-    const up = new Set(Object.entries(WEIGHT_PRESETS[preset]).filter(([, m]) => m > 1).map(([skill]) => skill));
+  it.each(['glove', 'bat'] as const)('--preset %s brings the comps closer on the skill families it gives more than the default (exact scan, 8 infielders)', async (preset) => {
+    const dims = JSON.parse((await runCli('dims', '--position', 'SS', '--format', 'json')).stdout) as Record<string, { name: string; family: string }[]>;
+    const familyOf = new Map(Object.values(dims).flat().map((d) => [d.name, d.family]));
+    const shares: Readonly<Record<string, number>> = WEIGHT_PRESETS[preset];
+    const balanced: Readonly<Record<string, number>> = WEIGHT_PRESETS.balanced;
+    const up = new Set(Object.keys(shares).filter((f) => (shares[f] ?? 0) > (balanced[f] ?? 0)));
+    expect(up.size).toBeGreaterThan(0);
     const who = targets('IF', 8);
-    const balanced = await Promise.all(who.map((w) => comps(w, '--exact')));
+    const plainDefault = await Promise.all(who.map((w) => comps(w, '--exact')));
     const weighted = await Promise.all(who.map((w) => comps(w, '--exact', '--preset', preset)));
-    expect(gapOn(weighted, up, skillOf)).toBeLessThan(gapOn(balanced, up, skillOf));
+    expect(gapOn(weighted, up, familyOf)).toBeLessThan(gapOn(plainDefault, up, familyOf));
   });
 });
