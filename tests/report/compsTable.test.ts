@@ -12,7 +12,8 @@ import { simStore, type SimStore } from '../helpers/simStore.ts';
 import type { CompsResult } from '../../src/query/types.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 
-const HEADINGS = ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', 'Like', 'Cov', 'Alike / apart'];
+/** The table's headings; the playing-time column says PA for hitters and BF for pitchers. */
+const headingsFor = (unit: string): string[] => ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', unit, 'Like', 'Cov', 'Alike / apart'];
 let s: SimStore;
 
 function someTarget(group: PositionGroup): string[] {
@@ -43,6 +44,7 @@ describe.each(['C', 'IF', 'OF', 'SP', 'RP'] as const)('comps table for a %s targ
     const h = lines.findIndex((l) => l.trimStart().startsWith('#  Player'));
     expect(h).toBeGreaterThan(0);
     const head = lines[h] ?? '';
+    const HEADINGS = headingsFor(answer.comps[0]?.sample_unit ?? 'PA');
     const at = HEADINGS.map((t) => head.indexOf(t));
     expect(at.every((x, i) => x >= 0 && (i === 0 || x > (at[i - 1] ?? 0))), `headings in order: ${head}`).toBe(true);
     answer.comps.forEach((c, i) => {
@@ -57,8 +59,9 @@ describe.each(['C', 'IF', 'OF', 'SP', 'RP'] as const)('comps table for a %s targ
       expect(row.slice(at[3], at[4]).trim()).toBe(c.level);
       expect(row.slice(at[4], at[5]).trim()).toBe(c.position);
       expect(cell(5)).toBe(c.age === null ? '-' : String(c.age));
-      expect(cell(6)).toBe(String(Math.round(c.likeness)));
-      expect(cell(7)).toBe(`${Math.round(100 * c.coverage)}%`);
+      expect(cell(6)).toBe(String(c.sample));
+      expect(cell(7)).toBe(String(Math.round(c.likeness)));
+      expect(cell(8)).toBe(`${Math.round(100 * c.coverage)}%`);
       expect(idLine.trim().startsWith(c.player_id)).toBe(true);
     });
     const grid = lines.findIndex((l) => l.startsWith('Dimension'));
