@@ -10,7 +10,7 @@
  * perfect, lower is better) per league, then the mean and spread (sd) over the leagues.
  */
 import { benchLeagues, withBenchLeague } from './leagues.ts';
-import type { ProfileStore } from '../src/query/ProfileStore.ts';
+import type { ProfileStore } from '../src/store/ProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, type CompsOptions } from '../src/query/findComps.ts';
 import { redundancyWeights } from '../src/profiles/redundancyWeights.ts';
 import { compsQuality } from './lib/compsQuality.ts';

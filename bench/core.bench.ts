@@ -14,7 +14,7 @@ import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
 import { simulateLeague } from '../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
-import { loadProfileStore } from '../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../src/store/openProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../src/query/findComps.ts';
 import { COVERAGE_CLASSES, drawTargets, type CoverageClass } from './lib/drawTargets.ts';
 import { nearestRankQuantile } from '../src/stats/quantile.ts';
@@ -54,7 +54,7 @@ async function one(n: number): Promise<string[]> {
     say(`  build: ${build.seconds.toFixed(1)} s, peak memory ${build.maxRssMb.toFixed(0)} MB, ${build.profiles.toLocaleString('en-US')} profiles, indexes in ${build.threads} worker threads${n >= 1_000_000 ? ` ${aim(`build time at ${n}`, build.seconds, { below: 60, unit: 's' })} ${aim(`build peak memory at ${n}`, build.maxRssMb, { below: 1536, unit: 'MB' })}` : ''}`);
 
     t = performance.now();
-    const store = await loadProfileStore(storeDir);
+    const store = await openProfileStore(storeDir);
     say(`  store open (in this process): ${((performance.now() - t) / 1000).toFixed(2)} s (aim at 1M: 1 s)`);
 
     // one cold command from the shell, as a user types it: median of 3

@@ -14,10 +14,10 @@ import { join } from 'node:path';
 import { simulateLeague } from '../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
 import { buildStore } from '../src/build/buildStore.ts';
-import { loadProfileStore } from '../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../src/store/openProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../src/query/findComps.ts';
 import { playerTarget } from '../src/query/playerTarget.ts';
-import type { ProfileStore } from '../src/query/ProfileStore.ts';
+import type { ProfileStore } from '../src/store/ProfileStore.ts';
 import { readRoster } from '../src/ingest/readRoster.ts';
 import { buildProfiles } from '../src/profiles/buildProfiles.ts';
 import { embedProfiles } from '../src/build/embedProfiles.ts';
@@ -63,7 +63,7 @@ export async function runEmbedQuality(playerSeasons: number, spaces: readonly Va
       const storeDir = join(dir, `store-${space}`);
       const started = performance.now();
       const summary = await buildStore(join(dir, 'roster'), storeDir, { lenient: false, embed: settingsFor(space) });
-      const store = await loadProfileStore(storeDir);
+      const store = await openProfileStore(storeDir);
       if (summary.embedding) {
         const per = Object.entries(summary.embedding.groups).map(([g, e]) => `${g} ${e.dim} ${e.seconds.toFixed(1)} s`);
         lines.push(`${space}: build ${summary.seconds.toFixed(1)} s; code size and embedding time per group: ${per.join(', ')}`);

@@ -22,8 +22,8 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buildStore } from '../src/build/buildStore.ts';
-import { loadProfileStore } from '../src/query/loadProfileStore.ts';
-import type { ProfileStore } from '../src/query/ProfileStore.ts';
+import { openProfileStore } from '../src/store/openProfileStore.ts';
+import type { ProfileStore } from '../src/store/ProfileStore.ts';
 import { simulateLeague } from '../src/sim/simulateLeague.ts';
 import type { SimLeague, SimOptions } from '../src/sim/simTypes.ts';
 import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
@@ -74,7 +74,7 @@ export function benchLeagues(playerSeasons = 30000): BenchLeague[] {
 export interface BenchLeagueContext {
   readonly spec: BenchLeague;
   readonly league: SimLeague;
-  /** The built store folder (for loadOutcomes and the like). */
+  /** The built store folder (for re-opening and the like). */
   readonly storeDir: string;
   readonly store: ProfileStore;
   /** Seconds spent simulating, writing and building. */
@@ -90,7 +90,7 @@ export async function withBenchLeague<T>(spec: BenchLeague, use: (ctx: BenchLeag
     await writeLeagueCsv(league, join(dir, 'roster'));
     const storeDir = join(dir, 'store');
     await buildStore(join(dir, 'roster'), storeDir, { lenient: false });
-    const store = await loadProfileStore(storeDir);
+    const store = await openProfileStore(storeDir);
     return await use({ spec, league, storeDir, store, seconds: (performance.now() - started) / 1000 });
   } finally {
     await rm(dir, { recursive: true, force: true });

@@ -13,7 +13,6 @@
  * (pool with a playing-time band, level path; calibration maps), and mean and spread over leagues.
  */
 import { benchLeagues, withBenchLeague } from './leagues.ts';
-import { loadOutcomes } from '../src/outlook/loadOutcomes.ts';
 import { collectForecasts, type RawForecast } from '../src/outlook/collectForecasts.ts';
 import { runBacktest, trainingFor, type KindBacktest, type WithInterval } from '../src/outlook/runBacktest.ts';
 import { fitLogistic, logisticProbability } from '../src/outlook/fitLogistic.ts';
@@ -21,7 +20,7 @@ import { brierScore } from '../src/outlook/brierScore.ts';
 import { spearmanCorrelation } from '../src/outlook/spearmanCorrelation.ts';
 import { playerIndexOf } from '../src/sim/SimTruth.ts';
 import type { SimLeague } from '../src/sim/simTypes.ts';
-import type { ProfileStore } from '../src/query/ProfileStore.ts';
+import type { ProfileStore } from '../src/store/ProfileStore.ts';
 import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from '../src/outlook/findProspectComps.ts';
 import { DEFAULT_CALIBRATION, type CalibrationChoice } from '../src/outlook/calibrateForecast.ts';
 
@@ -66,7 +65,7 @@ function line(k: KindBacktest): string {
 
 for (const spec of benchLeagues(playerSeasons).filter((s) => wanted.includes(s.name))) {
   await withBenchLeague(spec, async ({ store, storeDir, league, seconds }) => {
-    const outcomes = await loadOutcomes(storeDir, store);
+    const outcomes = store.outcomes();
     console.log(`\n${spec.name}: ${spec.description}`);
     console.log(`  ${league.truth.length.toLocaleString('en-US')} player-seasons, levels ${league.levels.join(' ')}, ${outcomes.firstSeason}-${outcomes.lastSeason}, built in ${seconds.toFixed(0)} s`);
     for (const [poolName, extra] of Object.entries(POOLS)) {

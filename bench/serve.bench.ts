@@ -16,7 +16,7 @@ import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
 import { buildStore } from '../src/build/buildStore.ts';
 import { DEMO_ROSTER } from '../src/cli/commands/demoCommand.ts';
-import { loadProfileStore } from '../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../src/store/openProfileStore.ts';
 
 const connections = Number(process.argv[2] ?? 20);
 const seconds = Number(process.argv[3] ?? 20);
@@ -27,7 +27,7 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 const dir = await mkdtemp(join(tmpdir(), 'kindred-serve-bench-'));
 const storeDir = join(dir, 'store');
 await buildStore(DEMO_ROSTER, storeDir, { lenient: false });
-const store = await loadProfileStore(storeDir);
+const store = await openProfileStore(storeDir);
 const paths: string[] = [];
 const total = [...store.groups.values()].reduce((a, g) => a + g.n, 0);
 for (const g of store.groups.values()) {

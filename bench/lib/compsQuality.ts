@@ -8,7 +8,7 @@
  * show are left out (catcher throwing outside catchers; fielding for DH).
  */
 import type { SimTruth } from '../../src/sim/SimTruth.ts';
-import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { findCompsWithRows, type CompsOptions } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';

@@ -3,7 +3,7 @@
  * proportion to how a club's history is made up), and hand-built `--want` profiles of 2 to 6
  * dimensions (the values of a drawn player-season on those dimensions), each with its coverage class.
  */
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import type { Target } from '../../src/query/Target.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';

@@ -1,7 +1,7 @@
 import type { AttributionRow } from '../embed/charts/attributionSpreadSvg.ts';
 import { createRng, shuffleInPlace } from '../embed/createRng.ts';
 import type { Encoder } from '../embed/embeddedDistanceGame.ts';
-import type { EmbeddingDriver } from '../embed/groupEmbeddingFile.ts';
+import type { EmbeddingDriver } from '../store/groupEmbeddingFile.ts';
 import { quantileSorted } from '../stats/quantile.ts';
 import { attributeEmbedded, DRIVER_ATTRIBUTION_EFFORT } from '../query/attributeEmbedded.ts';
 

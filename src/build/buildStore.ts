@@ -1,24 +1,24 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
-import type { Roster } from '../ingest/types.ts';
 import { readRoster, type ColumnMap } from '../ingest/readRoster.ts';
 import { writeRejects } from '../ingest/writeRejects.ts';
 import { buildProfiles, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
-import { groupFileNames, type GroupFile, type PlayersFile } from '../profiles/groupFile.ts';
+import type { GroupFile } from '../store/groupFile.ts';
+import { encodeGroupFiles } from '../store/encodeGroupFiles.ts';
+import { encodePlayersFile } from '../store/playersFile.ts';
+import { encodeOutcomesFile } from '../store/outcomesFile.ts';
+import { chartsFolderOf, groupFileNames, OUTCOMES_FILE, PLAYERS_FILE } from '../store/storeFileNames.ts';
 import { IndexBuildPool } from './IndexBuildPool.ts';
 import type { IndexParams } from '../index/types.ts';
 import { writeStore } from '../store/writeStore.ts';
-import { float32ToBytes } from '../store/float32Bytes.ts';
 import { partitionByCoverage, type CoveragePartition } from '../index/partitionByCoverage.ts';
 import { partitionVector } from '../index/partitionVector.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.ts';
 import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
 import { stageCharts } from './stageCharts.ts';
-import { chartsFolderOf } from '../embed/groupEmbeddingFile.ts';
 import { computeOutcomes } from '../outlook/computeOutcomes.ts';
-import { OUTCOMES_FILE } from '../outlook/outcomesFile.ts';
 
 export const DEFAULT_INDEX_PARAMS: IndexParams = { M: 16, efConstruction: 100, ef: 128, seed: 100 };
 
@@ -79,9 +79,9 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
   progress('profiles', 0, 1);
   const profiles = buildProfiles(roster, options.profile ?? DEFAULT_PROFILE_OPTIONS);
   const files = new Map<string, Uint8Array | string>();
-  const playerIndex = new Map<string, number>();
-  files.set('players.json', JSON.stringify(playersFile(roster, playerIndex)));
-  files.set(OUTCOMES_FILE, JSON.stringify(computeOutcomes(roster)));
+  const { text: playersText, playerIndex } = encodePlayersFile(roster);
+  files.set(PLAYERS_FILE, playersText);
+  files.set(OUTCOMES_FILE, encodeOutcomesFile(computeOutcomes(roster)));
   const indexParams = options.index ?? DEFAULT_INDEX_PARAMS;
   const counts: Partial<Record<PositionGroup, number>> = {};
   const embed = resolveEmbedSettings(options.embed ?? {});
@@ -128,10 +128,12 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
           partitions.push({ dims: [...part.dims], rows: [...part.rows], index: meta });
         }
       }
-      files.set(names.raw, float32ToBytes(g.raw));
-      files.set(names.z, float32ToBytes(g.z));
-      const gf = groupFile(g, playerIndex, roster.levels, mainIndex, partitions);
-      files.set(names.json, JSON.stringify(e ? { ...gf, embedding: { space: e.space, dim: e.dim } } : gf));
+      const groupFiles = encodeGroupFiles(g, playerIndex, roster.levels, {
+        index: mainIndex,
+        partitions,
+        ...(e ? { embedding: { space: e.space, dim: e.dim } } : {}),
+      });
+      for (const [name, content] of groupFiles) files.set(name, content);
       counts[group] = g.meta.length;
       done++;
     }
@@ -183,60 +185,4 @@ export function partitionVectors(z: Float32Array, d: number, part: CoverageParti
   const out = new Float32Array(part.rows.length * width);
   part.rows.forEach((row, r) => partitionVector(z, row * d, part.dims, sqrtW, out, r * width));
   return out;
-}
-
-function playersFile(roster: Roster, playerIndex: Map<string, number>): PlayersFile {
-  const players: PlayersFile['players'] = [];
-  for (const p of roster.players.values()) {
-    playerIndex.set(p.playerId, players.length);
-    players.push({
-      player_id: p.playerId,
-      name: p.name,
-      birth_date: p.birthDate ?? null,
-      bats: p.bats ?? null,
-      throws: p.throws ?? null,
-    });
-  }
-  const contracts: PlayersFile['contracts'] = [];
-  for (const c of roster.contracts) {
-    const idx = playerIndex.get(c.playerId);
-    if (idx !== undefined) contracts.push([idx, c.season, c.salaryUsd]);
-  }
-  return { levels: [...roster.levels], players, contracts };
-}
-
-function groupFile(
-  g: GroupProfiles,
-  playerIndex: ReadonlyMap<string, number>,
-  levels: readonly string[],
-  index: GroupFile['index'],
-  partitions: GroupFile['partitions'],
-): GroupFile {
-  const levelIdx = new Map(levels.map((l, i) => [l, i]));
-  const strata: GroupFile['strata'] = {};
-  for (const [dim, map] of g.strata) {
-    // A stratum with a single value has no spread (sd NaN): it standardises nothing, so it is not kept.
-    strata[dim] = [...map]
-      .filter(([, s]) => Number.isFinite(s.mean) && Number.isFinite(s.sd))
-      .map(([key, s]) => [key, s.mean, s.sd, s.n, s.seasons[0], s.seasons[1]]);
-  }
-  return {
-    group: g.group,
-    n: g.meta.length,
-    dims: [...g.dims],
-    redundancy: [...g.redundancy],
-    reliability: [...g.reliability],
-    rows: {
-      player: g.meta.map((m) => playerIndex.get(m.playerId) ?? -1),
-      season: g.meta.map((m) => m.season),
-      level: g.meta.map((m) => levelIdx.get(m.level) ?? -1),
-      position: g.meta.map((m) => m.position),
-      age: g.meta.map((m) => m.age),
-      sample: g.meta.map((m) => m.sample),
-      teams: g.meta.map((m) => m.teams.join('/')),
-    },
-    strata,
-    index,
-    partitions,
-  };
 }

@@ -2,7 +2,7 @@ import { UsageError } from '../errors/KindredError.ts';
 import type { EmbedData } from '../embed/EmbedData.ts';
 import type { EmbeddingModel } from '../embed/EmbeddingModel.ts';
 import { modelCodeSize } from '../embed/EmbeddingModel.ts';
-import type { EmbeddingSearchRow } from '../embed/groupEmbeddingFile.ts';
+import type { EmbeddingSearchRow } from '../store/groupEmbeddingFile.ts';
 import { fitPcaEmbedding } from '../embed/fitPcaEmbedding.ts';
 import { chooseComponents } from '../embed/chooseComponents.ts';
 import { PcaEmbedding } from '../embed/PcaEmbedding.ts';

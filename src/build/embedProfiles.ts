@@ -1,6 +1,7 @@
 import type { GroupProfiles } from '../profiles/buildProfiles.ts';
 import type { EmbedData } from '../embed/EmbedData.ts';
-import { GROUP_EMBEDDING_FORMAT, GROUP_EMBEDDING_VERSION, groupChartNames, groupEmbeddingFileNames, type GroupEmbeddingFile } from '../embed/groupEmbeddingFile.ts';
+import { GROUP_EMBEDDING_FORMAT, GROUP_EMBEDDING_VERSION, type GroupEmbeddingFile } from '../store/groupEmbeddingFile.ts';
+import { groupChartNames, groupEmbeddingFileNames } from '../store/storeFileNames.ts';
 import { pairScale } from '../embed/pairScale.ts';
 import { learningCurveSvg } from '../embed/charts/learningCurveSvg.ts';
 import { attributionSpreadSvg } from '../embed/charts/attributionSpreadSvg.ts';

@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { mkdir, readdir, rename, rm, writeFile } from 'node:fs/promises';
 import { StoreError } from '../errors/KindredError.ts';
-import { withCause } from '../index/withCause.ts';
+import { withCause } from '../errors/withCause.ts';
 
 /** Charts written into a temporary folder, waiting to replace the real one. */
 export interface StagedCharts {

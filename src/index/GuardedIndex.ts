@@ -7,7 +7,7 @@ import { checkRows, checkVector } from './checkVector.ts';
 import { checkK, exactSearch } from './exactSearch.ts';
 import type { IndexHits, IndexMeta, IndexParams, LabelFilter } from './types.ts';
 import { verifyHnswFile } from './verifyHnswFile.ts';
-import { withCause } from './withCause.ts';
+import { withCause } from '../errors/withCause.ts';
 
 const { HierarchicalNSW } = hnswlib;
 type Native = InstanceType<typeof HierarchicalNSW>;

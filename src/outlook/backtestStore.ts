@@ -2,7 +2,7 @@ import { rename, rm, writeFile, readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { KindredError } from '../errors/KindredError.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import { BACKTEST_FILE, BACKTEST_FORMAT, BACKTEST_VERSION, backtestFileSchema, type BacktestFile, type KindSummary } from './backtestFile.ts';
 import { DEFAULT_CALIBRATION, fitCalibration, type CalibrationChoice, type FittedCalibration } from './calibrateForecast.ts';
 import { collectForecasts } from './collectForecasts.ts';

@@ -1,5 +1,5 @@
 import { isPitcherGroup } from '../profiles/positionGroup.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { Target } from '../query/Target.ts';
 import type { BacktestFile } from './backtestFile.ts';
 import { fittedFromFile } from './backtestStore.ts';

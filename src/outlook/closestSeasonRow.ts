@@ -1,6 +1,6 @@
 import { valueAt } from '../query/valueAt.ts';
 import { QueryError } from '../errors/KindredError.ts';
-import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 
 export interface SeasonChoice {
   readonly season?: number;

@@ -1,5 +1,5 @@
 import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts';
-import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { playerTarget } from '../query/playerTarget.ts';
 import { findProspectComps, type ProspectOptions } from './findProspectComps.ts';
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';

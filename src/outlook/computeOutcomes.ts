@@ -7,7 +7,7 @@ import { sluggingPercentage } from '../stats/sluggingPercentage.ts';
 import { rateOf } from '../stats/Rate.ts';
 import { leagueBattingRates } from './leagueBattingRates.ts';
 import { leagueFip } from '../stats/leagueFip.ts';
-import { OUTCOMES_FORMAT, OUTCOMES_VERSION, type OutcomesFile } from './outcomesFile.ts';
+import { OUTCOMES_FORMAT, OUTCOMES_VERSION, type OutcomesFile } from '../store/outcomesFile.ts';
 
 const finiteOrNull = (x: number, digits = 4): number | null => (Number.isFinite(x) ? Number(x.toFixed(digits)) : null);
 

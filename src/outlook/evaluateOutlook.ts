@@ -1,5 +1,5 @@
 import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import { playerTarget } from '../query/playerTarget.ts';
 import { brierScore } from './brierScore.ts';
 import { findProspectComps, type ProspectOptions } from './findProspectComps.ts';

@@ -1,7 +1,7 @@
 import { ParameterError } from '../errors/ParameterError.ts';
 import { eligibleRows } from '../query/eligibleRows.ts';
 import { findCompsWithRows, type CompsOptions } from '../query/findComps.ts';
-import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { storedGroup } from '../query/storedGroup.ts';
 import type { Target } from '../query/Target.ts';
 import { valueAt } from '../query/valueAt.ts';

@@ -7,7 +7,7 @@ import { DEFAULT_COMPS_OPTIONS, type CompsOptions } from '../query/findComps.ts'
 import { likeness } from '../query/likeness.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
 import { prepareQuery, type PreparedQuery } from '../query/prepareQuery.ts';
-import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { closerFirst, rankScored } from '../query/rankScored.ts';
 import { scoreRow, type ScoredRow } from '../query/scoreRow.ts';
 import { storedGroup } from '../query/storedGroup.ts';

@@ -2,7 +2,7 @@ import { QueryError } from '../errors/KindredError.ts';
 import { compsOf, type CompsOptions } from '../query/findComps.ts';
 import { describeComp } from '../query/describeComp.ts';
 import { prepareQuery } from '../query/prepareQuery.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import { scoreRow } from '../query/scoreRow.ts';
 import { storedGroup } from '../query/storedGroup.ts';
 import type { Target } from '../query/Target.ts';

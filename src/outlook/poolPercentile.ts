@@ -2,7 +2,7 @@ import { valueAt } from '../query/valueAt.ts';
 import { eligibleRows } from '../query/eligibleRows.ts';
 import { missingAwareDistance, targetWeight } from '../query/missingAwareDistance.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
-import type { ProfileStore, StoredGroup } from '../query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 
 export interface PoolStanding {
   /** Pool players (other than the candidate) compared. */

@@ -1,4 +1,4 @@
-import type { StoredEmbedding } from './StoredEmbedding.ts';
+import type { StoredEmbedding } from '../store/StoredEmbedding.ts';
 import type { PreparedQuery } from './prepareQuery.ts';
 
 /** The learned space a query ranks in, with the target's code; null when it ranks in the input space. */

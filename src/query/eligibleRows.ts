@@ -1,5 +1,5 @@
 import type { PoolFilter } from './PoolFilter.ts';
-import type { ProfileStore, StoredGroup } from './ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 
 /**
  * The pool as a mask over a group's rows: 1 where the row passes every filter and is not one of the

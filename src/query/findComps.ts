@@ -1,4 +1,4 @@
-import type { ProfileStore } from './ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { Target } from './Target.ts';
 import type { CompsResult } from './types.ts';
 import { prepareQuery, type PreparedQuery, type QuerySettings } from './prepareQuery.ts';

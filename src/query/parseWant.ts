@@ -1,7 +1,7 @@
 import { QueryError } from '../errors/KindredError.ts';
 import type { Position } from '../ingest/types.ts';
 import { fromGrade } from '../stats/fromGrade.ts';
-import type { StoredGroup, ProfileStore } from './ProfileStore.ts';
+import type { StoredGroup, ProfileStore } from '../store/ProfileStore.ts';
 import type { Target } from './Target.ts';
 import { groupOf } from '../profiles/positionGroup.ts';
 import { dimensionSuggestions, findDimension, suggestionHint } from './findDimension.ts';

@@ -1,5 +1,5 @@
 import { partitionVector } from '../index/partitionVector.ts';
-import type { StoredGroup } from './ProfileStore.ts';
+import type { StoredGroup } from '../store/ProfileStore.ts';
 import { closestRows } from './closestRows.ts';
 import { searchIndexPool } from './searchIndexPool.ts';
 

@@ -1,4 +1,4 @@
-import type { ProfileStore } from './ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import { storedGroup } from './storedGroup.ts';
 import { valueAt } from './valueAt.ts';
 import type { Target } from './Target.ts';

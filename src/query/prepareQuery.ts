@@ -2,7 +2,7 @@ import { QueryError } from '../errors/KindredError.ts';
 import { eligibleRows } from './eligibleRows.ts';
 import { targetWeight } from './missingAwareDistance.ts';
 import type { PoolFilter } from './PoolFilter.ts';
-import type { ProfileStore, StoredGroup } from './ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { storedGroup } from './storedGroup.ts';
 import type { Target } from './Target.ts';
 import { userWeights, type WeightPreset } from './weightPresets.ts';

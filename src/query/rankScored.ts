@@ -1,4 +1,4 @@
-import type { StoredGroup } from './ProfileStore.ts';
+import type { StoredGroup } from '../store/ProfileStore.ts';
 import type { ScoredRow } from './scoreRow.ts';
 import { valueAt } from './valueAt.ts';
 

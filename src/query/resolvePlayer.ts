@@ -1,5 +1,5 @@
 import { QueryError } from '../errors/KindredError.ts';
-import type { ProfileStore } from './ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 
 const fold = (s: string): string => s.normalize('NFD').replace(/\p{Diacritic}/gu, '').toLowerCase().trim();
 

@@ -2,7 +2,7 @@ import { valueAt } from './valueAt.ts';
 import { QueryError } from '../errors/KindredError.ts';
 import type { Position } from '../ingest/types.ts';
 import { groupOf, type PositionGroup } from '../profiles/positionGroup.ts';
-import type { ProfileStore } from './ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 
 export interface TargetRow {
   readonly group: PositionGroup;

@@ -1,6 +1,6 @@
 import { QueryError } from '../errors/KindredError.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
-import type { ProfileStore, StoredGroup } from './ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 
 /**
  * A position group of the store, or the query error every job gives when the store has none

@@ -1,7 +1,7 @@
 import { ParameterError } from '../errors/ParameterError.ts';
 import { DEFAULT_SALARY_LIMIT, findCheaperComps, type CheaperOptions, type SalaryLimit } from '../outlook/findCheaperComps.ts';
 import type { CheaperResult } from '../outlook/types.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
 import { targetFrom } from './targetFrom.ts';

@@ -1,5 +1,5 @@
 import { findComps } from '../query/findComps.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { CompsResult } from '../query/types.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';

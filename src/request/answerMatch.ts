@@ -1,7 +1,7 @@
 import { ParameterError } from '../errors/ParameterError.ts';
 import { matchPlayers, type MatchOptions } from '../outlook/matchPlayers.ts';
 import type { MatchResult } from '../outlook/types.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import { resolvePlayer } from '../query/resolvePlayer.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';

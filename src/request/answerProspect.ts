@@ -1,7 +1,7 @@
 import { findProspectComps, type ProspectOptions } from '../outlook/findProspectComps.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import type { ProspectResult } from '../outlook/types.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
 import { targetFrom } from './targetFrom.ts';

@@ -2,7 +2,7 @@ import { ParameterError } from '../errors/ParameterError.ts';
 import type { CompsOptions } from '../query/findComps.ts';
 import { dimensionSuggestions, findDimension, suggestionHint, type NamedDimension } from '../query/findDimension.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { JobRequest } from './JobRequest.ts';
 
 /**

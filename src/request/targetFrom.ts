@@ -1,7 +1,7 @@
 import { ParameterError } from '../errors/ParameterError.ts';
 import { parseWant } from '../query/parseWant.ts';
 import { playerTarget } from '../query/playerTarget.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import { resolvePlayer } from '../query/resolvePlayer.ts';
 import { selectTargetRow } from '../query/selectTargetRow.ts';
 import type { Target } from '../query/Target.ts';

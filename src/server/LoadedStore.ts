@@ -1,4 +1,4 @@
-import type { ProfileStore } from '../query/ProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { TargetRow } from '../query/selectTargetRow.ts';
 import { poolMap, type PoolMap } from './poolMap.ts';

@@ -5,7 +5,7 @@ export type StoreLoader = (dir: string) => Promise<ServedStore>;
 
 /**
  * The store the server answers from. Queries read `current` and never wait; `reload` reads the
- * store folder again in full (manifest and checksums verified by loadProfileStore) and swaps it in
+ * store folder again in full (manifest and checksums verified by openProfileStore) and swaps it in
  * only when that succeeded, so a query sees the old store or the new one, never a mix. A failed
  * reload leaves the old store in place and rejects with the load error. Reloads run one at a time.
  */

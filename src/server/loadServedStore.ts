@@ -2,9 +2,8 @@ import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { StoreError } from '../errors/KindredError.ts';
 import { MANIFEST_NAME } from '../store/manifest.ts';
-import { loadProfileStore } from '../query/loadProfileStore.ts';
-import type { ProfileStore } from '../query/ProfileStore.ts';
-import { loadOutcomes } from '../outlook/loadOutcomes.ts';
+import { openProfileStore } from '../store/openProfileStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import { readBacktestFile } from '../outlook/backtestStore.ts';
 import type { BacktestFile } from '../outlook/backtestFile.ts';
@@ -31,15 +30,21 @@ const manifestText = (dir: string): Promise<string> => readFile(join(dir, MANIFE
 export async function loadServedStore(dir: string): Promise<ServedStore> {
   for (let attempt = 1; ; attempt++) {
     const before = await manifestText(dir);
-    const store = await loadProfileStore(dir);
-    const outcomes = await loadOutcomes(dir, store).catch((e: unknown) => {
-      if (e instanceof StoreError) return e;
-      throw e;
-    });
+    const store = await openProfileStore(dir);
+    const outcomes = outcomesOf(store);
     const backtest = await readBacktestFile(store);
     if ((await manifestText(dir)) === before) return { store, outcomes, backtest };
     if (attempt >= ATTEMPTS) {
       throw new StoreError('kindred.store.corrupt', `${dir} changed ${ATTEMPTS} times while it was read; try the reload again when the build is done`, { dir });
     }
+  }
+}
+
+function outcomesOf(store: ProfileStore): Outcomes | StoreError {
+  try {
+    return store.outcomes();
+  } catch (error) {
+    if (error instanceof StoreError) return error;
+    throw error;
   }
 }

@@ -1,5 +1,5 @@
 import { round } from '../stats/round.ts';
-import type { StoredGroup, ProfileStore } from '../query/ProfileStore.ts';
+import type { StoredGroup, ProfileStore } from '../store/ProfileStore.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import { pcaProjection } from './pcaProjection.ts';
 import type { PoolMap } from '../request/apiContract.ts';

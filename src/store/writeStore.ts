@@ -2,7 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { mkdir, open, readdir, rename, rm, stat } from 'node:fs/promises';
 import { dirname, join, resolve } from 'node:path';
 import { KindredError, StoreError } from '../errors/KindredError.ts';
-import { withCause } from '../index/withCause.ts';
+import { withCause } from '../errors/withCause.ts';
 import { fileNameProblem } from './checkFileName.ts';
 import { type FileEntry, MANIFEST_NAME, type Manifest, manifestSchema, STORE_FORMAT, STORE_FORMAT_VERSION } from './manifest.ts';
 import { sha256Hex } from './sha256Hex.ts';

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { buildStore } from '../../src/build/buildStore.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
 import { DEFAULT_STANDARDISE } from '../../src/profiles/standardiseByStratum.ts';
 
@@ -15,7 +15,7 @@ describe('buildStore(roster, store, options)', () => {
       profile: { minimums: { minPa: 400, minBf: 400 }, standardise: DEFAULT_STANDARDISE },
     });
     expect(summary.skipped.hittersBelowMinimum).toBeGreaterThan(0);
-    const store = await loadProfileStore(join(dir, 'store'));
+    const store = await openProfileStore(join(dir, 'store'));
     for (const g of store.groups.values()) {
       for (const strata of g.strata.values()) for (const s of strata.values()) expect(Number.isFinite(s.sd)).toBe(true);
     }

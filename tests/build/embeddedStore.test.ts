@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { CompsResult } from '../../src/query/types.ts';
 import { runCli } from '../helpers/runCli.ts';
 
@@ -47,7 +47,7 @@ beforeAll(async () => {
     expect(r.code, r.stderr).toBe(0);
   }
   // an infielder with a full recent profile: tracking dimensions present, so more than 12 in play
-  const store = await loadProfileStore(join(dir, 'pca'));
+  const store = await openProfileStore(join(dir, 'pca'));
   const g = store.groups.get('IF');
   if (!g) throw new Error('no IF group in the test league');
   let best = 0;

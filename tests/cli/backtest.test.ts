@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../helpers/runCli.ts';
 import { buildSimStore, type SimStore } from '../outlook/simStore.ts';
 import { storeBacktest } from '../../src/cli/commands/storeBacktest.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 
 let sim: SimStore;
 let charts: string;
@@ -14,7 +14,7 @@ let prospectId = '';
 beforeAll(async () => {
   sim = await buildSimStore();
   charts = await mkdtemp(join(tmpdir(), 'kindred-charts-'));
-  const store = await loadProfileStore(sim.storeDir);
+  const store = await openProfileStore(sim.storeDir);
   const g = store.groups.get('IF');
   const aa = store.levels.indexOf('AA');
   for (let i = 0; g && i < g.n && prospectId === ''; i++) if (g.season[i] === 2026 && g.level[i] === aa && !Number.isNaN(g.age[i] ?? NaN)) prospectId = store.players[g.player[i] ?? -1]?.playerId ?? '';

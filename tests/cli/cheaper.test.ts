@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import { runCli } from '../helpers/runCli.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { buildSimStore, type SimStore } from '../outlook/simStore.ts';
 import { cheaperResultSchema } from '../outlook/outlookContract.ts';
 
@@ -16,7 +16,7 @@ let unpaid = '';
 beforeAll(async () => {
   sim = await buildSimStore();
   store = sim.storeDir;
-  const s = await loadProfileStore(store);
+  const s = await openProfileStore(store);
   const g = s.groups.get('IF');
   if (!g) throw new Error('no infielders');
   for (let i = 0; i < g.n; i++) {

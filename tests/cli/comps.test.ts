@@ -5,8 +5,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../helpers/runCli.ts';
 import { compsResultSchema } from './compsContract.ts';
 import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 
 let dir: string;
 let store: string;
@@ -19,7 +19,7 @@ beforeAll(async () => {
   store = join(dir, 'store');
   const built = await runCli('build', DEMO_ROSTER, '--store', store, '--no-backtest');
   expect(built.code).toBe(0);
-  profiles = await loadProfileStore(store);
+  profiles = await openProfileStore(store);
   const c = profiles.groups.get('C');
   if (!c) throw new Error('demo roster has no catchers');
   const last = c.n - 1;

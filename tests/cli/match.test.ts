@@ -17,8 +17,8 @@ let hitter = '';
 beforeAll(async () => {
   sim = await buildSimStore();
   store = sim.storeDir;
-  const { loadProfileStore } = await import('../../src/query/loadProfileStore.ts');
-  const s = await loadProfileStore(store);
+  const { openProfileStore } = await import('../../src/store/openProfileStore.ts');
+  const s = await openProfileStore(store);
   const g = s.groups.get('SP');
   const mlb = s.levels.indexOf('MLB');
   for (let i = 0; g && i < g.n; i++) if (g.level[i] === mlb) target = s.players[g.player[i] as number]?.playerId ?? '';

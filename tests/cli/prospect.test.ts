@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import { runCli } from '../helpers/runCli.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { openStore } from '../../src/store/openStore.ts';
 import { writeStore } from '../../src/store/writeStore.ts';
 import { buildSimStore, type SimStore } from '../outlook/simStore.ts';
@@ -19,7 +19,7 @@ let lastSeason = 0;
 beforeAll(async () => {
   sim = await buildSimStore();
   store = sim.storeDir;
-  const s = await loadProfileStore(store);
+  const s = await openProfileStore(store);
   const pick = (group: 'IF' | 'SP'): string => {
     const g = s.groups.get(group);
     const aa = s.levels.indexOf('AA');

@@ -3,8 +3,8 @@ import { mkdtemp, mkdir, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buildStore } from '../../src/build/buildStore.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { DEFAULT_STANDARDISE } from '../../src/profiles/standardiseByStratum.ts';
 
 export const HAND_ROSTER: Record<string, string> = {
@@ -48,5 +48,5 @@ export async function handStore(): Promise<ProfileStore> {
     lenient: false,
     profile: { minimums: { minPa: 30, minBf: 30 }, standardise: DEFAULT_STANDARDISE },
   });
-  return loadProfileStore(join(dir, 'store'));
+  return openProfileStore(join(dir, 'store'));
 }

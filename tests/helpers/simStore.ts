@@ -5,8 +5,8 @@ import { join } from 'node:path';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { buildStore } from '../../src/build/buildStore.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import type { SimLeague } from '../../src/sim/simTypes.ts';
 
 export interface SimStore {
@@ -24,5 +24,5 @@ export async function simStore(targetPlayerSeasons = 8000, seed = 4242): Promise
   const storeDir = join(dir, 'store');
   await writeLeagueCsv(league, rosterDir);
   await buildStore(rosterDir, storeDir, { lenient: false });
-  return { dir, rosterDir, storeDir, league, store: await loadProfileStore(storeDir) };
+  return { dir, rosterDir, storeDir, league, store: await openProfileStore(storeDir) };
 }

@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import { loadOutcomes } from '../../src/outlook/loadOutcomes.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { backtestStore } from '../../src/outlook/backtestStore.ts';
 import type { BacktestResult } from '../../src/outlook/runBacktest.ts';
 import { buildSimStore, type SimStore } from './simStore.ts';
@@ -14,8 +13,8 @@ let result: BacktestResult;
 
 beforeAll(async () => {
   sim = await buildSimStore({ seed: 101, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: 15000 });
-  const store = await loadProfileStore(sim.storeDir);
-  const outcomes = await loadOutcomes(sim.storeDir, store);
+  const store = await openProfileStore(sim.storeDir);
+  const outcomes = store.outcomes();
   result = backtestStore(store, outcomes, { perSeason: 60, rounds: 200 }).result;
   for (const k of result.kinds) {
     console.log(`${k.kind}: ${k.targets} at cuts ${result.cuts.join(',')}, Brier ${k.brier.calibrated.toFixed(4)} vs level-and-age ${k.brier.levelAge.toFixed(4)}, skill ${k.skillVsLevelAge.value.toFixed(3)} [${k.skillVsLevelAge.low.toFixed(3)}, ${k.skillVsLevelAge.high.toFixed(3)}], raw comps' share ${k.brier.comps.toFixed(4)}, REL ${k.murphy.reliability.toFixed(4)}, peak coverage ${k.peakCoverage.value.toFixed(2)}`);

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { closestSeasonRow } from '../../src/outlook/closestSeasonRow.ts';
 import { QueryError } from '../../src/errors/KindredError.ts';
 import { buildSimStore, type SimStore } from './simStore.ts';
@@ -14,7 +14,7 @@ let rows: number[] = [];
 
 beforeAll(async () => {
   sim = await buildSimStore({ seed: 78, firstSeason: 2010, lastSeason: 2022, targetPlayerSeasons: 3000 });
-  store = await loadProfileStore(sim.storeDir);
+  store = await openProfileStore(sim.storeDir);
   g = store.groups.get('SP') as StoredGroup;
   const byPlayer = new Map<number, number[]>();
   for (let i = 0; i < g.n; i++) byPlayer.set(g.player[i] as number, [...(byPlayer.get(g.player[i] as number) ?? []), i]);

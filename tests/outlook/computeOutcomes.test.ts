@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { computeOutcomes } from '../../src/outlook/computeOutcomes.ts';
-import { outcomesFileSchema } from '../../src/outlook/outcomesFile.ts';
+import { outcomesFileSchema } from '../../src/store/outcomesFile.ts';
 import { fipMinus } from '../../src/stats/fipMinus.ts';
 import { opsPlus } from '../../src/stats/opsPlus.ts';
 import { bat, pitch, roster } from './rosterLines.ts';

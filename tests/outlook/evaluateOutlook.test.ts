@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
-import { loadOutcomes } from '../../src/outlook/loadOutcomes.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import type { Outcomes } from '../../src/outlook/Outcomes.ts';
 import { evaluateOutlook, type OutlookEvaluation } from '../../src/outlook/evaluateOutlook.ts';
 import { DEFAULT_PROSPECT_OPTIONS } from '../../src/outlook/findProspectComps.ts';
@@ -16,8 +15,8 @@ let ev: OutlookEvaluation;
 
 beforeAll(async () => {
   sim = await buildSimStore();
-  store = await loadProfileStore(sim.storeDir);
-  outcomes = await loadOutcomes(sim.storeDir, store);
+  store = await openProfileStore(sim.storeDir);
+  outcomes = store.outcomes();
   ev = evaluateOutlook(store, outcomes, { prospect: DEFAULT_PROSPECT_OPTIONS });
   const line = (k: string, e: OutlookEvaluation['hitter']): string =>
     `${k}: ${e.targets} targets, Brier ${e.brier.comps.toFixed(4)} (base rate ${e.brier.baseline.toFixed(4)}), p10-p90 coverage ${e.peakCoverage.comps.toFixed(2)} of ${e.peakCoverage.n}, Spearman p50 ${e.peakSpearman.comps.toFixed(2)} (${e.peakSpearman.baseline.toFixed(2)}), MLB seasons ${e.seasonsSpearman.comps.toFixed(2)} (${e.seasonsSpearman.baseline.toFixed(2)})`;

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../../src/query/findComps.ts';
 import { findCheaperComps, salaryOf } from '../../src/outlook/findCheaperComps.ts';
@@ -17,7 +17,7 @@ let targetSalary: number;
 
 beforeAll(async () => {
   sim = await buildSimStore();
-  store = await loadProfileStore(sim.storeDir);
+  store = await openProfileStore(sim.storeDir);
   const g = store.groups.get('OF') as StoredGroup;
   const paid = rowsWhere(store, 'OF', (i) => (salaryOf(store, g.player[i] as number, g.season[i] as number) ?? 0) > 5_000_000);
   const at = paid[paid.length - 1];

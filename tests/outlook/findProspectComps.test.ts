@@ -1,8 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
-import { loadOutcomes } from '../../src/outlook/loadOutcomes.ts';
 import type { Outcomes } from '../../src/outlook/Outcomes.ts';
 import { DEFAULT_PROSPECT_OPTIONS, findProspectComps, type ProspectOptions } from '../../src/outlook/findProspectComps.ts';
 import { summariseOutlook } from '../../src/outlook/summariseOutlook.ts';
@@ -19,8 +18,8 @@ const opts = (over: Partial<ProspectOptions> = {}): ProspectOptions => ({ ...DEF
 
 beforeAll(async () => {
   sim = await buildSimStore();
-  store = await loadProfileStore(sim.storeDir);
-  outcomes = await loadOutcomes(sim.storeDir, store);
+  store = await openProfileStore(sim.storeDir);
+  outcomes = store.outcomes();
   g = store.groups.get('IF') as StoredGroup;
   const aa = store.levels.indexOf('AA');
   // AA infielders in the last season: the pool holds complete and censored earlier seasons

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../../src/query/findComps.ts';
 import { matchPlayers } from '../../src/outlook/matchPlayers.ts';
@@ -15,7 +15,7 @@ const options = { comps: { ...DEFAULT_COMPS_OPTIONS, exact: true }, candidate: {
 
 beforeAll(async () => {
   sim = await buildSimStore();
-  store = await loadProfileStore(sim.storeDir);
+  store = await openProfileStore(sim.storeDir);
   g = store.groups.get('SP') as StoredGroup;
   const mlb = store.levels.indexOf('MLB');
   const rows = rowsWhere(store, 'SP', (i) => g.level[i] === mlb);

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import { effectiveWeights } from '../../src/query/prepareQuery.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../../src/query/findComps.ts';
@@ -17,7 +17,7 @@ let w: Float64Array;
 
 beforeAll(async () => {
   sim = await buildSimStore({ seed: 77, firstSeason: 2010, lastSeason: 2022, targetPlayerSeasons: 4000 });
-  store = await loadProfileStore(sim.storeDir);
+  store = await openProfileStore(sim.storeDir);
   g = store.groups.get('OF') as StoredGroup;
   const rows = rowsWhere(store, 'OF', (i) => g.level[i] === store.levels.indexOf('AAA'));
   target = playerTarget(store, rows[0] as (typeof rows)[number]);

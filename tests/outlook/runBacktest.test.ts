@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
-import { loadOutcomes, parseOutcomesFile } from '../../src/outlook/loadOutcomes.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
+import { decodeOutcomesFile as parseOutcomesFile } from '../../src/store/outcomesFile.ts';
 import { Outcomes } from '../../src/outlook/Outcomes.ts';
-import { OUTCOMES_FILE } from '../../src/outlook/outcomesFile.ts';
+import { OUTCOMES_FILE } from '../../src/store/storeFileNames.ts';
 import { collectForecasts, type RawForecast } from '../../src/outlook/collectForecasts.ts';
 import { runBacktest, trainingFor } from '../../src/outlook/runBacktest.ts';
 import { DEFAULT_PROSPECT_OPTIONS } from '../../src/outlook/findProspectComps.ts';
@@ -20,8 +20,8 @@ let plantedId = '';
 
 beforeAll(async () => {
   sim = await buildSimStore();
-  store = await loadProfileStore(sim.storeDir);
-  outcomes = await loadOutcomes(sim.storeDir, store);
+  store = await openProfileStore(sim.storeDir);
+  outcomes = store.outcomes();
   const file = parseOutcomesFile(await store.opened.readText(OUTCOMES_FILE), OUTCOMES_FILE);
   // A hitter who was a prospect before the cut and never reached the top level gets a star season after it.
   const g = store.groups.get('IF');

@@ -25,7 +25,7 @@ export async function buildSimStore(options: SimOptions = TEST_LEAGUE): Promise<
   return { dir, rosterDir, storeDir, remove: () => rm(dir, { recursive: true, force: true }) };
 }
 
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import type { TargetRow } from '../../src/query/selectTargetRow.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 

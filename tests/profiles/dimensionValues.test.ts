@@ -9,7 +9,7 @@
  * z-score with the sample standard deviation (n - 1).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { handStore } from '../helpers/handStore.ts';
 
 let store: ProfileStore;

@@ -11,10 +11,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { buildStore } from '../../src/build/buildStore.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findCompsWithRows } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { embeddingModelFromJSON } from '../../src/embed/EmbeddingModel.ts';
 import { writeStore } from '../../src/store/writeStore.ts';
 import { openStore } from '../../src/store/openStore.ts';
@@ -28,7 +28,7 @@ beforeAll(async () => {
   const league = simulateLeague({ seed: 4242, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: 8000 });
   await writeLeagueCsv(league, join(dir, 'roster'));
   await buildStore(join(dir, 'roster'), join(dir, 'store'), { lenient: false, embed: { method: 'pca', driverTargets: 5, seed: 3 } });
-  store = await loadProfileStore(join(dir, 'store'));
+  store = await openProfileStore(join(dir, 'store'));
 }, 120_000);
 
 afterAll(async () => {
@@ -100,7 +100,7 @@ describe('findComps in a PCA space', () => {
   });
 });
 
-describe('loadProfileStore with an embedding', () => {
+describe('openProfileStore with an embedding', () => {
   it('refuses a store whose embedding summary disagrees with its group (checksums all valid)', async () => {
     const src = await openStore(join(dir, 'store'));
     const files = new Map<string, Uint8Array | string>();
@@ -109,7 +109,7 @@ describe('loadProfileStore with an embedding', () => {
     files.set('group-RP.embedding.json', JSON.stringify({ ...summary, dim: summary.dim + 1 }));
     const bad = join(dir, 'disagreeing');
     await writeStore(bad, { params: src.manifest.params, files });
-    await expect(loadProfileStore(bad)).rejects.toThrow(StoreError);
-    await expect(loadProfileStore(bad)).rejects.toThrow(/group-RP\.embedding\.json: does not match the group: code size/);
+    await expect(openProfileStore(bad)).rejects.toThrow(StoreError);
+    await expect(openProfileStore(bad)).rejects.toThrow(/group-RP\.embedding\.json: does not match the group: code size/);
   });
 });

@@ -4,7 +4,7 @@ import { effectiveWeights } from '../../src/query/prepareQuery.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps, findCompsWithRows } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import { parseWant } from '../../src/query/parseWant.ts';
-import type { StoredGroup } from '../../src/query/ProfileStore.ts';
+import type { StoredGroup } from '../../src/store/ProfileStore.ts';
 import type { Target } from '../../src/query/Target.ts';
 
 let s: SimStore;

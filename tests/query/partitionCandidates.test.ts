@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { partitionCandidates, type CandidateQuery } from '../../src/query/partitionCandidates.ts';
-import type { StoredPartition } from '../../src/query/ProfileStore.ts';
+import type { StoredPartition } from '../../src/store/ProfileStore.ts';
 import { GuardedIndex } from '../../src/index/GuardedIndex.ts';
 import { partitionVectors } from '../../src/build/buildStore.ts';
 import { mulberry32 } from '../index/randomVectors.ts';

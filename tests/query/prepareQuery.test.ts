@@ -14,7 +14,7 @@ import { echoPool, echoQuery } from '../../src/query/echoQuery.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import { prepareQuery } from '../../src/query/prepareQuery.ts';
-import type { ProfileStore, StoredGroup } from '../../src/query/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { scoreRow } from '../../src/query/scoreRow.ts';
 import type { Target } from '../../src/query/Target.ts';
 import { handStore } from '../helpers/handStore.ts';

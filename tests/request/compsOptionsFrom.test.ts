@@ -5,8 +5,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildStore } from '../../src/build/buildStore.ts';
 import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
 import { plausibleRange } from '../../src/ingest/fileColumns.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { compsOptionsFrom } from '../../src/request/compsOptionsFrom.ts';
 import { readRequest } from '../../src/request/readRequest.ts';
 import { targetFrom } from '../../src/request/targetFrom.ts';
@@ -17,7 +17,7 @@ let store: ProfileStore;
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'kindred-request-'));
   await buildStore(DEMO_ROSTER, join(dir, 'store'), { lenient: false });
-  store = await loadProfileStore(join(dir, 'store'));
+  store = await openProfileStore(join(dir, 'store'));
 });
 afterAll(() => rm(dir, { recursive: true, force: true }));
 

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { createServer, type RunningServer } from '../../src/server/createServer.ts';
 import { main } from '../../src/cli/main.ts';
 import { captureIo } from '../helpers/captureIo.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { StoreError } from '../../src/errors/KindredError.ts';
 import { buildDemoStore, errorOf, json, rawExchange, send, tempDir, writeTinyPage } from './serverFixture.ts';
 
@@ -50,7 +50,7 @@ describe('GET /api/comps answers what `kindred comps --format json` prints', () 
     ['flags and coverage', ['--exact', '--all-seasons', '--min-coverage', '0.8', '--k', '12'], 'exact=true&all-seasons=1&min-coverage=0.8&k=12'],
   ];
   it.each(cases)('with %s', async (_name, args, query) => {
-    const store = await loadProfileStore(storeDir);
+    const store = await openProfileStore(storeDir);
     const g = store.groups.get('IF');
     const player = store.players[g?.player[0] ?? 0]?.playerId ?? '';
     const season = String(g?.season[0] ?? 0);
@@ -71,7 +71,7 @@ describe('GET /api/comps answers what `kindred comps --format json` prints', () 
   });
 
   it('with a player named by part of his name', async () => {
-    const store = await loadProfileStore(storeDir);
+    const store = await openProfileStore(storeDir);
     const counts = new Map<string, number>();
     for (const p of store.players) counts.set(p.name, (counts.get(p.name) ?? 0) + 1);
     const unique = store.players.find((p, i) => counts.get(p.name) === 1 && store.groups.get('C')?.player.includes(i));
@@ -155,7 +155,7 @@ describe('GET /api/comps answers 404 for an unknown player or player-season', ()
 
 describe('GET /api/players', () => {
   it('suggests players whose name contains the text, with their profiled seasons latest first', async () => {
-    const store = await loadProfileStore(storeDir);
+    const store = await openProfileStore(storeDir);
     const someone = store.players[5];
     const part = (someone?.name.split(' ')[1] ?? '').slice(0, 4);
     const r = await get(`/api/players?q=${encodeURIComponent(part)}&limit=20`);
@@ -200,7 +200,7 @@ describe('GET /api/dims answers what `kindred dims --format json` prints', () =>
 
 describe('GET /api/map', () => {
   it('gives one point per player-season of the group, with the share of variance of each axis', async () => {
-    const store = await loadProfileStore(storeDir);
+    const store = await openProfileStore(storeDir);
     const r = await get('/api/map?group=C');
     expect(r.status).toBe(200);
     const m = json(r) as { n: number; x: number[]; y: number[]; player_id: string[]; season: number[]; level: string[]; explained: number[] };
@@ -222,7 +222,7 @@ describe('GET /api/map', () => {
 
 describe('GET /api/info', () => {
   it('summarises the loaded store', async () => {
-    const store = await loadProfileStore(storeDir);
+    const store = await openProfileStore(storeDir);
     const v = json(await get('/api/info')) as { levels: string[]; groups: Record<string, { n: number }>; generation: number; presets: string[] };
     expect(v.levels).toEqual(store.levels);
     expect(v.groups.IF?.n).toBe(store.groups.get('IF')?.n);
@@ -334,7 +334,7 @@ describe('hardening', () => {
 describe('failures inside the server', () => {
   it('answers 500 with a plain message and no stack, and logs the stack', async () => {
     const t = await tempDir('kindred-serve-broken-');
-    const store = await loadProfileStore(storeDir);
+    const store = await openProfileStore(storeDir);
     class BrokenLookup extends Map<string, number> {
       override get(): never {
         throw new TypeError('internal detail /very/secret/path');

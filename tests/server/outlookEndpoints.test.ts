@@ -4,8 +4,8 @@ import { join } from 'node:path';
 import { createServer, type RunningServer } from '../../src/server/createServer.ts';
 import { main } from '../../src/cli/main.ts';
 import { captureIo } from '../helpers/captureIo.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
-import type { ProfileStore } from '../../src/query/ProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { buildDemoStore, errorOf, json, send, tempDir } from './serverFixture.ts';
 
 let root = '';
@@ -43,7 +43,7 @@ beforeAll(async () => {
   remove = t.remove;
   storeDir = join(root, 'store');
   await buildDemoStore(storeDir);
-  store = await loadProfileStore(storeDir);
+  store = await openProfileStore(storeDir);
   srv = await createServer({ storeDir, port: 0, webRoot: join(root, 'no-page') });
   host = new URL(srv.url).host;
 });

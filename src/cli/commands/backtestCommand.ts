@@ -5,8 +5,7 @@ import type { CliIo } from '../CliIo.ts';
 import * as parse from '../../request/valueParsers.ts';
 import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { KindredError, UsageError } from '../../errors/KindredError.ts';
-import { loadProfileStore } from '../../query/loadProfileStore.ts';
-import { loadOutcomes } from '../../outlook/loadOutcomes.ts';
+import { openProfileStore } from '../../store/openProfileStore.ts';
 import { backtestStore } from '../../outlook/backtestStore.ts';
 import { DEFAULT_PROSPECT_OPTIONS } from '../../outlook/findProspectComps.ts';
 import { reliabilitySvg } from '../../outlook/charts/reliabilitySvg.ts';
@@ -45,8 +44,8 @@ export function backtestCommand(io: CliIo): Command {
     .option('--charts <dir>', 'also write reliability and coverage charts (SVG) into this folder')
     .action(async (raw: { store: string; cuts?: number[]; group?: 'hitters' | 'pitchers'; format: string; charts?: string }) => {
       if (raw.format === 'csv') throw new UsageError('--format csv: expected table or json');
-      const store = await loadProfileStore(raw.store);
-      const outcomes = await loadOutcomes(raw.store, store);
+      const store = await openProfileStore(raw.store);
+      const outcomes = store.outcomes();
       const groups = raw.group === undefined ? undefined : POSITION_GROUPS.filter((g) => isPitcherGroup(g) === (raw.group === 'pitchers'));
       const { file } = backtestStore(store, outcomes, {
         prospect: DEFAULT_PROSPECT_OPTIONS,

@@ -3,8 +3,8 @@ import type { CliIo } from '../CliIo.ts';
 import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
-import { loadProfileStore } from '../../query/loadProfileStore.ts';
-import type { ProfileStore } from '../../query/ProfileStore.ts';
+import { openProfileStore } from '../../store/openProfileStore.ts';
+import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { findCheaperComps } from '../../outlook/findCheaperComps.ts';
 import type { CheaperResult } from '../../outlook/types.ts';
 import { cheaperTable } from '../../report/cheaperTable.ts';
@@ -28,7 +28,7 @@ export function cheaperCommand(io: CliIo, setExit: (code: number) => void): Comm
   addRequestOptions(cmd, 'cheaper');
   cmd.action(async (player: string | undefined) => {
     const req = requestFrom(cmd, 'cheaper', { player });
-    const store = await loadProfileStore(req.need('store'));
+    const store = await openProfileStore(req.need('store'));
     const format = req.need('format');
     const batch = req.get('batch');
     if (batch !== undefined) {

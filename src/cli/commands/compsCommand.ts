@@ -2,8 +2,8 @@ import { Command } from 'commander';
 import type { CliIo } from '../CliIo.ts';
 import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
-import { loadProfileStore } from '../../query/loadProfileStore.ts';
-import type { ProfileStore } from '../../query/ProfileStore.ts';
+import { openProfileStore } from '../../store/openProfileStore.ts';
+import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { findComps } from '../../query/findComps.ts';
 import type { CompsResult } from '../../query/types.ts';
 import { compsTable } from '../../report/compsTable.ts';
@@ -29,7 +29,7 @@ export function compsCommand(io: CliIo, setExit: (code: number) => void): Comman
   addRequestOptions(cmd, 'comps');
   cmd.action(async (player: string | undefined) => {
     const req = requestFrom(cmd, 'comps', { player });
-    const store = await loadProfileStore(req.need('store'));
+    const store = await openProfileStore(req.need('store'));
     const format = req.need('format');
     const batch = req.get('batch');
     if (batch !== undefined) {

@@ -2,14 +2,14 @@ import { Command } from 'commander';
 import { fileURLToPath } from 'node:url';
 import type { CliIo } from '../CliIo.ts';
 import { buildStore } from '../../build/buildStore.ts';
-import { loadProfileStore } from '../../query/loadProfileStore.ts';
+import { openProfileStore } from '../../store/openProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../../query/findComps.ts';
 import { playerTarget } from '../../query/playerTarget.ts';
 import { compsTable } from '../../report/compsTable.ts';
 import { storeBacktest } from './storeBacktest.ts';
 import { formatBuildSummary } from './buildCommand.ts';
 import { DEFAULT_STORE } from '../../request/parameters.ts';
-import type { ProfileStore } from '../../query/ProfileStore.ts';
+import type { ProfileStore } from '../../store/ProfileStore.ts';
 import type { TargetRow } from '../../query/selectTargetRow.ts';
 
 /** The bundled invented league. */
@@ -39,7 +39,7 @@ export function demoCommand(io: CliIo): Command {
       const summary = await buildStore(DEMO_ROSTER, raw.store, { lenient: false });
       io.stderr.write(formatBuildSummary(summary));
       await storeBacktest(raw.store, io);
-      const store = await loadProfileStore(raw.store);
+      const store = await openProfileStore(raw.store);
       const at = featuredTarget(store);
       if (!at) {
         io.stderr.write('The demo roster has no catcher at the top level.\n');

@@ -4,10 +4,10 @@ import { Command, InvalidArgumentError } from 'commander';
 import Table from 'cli-table3';
 import type { CliIo } from '../CliIo.ts';
 import { DEFAULT_STORE } from '../../request/parameters.ts';
-import { loadProfileStore } from '../../query/loadProfileStore.ts';
-import type { ProfileStore } from '../../query/ProfileStore.ts';
-import { chartsFolderOf } from '../../embed/groupEmbeddingFile.ts';
-import type { EmbeddingSearchRow } from '../../embed/groupEmbeddingFile.ts';
+import { openProfileStore } from '../../store/openProfileStore.ts';
+import type { ProfileStore } from '../../store/ProfileStore.ts';
+import { chartsFolderOf } from '../../store/storeFileNames.ts';
+import type { EmbeddingSearchRow } from '../../store/groupEmbeddingFile.ts';
 import type { PositionGroup } from '../../profiles/positionGroup.ts';
 
 /** What `kindred embedding --format json` prints for one group. */
@@ -99,7 +99,7 @@ export function embeddingCommand(io: CliIo): Command {
     .option('--store <dir>', 'store folder made by kindred build', DEFAULT_STORE)
     .option('--format <format>', 'table or json', format, 'table')
     .action(async (raw: { store: string; format: 'table' | 'json' }) => {
-      const store = await loadProfileStore(raw.store);
+      const store = await openProfileStore(raw.store);
       const reports = embeddingReports(store);
       if (raw.format === 'json') {
         io.stdout.write(JSON.stringify({ store: resolve(store.dir), space: store.params.space ?? 'input', groups: reports }, null, 2) + '\n');

@@ -3,8 +3,7 @@ import type { CliIo } from '../CliIo.ts';
 import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
-import { loadProfileStore } from '../../query/loadProfileStore.ts';
-import { loadOutcomes } from '../../outlook/loadOutcomes.ts';
+import { openProfileStore } from '../../store/openProfileStore.ts';
 import { findProspectComps } from '../../outlook/findProspectComps.ts';
 import type { ProspectResult } from '../../outlook/types.ts';
 import { calibrateOutlook } from '../../outlook/calibrateOutlook.ts';
@@ -30,8 +29,8 @@ export function prospectCommand(io: CliIo, setExit: (code: number) => void): Com
   addRequestOptions(cmd, 'prospect');
   cmd.action(async (player: string | undefined) => {
     const req = requestFrom(cmd, 'prospect', { player });
-    const store = await loadProfileStore(req.need('store'));
-    const outcomes = await loadOutcomes(req.need('store'), store);
+    const store = await openProfileStore(req.need('store'));
+    const outcomes = store.outcomes();
     const backtest = await readBacktestFile(store);
     const format = req.need('format');
     const batch = req.get('batch');

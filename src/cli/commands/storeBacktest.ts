@@ -1,6 +1,5 @@
 import type { CliIo } from '../CliIo.ts';
-import { loadProfileStore } from '../../query/loadProfileStore.ts';
-import { loadOutcomes } from '../../outlook/loadOutcomes.ts';
+import { openProfileStore } from '../../store/openProfileStore.ts';
 import { backtestStore, writeBacktestFile } from '../../outlook/backtestStore.ts';
 
 /**
@@ -9,8 +8,8 @@ import { backtestStore, writeBacktestFile } from '../../outlook/backtestStore.ts
  */
 export async function storeBacktest(storeDir: string, io: CliIo): Promise<void> {
   io.stderr.write('backtesting the prospect outlook...\n');
-  const store = await loadProfileStore(storeDir);
-  const outcomes = await loadOutcomes(storeDir, store);
+  const store = await openProfileStore(storeDir);
+  const outcomes = store.outcomes();
   const { file } = backtestStore(store, outcomes);
   await writeBacktestFile(storeDir, file);
   if (file.too_short) {

@@ -1,10 +1,11 @@
 /**
  * The JSON part of a position group in the store (`group-<G>.json`): dimensions, weights, strata and
  * the row metadata in columns. The numbers live beside it in `group-<G>.raw.f32` and `group-<G>.z.f32`.
+ * Written by encodeGroupFiles (src/store/encodeGroupFiles.ts), read by readGroup.
  */
 import { z } from 'zod';
-import { POSITION_GROUPS } from './positionGroup.ts';
-import { SKILL_FAMILIES } from './skillFamily.ts';
+import { POSITION_GROUPS } from '../profiles/positionGroup.ts';
+import { SKILL_FAMILIES } from '../profiles/skillFamily.ts';
 
 const dimensionInfoSchema = z.strictObject({
   name: z.string(),
@@ -62,29 +63,3 @@ export const groupFileSchema = z.strictObject({
 
 export type GroupFile = z.infer<typeof groupFileSchema>;
 
-export const playersFileSchema = z.strictObject({
-  levels: z.array(z.string()),
-  players: z.array(
-    z.strictObject({
-      player_id: z.string(),
-      name: z.string(),
-      birth_date: z.string().nullable(),
-      bats: z.enum(['L', 'R', 'S']).nullable(),
-      throws: z.enum(['L', 'R']).nullable(),
-    }),
-  ),
-  /** [player index, season, salary in USD] */
-  contracts: z.array(z.tuple([z.number().int(), z.number().int(), z.number()])),
-});
-
-export type PlayersFile = z.infer<typeof playersFileSchema>;
-
-export const groupFileNames = (
-  group: string,
-): { json: string; raw: string; z: string; index: string; partitionIndex: (i: number) => string } => ({
-  json: `group-${group}.json`,
-  raw: `group-${group}.raw.f32`,
-  z: `group-${group}.z.f32`,
-  index: `group-${group}.hnsw`,
-  partitionIndex: (i: number) => `group-${group}.p${i}.hnsw`,
-});

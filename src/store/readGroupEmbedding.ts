@@ -1,30 +1,24 @@
 import { StoreError } from '../errors/KindredError.ts';
 import { embeddingModelFromJSON, modelCodeSize, modelInputSize } from '../embed/EmbeddingModel.ts';
-import { GROUP_EMBEDDING_VERSION, groupEmbeddingFileNames, groupEmbeddingSchema } from '../embed/groupEmbeddingFile.ts';
-import type { OpenStore } from '../store/openStore.ts';
-import { bytesToFloat64 } from '../store/float64Bytes.ts';
-import type { StoredEmbedding } from './StoredEmbedding.ts';
 import { scaledEncoder } from '../embed/scaledEncoder.ts';
+import { bytesToFloat64 } from './float64Bytes.ts';
+import { GROUP_EMBEDDING_VERSION, groupEmbeddingSchema } from './groupEmbeddingFile.ts';
+import type { OpenStore } from './openStore.ts';
+import { corruptFile, parseJsonText } from './parseStoreJson.ts';
+import type { StoredEmbedding } from './StoredEmbedding.ts';
+import { groupEmbeddingFileNames } from './storeFileNames.ts';
 
-const corrupt = (dir: string, file: string, what: string): StoreError =>
-  new StoreError('kindred.store.corrupt', `${dir}/${file}: ${what}; rebuild the store`, { file });
-
-function parseJson(text: string, dir: string, file: string): unknown {
-  try {
-    return JSON.parse(text);
-  } catch (e) {
-    throw corrupt(dir, file, `not valid JSON (${e instanceof Error ? e.message : String(e)})`);
-  }
-}
+const corrupt = (dir: string, file: string, what: string): StoreError => corruptFile(`${dir}/${file}`, what);
+const parseJson = (text: string, dir: string, file: string): unknown => parseJsonText(text, `${dir}/${file}`);
 
 /**
- * Loads a group's embedding from a verified store (openStore has checked every file's size and sha256
+ * Reads a group's embedding from a verified store (openStore has checked every file's size and sha256
  * against the manifest, so a changed byte in the model, codes or summary is refused before this runs):
  * parses the summary (format tag, version, shape) and the model (PcaEmbedding or Autoencoder JSON,
  * each checks its own tag and shape), and checks that they agree with the group (space, d, code size,
  * n codes of that size, one driver per dimension). Any mismatch is StoreError `kindred.store.corrupt`.
  */
-export async function loadGroupEmbedding(
+export async function readGroupEmbedding(
   store: OpenStore,
   group: string,
   expected: { readonly space: 'pca' | 'autoencoder'; readonly dim: number; readonly d: number; readonly n: number; readonly dims: readonly string[] },

@@ -3,14 +3,14 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readRoster } from '../../src/ingest/readRoster.ts';
-import { loadProfileStore } from '../../src/query/loadProfileStore.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { computeOutcomes } from '../../src/outlook/computeOutcomes.ts';
-import { loadOutcomes, parseOutcomesFile } from '../../src/outlook/loadOutcomes.ts';
-import { OUTCOMES_FILE } from '../../src/outlook/outcomesFile.ts';
+import { decodeOutcomesFile } from '../../src/store/outcomesFile.ts';
+import { OUTCOMES_FILE } from '../../src/store/storeFileNames.ts';
 import { openStore } from '../../src/store/openStore.ts';
 import { writeStore } from '../../src/store/writeStore.ts';
 import { StoreError } from '../../src/errors/KindredError.ts';
-import { buildSimStore, type SimStore } from './simStore.ts';
+import { buildSimStore, type SimStore } from '../outlook/simStore.ts';
 
 let sim: SimStore;
 let scratch: string;
@@ -23,10 +23,10 @@ afterAll(async () => {
   await rm(scratch, { recursive: true, force: true });
 });
 
-describe('loadOutcomes(dir, store)', () => {
+describe('outcomes.json through openProfileStore(dir).outcomes()', () => {
   it('reads back what the build computed from the roster', async () => {
-    const store = await loadProfileStore(sim.storeDir);
-    const outcomes = await loadOutcomes(sim.storeDir, store);
+    const store = await openProfileStore(sim.storeDir);
+    const outcomes = store.outcomes();
     const file = computeOutcomes(await readRoster(sim.rosterDir));
     expect(outcomes.lastSeason).toBe(file.last_season);
     expect(outcomes.topLevel).toBe('MLB');
@@ -43,13 +43,13 @@ describe('loadOutcomes(dir, store)', () => {
     for (const name of Object.keys(opened.manifest.files)) if (name !== OUTCOMES_FILE) files.set(name, await opened.readBytes(name));
     const old = join(scratch, 'old-store');
     await writeStore(old, { params: opened.manifest.params, files });
-    const store = await loadProfileStore(old);
-    await expect(loadOutcomes(old, store)).rejects.toMatchObject({ code: 'kindred.store.missing' });
+    const store = await openProfileStore(old);
+    expect(() => store.outcomes()).toThrow(expect.objectContaining({ code: 'kindred.store.missing' }));
   });
 
   it('refuses another format or version, and content of the wrong shape', () => {
-    expect(() => parseOutcomesFile(JSON.stringify({ format: 'kindred-outcomes', version: 99 }), 'x')).toThrow(StoreError);
-    expect(() => parseOutcomesFile('{', 'x')).toThrow(/not valid JSON/);
-    expect(() => parseOutcomesFile(JSON.stringify({ format: 'kindred-outcomes', version: 1, top_level: 'MLB' }), 'x')).toThrow(/unexpected content/);
+    expect(() => decodeOutcomesFile(JSON.stringify({ format: 'kindred-outcomes', version: 99 }), 'x')).toThrow(StoreError);
+    expect(() => decodeOutcomesFile('{', 'x')).toThrow(/not valid JSON/);
+    expect(() => decodeOutcomesFile(JSON.stringify({ format: 'kindred-outcomes', version: 1, top_level: 'MLB' }), 'x')).toThrow(/unexpected content/);
   });
 });

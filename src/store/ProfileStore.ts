@@ -3,7 +3,8 @@ import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
 import type { GuardedIndex } from '../index/GuardedIndex.ts';
-import type { OpenStore } from '../store/openStore.ts';
+import type { Outcomes } from '../outlook/Outcomes.ts';
+import type { OpenStore } from './openStore.ts';
 import type { StoredEmbedding } from './StoredEmbedding.ts';
 
 export interface StoredPlayer {
@@ -53,9 +54,10 @@ export interface StoredGroup {
   readonly embedding?: StoredEmbedding;
 }
 
+/** A store opened for queries (openProfileStore): players, groups and, on demand, the outcomes. */
 export interface ProfileStore {
   readonly dir: string;
-  /** The verified store it was read from, for readers of further files (outcomes, embeddings). */
+  /** The verified store it was read from, for readers of further files (such as the backtest). */
   readonly opened: OpenStore;
   readonly params: Readonly<Record<string, unknown>>;
   readonly levels: readonly string[];
@@ -64,4 +66,9 @@ export interface ProfileStore {
   /** Salary by player index and season. */
   readonly salaries: ReadonlyMap<number, ReadonlyMap<number, number>>;
   readonly groups: ReadonlyMap<PositionGroup, StoredGroup>;
+  /**
+   * What every player did at the top level (outcomes.json), decoded on the first call. A store built
+   * before outcomes were kept has none: StoreError `kindred.store.missing`, asking for a rebuild.
+   */
+  outcomes(): Outcomes;
 }

@@ -91,18 +91,3 @@ export const groupEmbeddingSchema = z.strictObject({
 export type GroupEmbeddingFile = z.infer<typeof groupEmbeddingSchema>;
 export type EmbeddingSearchRow = z.infer<typeof searchRowSchema>;
 export type EmbeddingDriver = z.infer<typeof driverSchema>;
-
-export const groupEmbeddingFileNames = (group: string): { summary: string; model: string; codes: string } => ({
-  summary: `group-${group}.embedding.json`,
-  model: `group-${group}.model.json`,
-  codes: `group-${group}.codes.f64`,
-});
-
-/** Chart file names of a group inside `<store>.charts/`. */
-export const groupChartNames = (group: string): { learning: string; drivers: string } => ({
-  learning: `${group}-learning.svg`,
-  drivers: `${group}-drivers.svg`,
-});
-
-/** The folder beside a store where its charts live: `<store>.charts`. */
-export const chartsFolderOf = (storeDir: string): string => `${storeDir.replace(/\/+$/, '')}.charts`;

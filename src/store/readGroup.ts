@@ -1,0 +1,76 @@
+import { GuardedIndex } from '../index/GuardedIndex.ts';
+import type { PositionGroup } from '../profiles/positionGroup.ts';
+import type { StratumStats } from '../profiles/standardiseByStratum.ts';
+import { bytesToFloat32 } from './float32Bytes.ts';
+import { groupFileSchema } from './groupFile.ts';
+import type { OpenStore } from './openStore.ts';
+import { corruptFile, parseStoreJson } from './parseStoreJson.ts';
+import type { StoredGroup, StoredPartition } from './ProfileStore.ts';
+import { readGroupEmbedding } from './readGroupEmbedding.ts';
+import { groupFileNames } from './storeFileNames.ts';
+
+/**
+ * Reads one position group from a verified store (the counterpart of encodeGroupFiles): parses the
+ * JSON part, checks that every column, matrix, weight list and partition agrees with its row and
+ * dimension counts, reads the embedding when there is one and loads the indexes (each checked by
+ * GuardedIndex.load before the native reader sees it). Any mismatch is StoreError `kindred.store.corrupt`.
+ */
+export async function readGroup(store: OpenStore, group: PositionGroup): Promise<StoredGroup> {
+  const names = groupFileNames(group);
+  const where = `${store.dir}/${names.json}`;
+  const bad = (what: string): Error => corruptFile(where, what);
+  const gf = parseStoreJson(await store.readText(names.json), groupFileSchema, where);
+  const d = gf.dims.length;
+  const raw = bytesToFloat32(await store.readBytes(names.raw));
+  const z = bytesToFloat32(await store.readBytes(names.z));
+  const lengths = [gf.rows.player, gf.rows.season, gf.rows.level, gf.rows.position, gf.rows.age, gf.rows.sample, gf.rows.teams].map((a) => a.length);
+  if (raw.length !== gf.n * d || z.length !== gf.n * d || lengths.some((l) => l !== gf.n) || gf.redundancy.length !== d || gf.reliability.length !== d) {
+    throw bad(`sizes do not match (${gf.n} rows x ${d} dimensions)`);
+  }
+  const embedding = gf.embedding
+    ? await readGroupEmbedding(store, group, { space: gf.embedding.space, dim: gf.embedding.dim, d, n: gf.n, dims: gf.dims.map((x) => x.name) })
+    : undefined;
+  let index: GuardedIndex | null = null;
+  if (embedding) {
+    if (!gf.index || gf.index.dim !== embedding.dim || gf.index.count !== gf.n) throw bad('index metadata does not match the codes');
+    index = GuardedIndex.load(store.path(names.index), gf.index);
+  }
+  const partitions: StoredPartition[] = [];
+  let covered = 0;
+  for (const [i, p] of gf.partitions.entries()) {
+    if (p.dims.some((j) => j >= d) || p.rows.some((r) => r >= gf.n)) throw bad(`partition ${i} points past the profiles`);
+    if (p.index && (p.index.dim !== p.dims.length || p.index.count !== p.rows.length)) throw bad(`partition ${i} index metadata does not match`);
+    covered += p.rows.length;
+    partitions.push({
+      dims: Int32Array.from(p.dims),
+      rows: Int32Array.from(p.rows),
+      index: p.index ? GuardedIndex.load(store.path(names.partitionIndex(i)), p.index) : null,
+    });
+  }
+  if (!embedding && covered !== gf.n) throw bad(`partitions hold ${covered} of ${gf.n} rows`);
+  const strata = new Map<string, Map<string, StratumStats>>();
+  for (const [dim, list] of Object.entries(gf.strata)) {
+    strata.set(dim, new Map(list.map(([key, mean, sd, n, from, to]) => [key, { mean, sd, n, seasons: [from, to] as const }])));
+  }
+  return {
+    group,
+    dims: gf.dims,
+    d,
+    n: gf.n,
+    redundancy: Float64Array.from(gf.redundancy),
+    reliability: Float64Array.from(gf.reliability),
+    player: Int32Array.from(gf.rows.player),
+    season: Int32Array.from(gf.rows.season),
+    level: Int32Array.from(gf.rows.level),
+    position: gf.rows.position,
+    age: Float64Array.from(gf.rows.age, (a) => (a === null ? NaN : a)),
+    sample: Int32Array.from(gf.rows.sample),
+    teams: gf.rows.teams,
+    raw,
+    z,
+    strata,
+    index,
+    partitions,
+    ...(embedding ? { embedding } : {}),
+  };
+}

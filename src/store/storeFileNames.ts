@@ -1,0 +1,37 @@
+/**
+ * The names of the files in a store folder and beside it, in one place. Every data file is listed in
+ * the manifest (src/store/manifest.ts) with its size and sha256.
+ */
+
+/** Players (id, name, birth date, bats, throws), level names and contracts. */
+export const PLAYERS_FILE = 'players.json';
+
+/** What every player did at the top level, season by season (src/store/outcomesFile.ts). */
+export const OUTCOMES_FILE = 'outcomes.json';
+
+/** The files of one position group: its JSON part, the raw and standardised matrices and its indexes. */
+export const groupFileNames = (
+  group: string,
+): { json: string; raw: string; z: string; index: string; partitionIndex: (i: number) => string } => ({
+  json: `group-${group}.json`,
+  raw: `group-${group}.raw.f32`,
+  z: `group-${group}.z.f32`,
+  index: `group-${group}.hnsw`,
+  partitionIndex: (i: number) => `group-${group}.p${i}.hnsw`,
+});
+
+/** The files of a group's learned space: summary, model weights and every row's code. */
+export const groupEmbeddingFileNames = (group: string): { summary: string; model: string; codes: string } => ({
+  summary: `group-${group}.embedding.json`,
+  model: `group-${group}.model.json`,
+  codes: `group-${group}.codes.f64`,
+});
+
+/** Chart file names of a group inside `<store>.charts/`. */
+export const groupChartNames = (group: string): { learning: string; drivers: string } => ({
+  learning: `${group}-learning.svg`,
+  drivers: `${group}-drivers.svg`,
+});
+
+/** The folder beside a store where its charts live: `<store>.charts`. */
+export const chartsFolderOf = (storeDir: string): string => `${storeDir.replace(/\/+$/, '')}.charts`;
