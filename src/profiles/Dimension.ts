@@ -15,8 +15,13 @@ export type Measure<L> =
       readonly kind: 'rate';
       readonly numerator: (line: L) => number | undefined;
       readonly denominator: (line: L) => number | undefined;
-      /** League-average events added before dividing (0 = not regressed). */
+      /** League-average events added before dividing (0 = not regressed); the fallback when k is fitted. */
       readonly stabilisation: number;
+      /**
+       * Each event of the denominator is a success or not (K%, OBP, BABIP): the rate is binomial, so its k
+       * can be fitted to the roster (src/stats/betaBinomialMoments.ts). False for TB / AB, range factor.
+       */
+      readonly binomial: boolean;
     }
   | {
       readonly kind: 'mean';

@@ -3,6 +3,7 @@ import type { Dimension, DimensionInfo, LeagueContext } from './Dimension.ts';
 import { describeDimension } from './Dimension.ts';
 import { assembleSeasons, DEFAULT_MINIMUMS, type AssembledSeasons, type SampleMinimums, type SeasonMeta } from './assembleSeasons.ts';
 import { measureDimensions, type MeasuredColumn } from './measureDimensions.ts';
+import { DEFAULT_SHRINKAGE, type ShrinkageOptions, type ShrinkageUsed } from './shrinkage.ts';
 import { standardiseByStratum, DEFAULT_STANDARDISE, type StandardiseOptions, type StratumStats } from './standardiseByStratum.ts';
 import { redundancyWeights } from './redundancyWeights.ts';
 import { reliability } from './reliability.ts';
@@ -32,14 +33,22 @@ export interface GroupProfiles {
    * by reliability and redundancy (see familyWeights, redundancyWeights); sums to 1.
    */
   readonly redundancy: Float64Array;
+  /** Per dimension, league stratum key (`${season}|${level}`, plus `|${position}` for fielding) to the k used. */
+  readonly shrinkage: ReadonlyMap<string, ReadonlyMap<string, ShrinkageUsed>>;
 }
 
 export interface ProfileOptions {
   readonly minimums: SampleMinimums;
   readonly standardise: StandardiseOptions;
+  /** Fitted or fixed regression constants (default DEFAULT_SHRINKAGE). */
+  readonly shrinkage?: ShrinkageOptions;
 }
 
-export const DEFAULT_PROFILE_OPTIONS: ProfileOptions = { minimums: DEFAULT_MINIMUMS, standardise: DEFAULT_STANDARDISE };
+export const DEFAULT_PROFILE_OPTIONS: ProfileOptions = {
+  minimums: DEFAULT_MINIMUMS,
+  standardise: DEFAULT_STANDARDISE,
+  shrinkage: DEFAULT_SHRINKAGE,
+};
 
 export interface ProfileSet {
   readonly groups: ReadonlyMap<PositionGroup, GroupProfiles>;
@@ -71,6 +80,8 @@ export function buildProfiles(roster: Roster, options: ProfileOptions = DEFAULT_
     lines: hitterLines,
     leagueKey: (i, scope) => leagueKey(hitterMeta[i] as SeasonMeta, scope),
     league: () => noLeague,
+    eraOf: (i, scope) => eraOf(hitterMeta[i] as SeasonMeta, scope),
+    shrinkage: options.shrinkage ?? DEFAULT_SHRINKAGE,
   });
 
   const pitcherLines = seasons.pitchers.map((p) => p.line);
@@ -83,6 +94,8 @@ export function buildProfiles(roster: Roster, options: ProfileOptions = DEFAULT_
       const m = pitcherMeta[i] as SeasonMeta;
       return { fipConstant: constants.get(`${m.season}|${m.level}`) ?? NaN };
     },
+    eraOf: (i, scope) => eraOf(pitcherMeta[i] as SeasonMeta, scope),
+    shrinkage: options.shrinkage ?? DEFAULT_SHRINKAGE,
   });
 
   for (const group of POSITION_GROUPS) {
@@ -101,6 +114,11 @@ function leagueKey(m: SeasonMeta, scope: 'group' | 'position'): string {
   return scope === 'group' ? `${m.season}|${m.level}` : `${m.season}|${m.level}|${m.position}`;
 }
 
+/** The era a line's k is fitted over: its level (and position for fielding), around its season. */
+function eraOf(m: SeasonMeta, scope: 'group' | 'position'): { key: string; season: number } {
+  return { key: scope === 'group' ? m.level : `${m.level}|${m.position}`, season: m.season };
+}
+
 function assembleGroup(
   group: PositionGroup,
   rows: readonly number[],
@@ -116,9 +134,13 @@ function assembleGroup(
   const z = new Float32Array(n * d);
   const z64 = new Float64Array(n * d);
   const strata = new Map<string, ReadonlyMap<string, StratumStats>>();
+  const shrinkage = new Map<string, ReadonlyMap<string, ShrinkageUsed>>();
+  const seen = new Set<string>();
+  for (const m of meta) seen.add(`${m.season}|${m.level}`).add(`${m.season}|${m.level}|${m.position}`);
   dims.forEach((dim, j) => {
     const col = cols.get(dim.name);
     if (!col) throw new Error(`internal: dimension ${dim.name} was not measured`);
+    shrinkage.set(dim.name, new Map([...col.shrinkage].filter(([key]) => seen.has(key))));
     const values = new Float64Array(n);
     for (let r = 0; r < n; r++) {
       const src = rows[r] as number;
@@ -142,7 +164,7 @@ function assembleGroup(
   const rel = reliability(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season));
   const families = dims.map((dim) => dim.family);
   const within = redundancyWeights(z64, n, d, rel, 30, families.map((f) => SKILL_FAMILIES.indexOf(f)));
-  return { group, dims, meta, raw, z, strata, reliability: rel, redundancy: familyWeights(families, within, DEFAULT_FAMILY_SHARES) };
+  return { group, dims, meta, raw, z, strata, reliability: rel, redundancy: familyWeights(families, within, DEFAULT_FAMILY_SHARES), shrinkage };
 }
 
 /** FIP constant of every season and level, from that league's lines (src/stats/leagueFip.ts). */

@@ -78,13 +78,13 @@ export const HITTER_DIMENSIONS: readonly D[] = [
     name: 'slg', label: 'SLG', unit: 'bases per AB', direction: 'higher', skill: 'power', family: 'power',
     meaning: 'Slugging percentage: total bases per at-bat.', source: rateSource(sluggingPercentage),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: rateMeasure(sluggingPercentage, batting, k('sluggingPercentage')),
+    measure: rateMeasure(sluggingPercentage, batting, k('sluggingPercentage'), false),
   },
   {
     name: 'iso', label: 'ISO', unit: 'extra bases per AB', direction: 'higher', skill: 'power', family: 'power',
     meaning: 'Isolated power: extra bases per at-bat (SLG - AVG).', source: rateSource(isolatedPower),
     groups: HITTERS, scope: 'group', digits: 3,
-    measure: rateMeasure(isolatedPower, batting, k('isolatedPower')),
+    measure: rateMeasure(isolatedPower, batting, k('isolatedPower'), false),
   },
   {
     name: 'hr_pct', label: 'HR%', unit: 'fraction of PA', direction: 'higher', skill: 'power', family: 'power',
@@ -152,7 +152,7 @@ export const HITTER_DIMENSIONS: readonly D[] = [
     meaning: 'Range factor at his primary position: 9 * (PO + A) / innings, compared with the same position only.',
     source: rateSource(rangeFactor),
     groups: FIELDERS, scope: 'position', digits: 2,
-    measure: rateMeasure(rangeFactor, fielding, RANGE_STABILISATION_OUTS),
+    measure: rateMeasure(rangeFactor, fielding, RANGE_STABILISATION_OUTS, false),
   },
   {
     name: 'fielding_pct', label: 'Fld%', unit: 'fraction of chances', direction: 'higher', skill: 'fielding hands', family: 'fielding',

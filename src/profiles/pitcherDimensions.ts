@@ -93,6 +93,6 @@ export const PITCHER_DIMENSIONS: readonly D[] = [
     name: 'ip_per_g', label: 'IP/G', unit: 'innings per game', direction: 'neither', skill: 'workload', family: 'workload',
     meaning: 'Innings per appearance: how long he works each time out.', source: rateSource(inningsPerGame),
     groups: PITCHERS, scope: 'group', digits: 2,
-    measure: rateMeasure(inningsPerGame, line, 0),
+    measure: rateMeasure(inningsPerGame, line, 0, false),
   },
 ];
