@@ -10,6 +10,7 @@
 import type { SimTruth } from '../../src/sim/SimTruth.ts';
 import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { findCompsWithRows, type CompsOptions } from '../../src/query/findComps.ts';
+import { quantileSorted } from '../../src/stats/quantile.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 
@@ -40,6 +41,8 @@ export interface QualityOptions {
 
 export interface QualityResult {
   readonly ratio: number;
+  /** Median of the targets' ratios. */
+  readonly median: number;
   readonly targets: number;
   readonly perGroup: Readonly<Partial<Record<PositionGroup, number>>>;
 }
@@ -47,6 +50,7 @@ export interface QualityResult {
 export function compsQuality(store: ProfileStore, truth: SimTruth, o: QualityOptions): QualityResult {
   let sum = 0;
   let count = 0;
+  const all: number[] = [];
   const perGroup: Partial<Record<PositionGroup, number>> = {};
   for (const group of o.groups) {
     const g = store.groups.get(group);
@@ -54,20 +58,23 @@ export function compsQuality(store: ProfileStore, truth: SimTruth, o: QualityOpt
     const r = groupQuality(store, g, truth, o);
     if (r.targets === 0) continue;
     perGroup[group] = r.sum / r.targets;
+    all.push(...r.ratios);
     sum += r.sum;
     count += r.targets;
   }
-  return { ratio: count > 0 ? sum / count : NaN, targets: count, perGroup };
+  all.sort((a, b) => a - b);
+  const median = all.length === 0 ? NaN : quantileSorted(all, 0.5);
+  return { ratio: count > 0 ? sum / count : NaN, median, targets: count, perGroup };
 }
 
-function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: QualityOptions): { sum: number; targets: number } {
+function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: QualityOptions): { sum: number; targets: number; ratios: number[] } {
   const level = store.levels.indexOf(o.level);
   const poolRows: number[] = [];
   for (let i = 0; i < g.n; i++) if (g.level[i] === level) poolRows.push(i);
-  if (poolRows.length < 4 * o.k) return { sum: 0, targets: 0 };
+  if (poolRows.length < 4 * o.k) return { sum: 0, targets: 0, ratios: [] };
   // true talents of the pool, standardised within it
   const first = truthOf(store, g, truth, poolRows[0] as number);
-  if (!first) return { sum: 0, targets: 0 };
+  if (!first) return { sum: 0, targets: 0, ratios: [] };
   const names = truth.talentNames[first.kind];
   const shown = TALENTS_SHOWN[g.group];
   const production = o.talents === 'production';
@@ -112,6 +119,7 @@ function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: Q
   });
   let sum = 0;
   let targets = 0;
+  const ratios: number[] = [];
   const filter = { ...o.compsOptions.filter, levels: [o.level] };
   for (let attempt = 0; attempt < o.targetsPerGroup * 3 && targets < o.targetsPerGroup && candidates.length > 0; attempt++) {
     const row = candidates[Math.floor(next() * candidates.length)] as number;
@@ -133,9 +141,10 @@ function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: Q
     const idealMean = nearest.reduce((a, b) => a + b, 0) / nearest.length;
     if (!(idealMean > 0)) continue;
     sum += compMean / idealMean;
+    ratios.push(compMean / idealMean);
     targets++;
   }
-  return { sum, targets };
+  return { sum, targets, ratios };
 }
 
 function truthOf(store: ProfileStore, g: StoredGroup, truth: SimTruth, row: number): ReturnType<SimTruth['find']> {

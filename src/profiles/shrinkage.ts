@@ -12,7 +12,12 @@ export interface ShrinkageOptions {
   readonly tableScale: number;
 }
 
-export const DEFAULT_SHRINKAGE: ShrinkageOptions = { fit: true, minPlayers: 100, tableScale: 1, eraSeasons: 2 };
+/**
+ * Fitting is off by default: on the standard bench leagues (bench/shrinkageQuality.bench.ts) fitted k did not beat
+ * the table everywhere (nor the table everywhere fitted k); see README "Bench figures". Thresholds: an era needs
+ * 100 player-seasons (lines with events) within 2 seasons either side of the stratum.
+ */
+export const DEFAULT_SHRINKAGE: ShrinkageOptions = { fit: false, minPlayers: 100, tableScale: 1, eraSeasons: 2 };
 
 /** The k a dimension used in one league stratum, and where it came from. */
 export interface ShrinkageUsed {

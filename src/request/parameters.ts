@@ -93,7 +93,10 @@ function positionGroup(value: string): PositionGroup {
  * HTTP query parameters are made.
  */
 export const PARAMETERS: { readonly [K in ParameterKey]: Parameter<RequestValues[K]> } = {
-  store: { name: 'store', value: 'dir', help: 'store folder made by kindred build', parse: v.text, default: DEFAULT_STORE, jobs: TARGET_JOBS, only: 'cli' },
+  store: {
+    name: 'store', value: 'dir', help: 'store folder made by kindred build', parse: v.text, default: DEFAULT_STORE, jobs: [...TARGET_JOBS, 'dims'], only: 'cli',
+    helpFor: { dims: 'store whose fitted regression constants to show beside the table (when the folder holds one)' },
+  },
   player: {
     name: 'player', help: 'player id or (part of a) name', parse: v.text, jobs: TARGET_JOBS, positional: true,
     helpFor: { match: 'the target: player id or (part of a) name (leave out with {want})' },

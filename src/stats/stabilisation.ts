@@ -5,6 +5,15 @@
  * Source: entries marked "from memory" are approximate values that circulate in public baseball
  * analysis, recalled without a source to hand; entries marked "project choice" are Kindred's own
  * settings where no recalled value exists. Treat all of them as rough (tens of percent).
+ *
+ * What the samples mean (from memory, unverified): the figures in circulation are commonly recalled as
+ * the samples at which split-half reliability reaches about 0.7, not 0.5. With reliability
+ * r(n) = n / (n + k), r(N) = 0.7 gives k = N (1 - 0.7) / 0.7 = 3N/7 (about 0.43 N); taken as k, they are
+ * 7/3 times too large, and a player with n = N keeps half his distance from the mean instead of 70%
+ * (e.g. K%: N = 60 PA would mean k = 26). Kindred keeps them as k: on the standard
+ * bench leagues, k = 3N/7 (ShrinkageOptions.tableScale) and k fitted to the roster
+ * (src/profiles/shrinkage.ts) did not beat k = N in every league (README, "Bench figures"), since
+ * standardising within season and level undoes most of a common rescaling of k.
  */
 
 /** Unit of events a stabilisation sample is counted in. */

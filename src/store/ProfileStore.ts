@@ -2,6 +2,7 @@ import type { Bats, Position, Throws } from '../ingest/types.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
+import type { ShrinkageUsed } from '../profiles/shrinkage.ts';
 import type { GuardedIndex } from '../index/GuardedIndex.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import type { OpenStore } from './openStore.ts';
@@ -46,6 +47,8 @@ export interface StoredGroup {
   readonly z: Float32Array;
   /** Per dimension, `${season}|${level}|${scope}` to stats. */
   readonly strata: ReadonlyMap<string, ReadonlyMap<string, StratumStats>>;
+  /** Per dimension, league stratum key (`season|level`, plus `|position` for fielding) to the k its rate was regressed with. */
+  readonly shrinkage: ReadonlyMap<string, ReadonlyMap<string, ShrinkageUsed>>;
   /** The index over all rows on the codes of a learned space; null in the input space (see partitions). */
   readonly index: GuardedIndex | null;
   /** Input space: the rows by coverage pattern, each with its index (null: scanned). Empty with a learned space. */

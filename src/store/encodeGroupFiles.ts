@@ -32,6 +32,10 @@ export function encodeGroupFiles(
       .filter(([, s]) => Number.isFinite(s.mean) && Number.isFinite(s.sd))
       .map(([key, s]) => [key, s.mean, s.sd, s.n, s.seasons[0], s.seasons[1]]);
   }
+  const shrinkage: GroupFile['shrinkage'] = {};
+  for (const [dim, map] of g.shrinkage) {
+    if (map.size > 0) shrinkage[dim] = [...map].map(([key, s]) => [key, s.k, s.table, s.source, s.players]);
+  }
   const file: GroupFile = {
     group: g.group,
     n: g.meta.length,
@@ -48,6 +52,7 @@ export function encodeGroupFiles(
       teams: g.meta.map((m) => m.teams.join('/')),
     },
     strata,
+    shrinkage,
     index: indexes.index,
     partitions: indexes.partitions,
     ...(indexes.embedding ? { embedding: indexes.embedding } : {}),

@@ -41,6 +41,11 @@ export const groupFileSchema = z.strictObject({
   }),
   /** Per dimension: [stratum key, mean, sd, n, first season, last season]. */
   strata: z.record(z.string(), z.array(z.tuple([z.string(), z.number(), z.number(), z.number(), z.number(), z.number()]))),
+  /**
+   * Per dimension: [league stratum key (`season|level`, plus `|position` for fielding), k used, the table's k,
+   * 'fitted' or 'table', player-seasons the fit rested on]; dimensions that are not regressed have none.
+   */
+  shrinkage: z.record(z.string(), z.array(z.tuple([z.string(), z.number(), z.number(), z.enum(['fitted', 'table']), z.number()]))),
   /** The index of `group-<G>.hnsw` over all rows (the codes of a learned space); null in the input space. */
   index: indexSchema.nullable(),
   /**

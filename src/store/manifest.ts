@@ -3,7 +3,7 @@ import { z } from 'zod';
 /** Format tag written into every manifest; a folder whose manifest lacks it is not a Kindred store. */
 export const STORE_FORMAT = 'kindred-store';
 /** Version of the store layout. Bump it when the layout or any file's meaning changes; old stores are then refused. */
-export const STORE_FORMAT_VERSION = 3;
+export const STORE_FORMAT_VERSION = 4;
 /** Name of the manifest inside a store folder (reserved: no data file may use it). */
 export const MANIFEST_NAME = 'manifest.json';
 

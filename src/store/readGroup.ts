@@ -1,6 +1,7 @@
 import { GuardedIndex } from '../index/GuardedIndex.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
+import type { ShrinkageUsed } from '../profiles/shrinkage.ts';
 import { bytesToFloat32 } from './float32Bytes.ts';
 import { groupFileSchema } from './groupFile.ts';
 import type { OpenStore } from './openStore.ts';
@@ -52,6 +53,10 @@ export async function readGroup(store: OpenStore, group: PositionGroup): Promise
   for (const [dim, list] of Object.entries(gf.strata)) {
     strata.set(dim, new Map(list.map(([key, mean, sd, n, from, to]) => [key, { mean, sd, n, seasons: [from, to] as const }])));
   }
+  const shrinkage = new Map<string, Map<string, ShrinkageUsed>>();
+  for (const [dim, list] of Object.entries(gf.shrinkage)) {
+    shrinkage.set(dim, new Map(list.map(([key, k, table, source, players]) => [key, { k, table, source, players }])));
+  }
   return {
     group,
     dims: gf.dims,
@@ -69,6 +74,7 @@ export async function readGroup(store: OpenStore, group: PositionGroup): Promise
     raw,
     z,
     strata,
+    shrinkage,
     index,
     partitions,
     ...(embedding ? { embedding } : {}),

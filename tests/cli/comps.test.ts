@@ -199,6 +199,15 @@ describe('kindred dims', () => {
     for (const line of out.stdout.split('\n')) expect([...line].length).toBeLessThanOrEqual(100);
     expect(out.stdout).not.toContain('fb_mph');
   });
+
+  it('shows, with a store, the k each rate was regressed with beside the fixed table, within 100 columns', async () => {
+    const out = await runCli('dims', '--position', 'SS', '--store', store);
+    expect(out.code).toBe(0);
+    expect(out.stdout).toMatch(/k table\s+│?\s*k fitted/);
+    // the demo store is built with the default (table k): K% keeps 60 PA (src/stats/stabilisation.ts)
+    expect(out.stdout).toMatch(/k_pct\s+│.*│\s*60\s+│\s*table\s+│/);
+    for (const line of out.stdout.split('\n')) expect(line.length).toBeLessThanOrEqual(100);
+  });
 });
 
 describe('kindred comps: alike and apart agree with the grade grid', () => {

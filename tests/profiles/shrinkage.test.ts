@@ -38,7 +38,7 @@ interface Line { readonly s: number; readonly n: number; readonly season: number
 const share: Rate<Line> = { name: 'share', formula: 's / n', source: 'test', numerator: (l) => l.s, denominator: (l) => l.n };
 const dim: Dimension<Line> = {
   name: 'share', label: 'Share', unit: 'share', direction: 'higher', meaning: 'test', source: 'test', skill: 'test',
-  groups: ['IF'], scope: 'group', digits: 3, measure: rateMeasure(share, (l: Line) => l, 60),
+  family: 'discipline', groups: ['IF'], scope: 'group', digits: 3, measure: rateMeasure(share, (l: Line) => l, 60),
 };
 
 describe('measureDimensions with fitted shrinkage', () => {
