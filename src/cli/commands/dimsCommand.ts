@@ -72,11 +72,12 @@ export function dimsCommand(io: CliIo): Command {
       io.stdout.write(`${g} (${g === 'IF' ? '1B, 2B, 3B, SS' : g === 'OF' ? 'LF, CF, RF' : g})\n${t.toString()}\n${familyLines(list).join('\n')}\n\n`);
     }
     io.stdout.write(
-      'k: league-average events added before a rate is regressed (- = not regressed). k table: the fixed table\n' +
+      'k: league-average events added before a rate is regressed (- = not regressed).\n' +
+        'k table: the fixed table (src/stats/stabilisation.ts).\n' +
         (store
-          ? `(src/stats/stabilisation.ts); k fitted: median k fitted to the roster in ${req.need('store')} over its league\n` +
-            'strata (season and level), with the share of strata fitted (the rest keep the table k).\n'
-          : '(src/stats/stabilisation.ts); build a store (or pass --store) to see the k fitted to your roster.\n'),
+          ? 'k fitted: median k fitted to the roster of that store over its league strata\n' +
+            '(season and level) and the share of strata fitted; "table" = all kept the table k.\n'
+          : 'k fitted: build a store (or pass --store) to see the k fitted to your roster.\n'),
     );
   });
 }
