@@ -12,6 +12,7 @@ import { chartsFolderOf, groupFileNames, OUTCOMES_FILE, PLAYERS_FILE } from '../
 import { IndexBuildPool } from './IndexBuildPool.ts';
 import type { IndexParams } from '../index/types.ts';
 import { writeStore } from '../store/writeStore.ts';
+import { checkStoreTarget, cleanLeftovers, lockStore } from '../store/storeTarget.ts';
 import { partitionByCoverage, type CoveragePartition } from '../index/partitionByCoverage.ts';
 import { partitionVector } from '../index/partitionVector.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
@@ -61,9 +62,22 @@ export interface BuildSummary {
  * Reads a roster folder, builds the profiles and HNSW indexes per position group (one per coverage
  * pattern in the input space, one on the codes of a learned space), and writes the
  * store (temporary folder, then renamed into place). On bad input in strict mode nothing is written and
- * an existing store is left as it was.
+ * an existing store is left as it was. Before any work the target is checked (checkStoreTarget: parent
+ * folder, no symbolic link, only a Kindred store is replaced), the store's build lock is taken
+ * (`<store>.lock`, one build at a time) and what killed builds left beside it is removed.
  */
 export async function buildStore(rosterDir: string, storeDir: string, options: BuildOptions): Promise<BuildSummary> {
+  await checkStoreTarget(storeDir);
+  const lock = await lockStore(storeDir);
+  try {
+    await cleanLeftovers(storeDir);
+    return await buildLocked(rosterDir, storeDir, options);
+  } finally {
+    await lock.release();
+  }
+}
+
+async function buildLocked(rosterDir: string, storeDir: string, options: BuildOptions): Promise<BuildSummary> {
   const started = performance.now();
   const progress = options.onProgress ?? (() => {});
   const roster = await readRoster(rosterDir, {

@@ -3,6 +3,9 @@ import { mkdir, readdir, rename, rm, writeFile } from 'node:fs/promises';
 import { StoreError } from '../errors/KindredError.ts';
 import { withCause } from '../errors/withCause.ts';
 
+/** The names of the charts Kindred writes (storeFileNames.groupChartNames); a folder holding anything else is not replaced. */
+const CHART_NAME = /^[A-Z0-9]+-(learning|drivers)\.svg$/;
+
 /** Charts written into a temporary folder, waiting to replace the real one. */
 export interface StagedCharts {
   /** Replaces `<dir>` by the staged folder (an existing chart folder is renamed away, then removed). */
@@ -15,7 +18,7 @@ export interface StagedCharts {
  * Writes SVG charts (file name to text) into `<dir>.tmp-<pid>-<random>`, to be swapped in with
  * `commit` once the store itself is written (the same two-rename swap as writeStore), so the folder
  * holds one build's charts, never a mix. With no charts, `commit` removes an existing chart folder
- * (a store built without an embedding has none), but only one holding nothing but .svg files.
+ * (a store built without an embedding has none), but only one holding nothing but Kindred's chart files.
  * Failures are StoreError `kindred.store.writeFailed`.
  */
 export async function stageCharts(dir: string, charts: ReadonlyMap<string, string>): Promise<StagedCharts> {
@@ -39,9 +42,9 @@ export async function stageCharts(dir: string, charts: ReadonlyMap<string, strin
       try {
         const entries = await readdir(dir).catch(() => null);
         if (entries !== null) {
-          if (!entries.every((e) => e.endsWith('.svg'))) {
+          if (!entries.every((e) => CHART_NAME.test(e))) {
             if (charts.size === 0) return;
-            throw new Error(`${dir} holds files other than charts (expected only .svg files); move it away first`);
+            throw new Error(`${dir} holds files Kindred did not write (expected only <group>-learning.svg and <group>-drivers.svg); move them away first`);
           }
           await rename(dir, old);
           hadOld = true;

@@ -34,6 +34,7 @@ export type ErrorCode =
   | 'kindred.store.corrupt'
   | 'kindred.store.version'
   | 'kindred.store.writeFailed'
+  | 'kindred.store.locked'
   // index
   | 'kindred.index.badVector'
   | 'kindred.index.badLabel'

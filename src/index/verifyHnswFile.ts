@@ -8,8 +8,9 @@ export const HNSW_HEADER_BYTES = 96;
  * Structural check of a file written by hnswlib's `saveIndex` (hnswalg.h, hnswlib 0.8, vendored by
  * hnswlib-node 3.0.0), done in JS before the native reader sees it. It compares the header with the
  * manifest (count, M, 2M, efConstruction, the per-element size implied by dim), then walks every
- * layer-0 and upper-layer link list checking neighbour counts and ids (< count), labels (< count)
- * and that the lists end exactly at the end of the file.
+ * layer-0 and upper-layer link list checking neighbour counts and ids (< count), labels (< count),
+ * that a neighbour on level L reaches level L itself, that the entry point sits on the top level, and
+ * that the lists end exactly at the end of the file: the invariants the native reader and search trust.
  *
  * This is a second line of defence: the store's sha256 check is the first. It does not look at the
  * vector values (a flipped float only changes distances, it cannot send the native code astray).
@@ -74,6 +75,10 @@ export function verifyHnswFile(bytes: Uint8Array, meta: IndexMeta, file: string)
     if (label >= count) fail(`element ${i} has label ${label} (expected a label below ${count})`);
   }
   const linksPerElement = maxM * 4 + 4;
+  // First pass: each element's level (the native search trusts that a neighbour on level L has its
+  // own list for level L, and that the entry point sits on the top level).
+  const levelOf = new Uint8Array(count);
+  const listsAt = new Float64Array(count);
   let at = level0End;
   for (let i = 0; i < count; i++) {
     if (at + 4 > bytes.length) fail(`upper-layer lists end early at element ${i}`);
@@ -83,16 +88,24 @@ export function verifyHnswFile(bytes: Uint8Array, meta: IndexMeta, file: string)
     const levels = size / linksPerElement;
     if (levels > maxLevel) fail(`element ${i} reaches level ${levels} above the top level ${maxLevel}`);
     if (at + size > bytes.length) fail(`element ${i} upper-layer lists run past the end of the file`);
-    for (let level = 0; level < levels; level++) {
-      const base = at + level * linksPerElement;
+    levelOf[i] = levels;
+    listsAt[i] = at;
+    at += size;
+  }
+  if (count > 0 && levelOf[entryPoint] !== maxLevel) {
+    fail(`entry point ${entryPoint} is on level ${levelOf[entryPoint]} (expected the top level ${maxLevel})`);
+  }
+  for (let i = 0; i < count; i++) {
+    for (let level = 0; level < (levelOf[i] as number); level++) {
+      const base = (listsAt[i] as number) + level * linksPerElement;
       const links = view.getUint16(base, true);
       if (links > maxM) fail(`element ${i} has ${links} links on level ${level + 1} (at most ${maxM})`);
       for (let l = 0; l < links; l++) {
         const id = view.getUint32(base + 4 + 4 * l, true);
         if (id >= count) fail(`element ${i} links to ${id} on level ${level + 1} (expected an id below ${count})`);
+        if ((levelOf[id] as number) < level + 1) fail(`element ${i} links to ${id} on level ${level + 1}, which element ${id} does not reach`);
       }
     }
-    at += size;
   }
   if (at !== bytes.length) fail(`${bytes.length - at} bytes left after the last list`);
 }

@@ -7,7 +7,7 @@
  */
 import { z } from 'zod';
 
-export const BACKTEST_FILE = 'backtest.json';
+export { BACKTEST_FILE } from '../store/storeFileNames.ts';
 export const BACKTEST_FORMAT = 'kindred-backtest';
 export const BACKTEST_VERSION = 1;
 

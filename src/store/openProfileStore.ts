@@ -33,7 +33,7 @@ export async function openProfileStore(dir: string): Promise<ProfileStore> {
   }
   const groups = new Map<PositionGroup, StoredGroup>();
   for (const group of POSITION_GROUPS) {
-    if (groupFileNames(group).json in store.manifest.files) groups.set(group, await readGroup(store, group));
+    if (groupFileNames(group).json in store.manifest.files) groups.set(group, await readGroup(store, group, { players: players.length, levels: pf.levels.length }));
   }
   const outcomesText = OUTCOMES_FILE in store.manifest.files ? await store.readText(OUTCOMES_FILE) : null;
   let outcomes: Outcomes | undefined;

@@ -13,15 +13,26 @@ import { groupFileNames } from './storeFileNames.ts';
 /**
  * Reads one position group from a verified store (the counterpart of encodeGroupFiles): parses the
  * JSON part, checks that every column, matrix, weight list and partition agrees with its row and
- * dimension counts, reads the embedding when there is one and loads the indexes (each checked by
+ * dimension counts, that it names the group its file name says (so files swapped between groups are
+ * refused) and that its player and level references are in range, reads the embedding when there is one and loads the indexes (each checked by
  * GuardedIndex.load before the native reader sees it). Any mismatch is StoreError `kindred.store.corrupt`.
  */
-export async function readGroup(store: OpenStore, group: PositionGroup): Promise<StoredGroup> {
+export async function readGroup(
+  store: OpenStore,
+  group: PositionGroup,
+  refs: { readonly players: number; readonly levels: number },
+): Promise<StoredGroup> {
   const names = groupFileNames(group);
   const where = `${store.dir}/${names.json}`;
   const bad = (what: string): Error => corruptFile(where, what);
   const gf = parseStoreJson(await store.readText(names.json), groupFileSchema, where);
+  if (gf.group !== group) throw bad(`holds group ${gf.group} (expected ${group}; files swapped?)`);
   const d = gf.dims.length;
+  const outside = (values: readonly number[], below: number): number => values.findIndex((v) => v >= below);
+  const badPlayer = outside(gf.rows.player, refs.players);
+  if (badPlayer >= 0) throw bad(`row ${badPlayer} names player ${gf.rows.player[badPlayer]} (the store has ${refs.players})`);
+  const badLevel = outside(gf.rows.level, refs.levels);
+  if (badLevel >= 0) throw bad(`row ${badLevel} names level ${gf.rows.level[badLevel]} (the store has ${refs.levels})`);
   const raw = bytesToFloat32(await store.readBytes(names.raw));
   const z = bytesToFloat32(await store.readBytes(names.z));
   const lengths = [gf.rows.player, gf.rows.season, gf.rows.level, gf.rows.position, gf.rows.age, gf.rows.sample, gf.rows.teams].map((a) => a.length);

@@ -9,6 +9,9 @@ export const PLAYERS_FILE = 'players.json';
 /** What every player did at the top level, season by season (src/store/outcomesFile.ts). */
 export const OUTCOMES_FILE = 'outcomes.json';
 
+/** The latest backtest of the prospect outlook, written beside the manifest after the build (outside it). */
+export const BACKTEST_FILE = 'backtest.json';
+
 /** The files of one position group: its JSON part, the raw and standardised matrices and its indexes. */
 export const groupFileNames = (
   group: string,

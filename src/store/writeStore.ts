@@ -1,11 +1,12 @@
 import { randomBytes } from 'node:crypto';
-import { mkdir, open, readdir, rename, rm, stat } from 'node:fs/promises';
+import { mkdir, open, rename, rm } from 'node:fs/promises';
 import { dirname, join, resolve } from 'node:path';
 import { KindredError, StoreError } from '../errors/KindredError.ts';
 import { withCause } from '../errors/withCause.ts';
 import { fileNameProblem } from './checkFileName.ts';
 import { type FileEntry, MANIFEST_NAME, type Manifest, manifestSchema, STORE_FORMAT, STORE_FORMAT_VERSION } from './manifest.ts';
 import { sha256Hex } from './sha256Hex.ts';
+import { checkStoreTarget } from './storeTarget.ts';
 
 export interface StoreInput {
   /** Build parameters, kept in the manifest; must survive JSON (no cycles, BigInt or functions). */
@@ -22,8 +23,8 @@ export interface StoreInput {
  * one, or (for an instant between the renames) none, never a mix.
  *
  * On any failure the temp folder is removed, an existing store is left as it was, and StoreError
- * `kindred.store.writeFailed` is thrown with the cause. A folder that exists, is not empty and holds
- * no manifest is refused rather than replaced (it is not a store, and would be deleted).
+ * `kindred.store.writeFailed` is thrown with the cause. Only a folder that is empty or a Kindred store
+ * holding nothing but its listed files is replaced; a symbolic link is refused (checkStoreTarget).
  */
 export async function writeStore(dir: string, input: StoreInput): Promise<Manifest> {
   const target = resolve(dir);
@@ -40,7 +41,12 @@ export async function writeStore(dir: string, input: StoreInput): Promise<Manife
   } catch (error) {
     throw fail(`params are not JSON-serialisable (${describe(error)})`, error);
   }
-  await checkReplaceable(target, fail);
+  try {
+    await checkStoreTarget(target);
+  } catch (error) {
+    if (error instanceof StoreError) throw error;
+    throw fail(describe(error), error);
+  }
 
   const suffix = `${process.pid}-${randomBytes(4).toString('hex')}`;
   const temp = `${target}.tmp-${suffix}`;
@@ -67,20 +73,6 @@ export async function writeStore(dir: string, input: StoreInput): Promise<Manife
     await rm(temp, { recursive: true, force: true });
     if (error instanceof KindredError) throw error;
     throw fail(describe(error), error);
-  }
-}
-
-async function checkReplaceable(target: string, fail: (what: string) => StoreError): Promise<void> {
-  let isDirectory: boolean;
-  try {
-    isDirectory = (await stat(target)).isDirectory();
-  } catch {
-    return; // nothing there yet
-  }
-  if (!isDirectory) throw fail('a file of that name exists (expected a store folder or nothing)');
-  const entries = await readdir(target);
-  if (entries.length > 0 && !entries.includes(MANIFEST_NAME)) {
-    throw fail(`the folder holds ${entries.length} entries but no ${MANIFEST_NAME} (expected a store folder or an empty one)`);
   }
 }
 

@@ -117,6 +117,8 @@ describe('openStore(dir)', () => {
   it('refuses a manifest that is not JSON, is badly shaped, or lists a path outside the store', async () => {
     writeFileSync(join(dir, 'manifest.json'), '{"format": "kindred-store", ');
     await expect(openStore(dir)).rejects.toMatchObject({ code: 'kindred.store.corrupt', message: expect.stringContaining('not valid JSON') });
+    // a folder whose manifest does not parse is not replaced by a build: start from an empty one
+    rmSync(dir, { recursive: true, force: true });
     await writeStore(dir, { params: {}, files: new Map([['a.txt', 'a']]) });
     editManifest((m) => {
       m['files'] = { 'a.txt': { sha256: 'xyz', bytes: 1 } };
