@@ -1,4 +1,5 @@
 import { Command } from 'commander';
+import { isAbsolute, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { CliIo } from '../CliIo.ts';
 import { buildStore } from '../../build/buildStore.ts';
@@ -14,6 +15,12 @@ import type { TargetRow } from '../../query/selectTargetRow.ts';
 
 /** The bundled invented league. */
 export const DEMO_ROSTER = fileURLToPath(new URL('../../../demo-roster', import.meta.url));
+
+/** The demo roster's folder as the user sees it: relative to the working folder when inside it. */
+function shownRoster(): string {
+  const rel = relative(process.cwd(), DEMO_ROSTER);
+  return rel === '' || rel.startsWith('..') || isAbsolute(rel) ? DEMO_ROSTER : rel;
+}
 
 /** The demo's featured target: the top level's catcher with the most plate appearances in the latest season. */
 export function featuredTarget(store: ProfileStore): TargetRow | undefined {
@@ -35,7 +42,7 @@ export function demoCommand(io: CliIo): Command {
     .description('build a store from the bundled invented league and show comps for one of its catchers')
     .option('--store <dir>', 'where to write the demo store', DEFAULT_STORE)
     .action(async (raw: { store: string }) => {
-      io.stderr.write(`Building the demo store from ${DEMO_ROSTER} (an invented league)...\n`);
+      io.stderr.write(`Building the demo store from ${shownRoster()} (an invented league)...\n`);
       const summary = await buildStore(DEMO_ROSTER, raw.store, { lenient: false });
       io.stderr.write(formatBuildSummary(summary));
       await storeBacktest(raw.store, io);
