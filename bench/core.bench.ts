@@ -6,12 +6,11 @@
  * profiles of 2 to 6 dimensions, and `kindred serve` latency without the answer cache.
  * `node --import tsx bench/core.bench.ts [playerSeasons ...]` (default 100000 1000000).
  */
-import { execFileSync, spawn, spawnSync } from 'node:child_process';
+import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import autocannon from 'autocannon';
 import { simulateLeague } from '../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
 import { openProfileStore } from '../src/store/openProfileStore.ts';
@@ -19,6 +18,7 @@ import { DEFAULT_COMPS_OPTIONS, findComps } from '../src/query/findComps.ts';
 import { COVERAGE_CLASSES, drawTargets, type CoverageClass } from './lib/drawTargets.ts';
 import { nearestRankQuantile } from '../src/stats/quantile.ts';
 import { aim } from './lib/aim.ts';
+import { serveUnderLoad } from './lib/serveUnderLoad.ts';
 
 /** Latency percentile (0..100) by nearest rank. */
 const percentile = (times: readonly number[], q: number): number => nearestRankQuantile([...times].sort((a, b) => a - b), q / 100);
@@ -120,28 +120,10 @@ async function one(n: number): Promise<string[]> {
   return lines;
 }
 
-/** `kindred serve` as its own process without the answer cache, loaded by autocannon. */
+/** `kindred serve` without the answer cache under load: latency and failures. */
 async function serveLoad(storeDir: string, paths: string[], connections: number, seconds: number): Promise<{ p50: number; p99: number; requests: number; errors: number; non2xx: number }> {
-  const child = spawn(process.execPath, [kindred, 'serve', '--store', storeDir, '--port', '0', '--cache', '0'], { stdio: ['ignore', 'pipe', 'ignore'] });
-  const url = await new Promise<string>((resolve, reject) => {
-    let out = '';
-    child.stdout.on('data', (c: Buffer) => {
-      out += c.toString('utf8');
-      const m = /serving (http:\/\/\S+)/.exec(out);
-      if (m?.[1]) resolve(m[1]);
-    });
-    child.once('exit', (code) => reject(new Error(`kindred serve exited with ${code ?? 'a signal'} before listening`)));
-  });
-  try {
-    let next = 0;
-    const warm = await fetch(new URL(paths[0] ?? '/api/info', url));
-    if (warm.status !== 200) throw new Error(`warm-up answered ${warm.status}`);
-    const r = await autocannon({ url, connections, duration: seconds, requests: [{ setupRequest: (req) => ({ ...req, path: paths[next++ % paths.length] ?? '/api/info' }) }] });
-    return { p50: r.latency.p50, p99: r.latency.p99, requests: r.requests.total, errors: r.errors + r.timeouts, non2xx: r.non2xx };
-  } finally {
-    child.kill('SIGTERM');
-    await new Promise((resolve) => child.once('exit', resolve));
-  }
+  const r = await serveUnderLoad({ storeDir, serveArgs: ['--cache', '0'], paths, connections, seconds });
+  return { p50: r.latency.p50, p99: r.latency.p99, requests: r.requests.total, errors: r.errors + r.timeouts, non2xx: r.non2xx };
 }
 
 console.log('Figures are wall times on this machine; when it is shared they include the other users\' load.');

@@ -7,13 +7,11 @@
  * Prints p50 and p99 latency, requests per second, errors and non-2xx answers.
  * `node --import tsx bench/serve.bench.ts [connections] [seconds]`
  */
-import { spawn } from 'node:child_process';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { aim } from './lib/aim.ts';
-import { fileURLToPath } from 'node:url';
-import autocannon from 'autocannon';
+import { serveUnderLoad } from './lib/serveUnderLoad.ts';
 import { buildStore } from '../src/build/buildStore.ts';
 import { DEMO_ROSTER } from '../src/cli/commands/demoCommand.ts';
 import { openProfileStore } from '../src/store/openProfileStore.ts';
@@ -23,7 +21,6 @@ const seconds = Number(process.argv[3] ?? 20);
 /** Distinct targets cycled through, spread over the groups in proportion to their size. */
 const TARGETS = 400;
 
-const root = fileURLToPath(new URL('..', import.meta.url));
 const dir = await mkdtemp(join(tmpdir(), 'kindred-serve-bench-'));
 const storeDir = join(dir, 'store');
 await buildStore(DEMO_ROSTER, storeDir, { lenient: false });
@@ -47,42 +44,17 @@ for (const g of store.groups.values()) {
 }
 
 async function run(label: string, extraArgs: string[]): Promise<void> {
-  const child = spawn(process.execPath, [join(root, 'bin', 'kindred.js'), 'serve', '--store', storeDir, '--port', '0', ...extraArgs], {
-    stdio: ['ignore', 'pipe', 'ignore'],
-  });
-  const url = await new Promise<string>((resolve, reject) => {
-    let out = '';
-    child.stdout.on('data', (c: Buffer) => {
-      out += c.toString('utf8');
-      const m = /serving (http:\/\/\S+)/.exec(out);
-      if (m?.[1]) resolve(m[1]);
-    });
-    child.once('exit', (code) => reject(new Error(`kindred serve exited with ${code ?? 'a signal'} before listening`)));
-  });
-  try {
-    let next = 0;
-    const warm = await fetch(new URL(paths[0] ?? '/api/info', url));
-    if (warm.status !== 200) throw new Error(`warm-up answered ${warm.status}`);
-    const result = await autocannon({
-      url,
-      connections,
-      duration: seconds,
-      requests: [{ setupRequest: (req) => ({ ...req, path: paths[next++ % paths.length] ?? '/api/info' }) }],
-    });
-    const line = (k: string, v: string): void => console.log(`  ${k.padEnd(22)} ${v}`);
-    console.log(`${label}:`);
-    line('latency p50', `${result.latency.p50} ms`);
-    line('latency p99', `${result.latency.p99} ms ${aim(`${label}: p99`, result.latency.p99, { below: 50, unit: 'ms' })}`);
-    line('latency max', `${result.latency.max} ms`);
-    line('requests / s (mean)', result.requests.average.toFixed(0));
-    line('requests', String(result.requests.total));
-    line('errors', `${result.errors} ${aim(`${label}: errors`, result.errors, { below: 1 })}`);
-    line('timeouts', `${result.timeouts} ${aim(`${label}: timeouts`, result.timeouts, { below: 1 })}`);
-    line('non-2xx', `${result.non2xx} ${aim(`${label}: non-2xx answers`, result.non2xx, { below: 1 })}`);
-  } finally {
-    child.kill('SIGTERM');
-    await new Promise((r) => child.once('exit', r));
-  }
+  const result = await serveUnderLoad({ storeDir, serveArgs: extraArgs, paths, connections, seconds });
+  const line = (k: string, v: string): void => console.log(`  ${k.padEnd(22)} ${v}`);
+  console.log(`${label}:`);
+  line('latency p50', `${result.latency.p50} ms`);
+  line('latency p99', `${result.latency.p99} ms ${aim(`${label}: p99`, result.latency.p99, { below: 50, unit: 'ms' })}`);
+  line('latency max', `${result.latency.max} ms`);
+  line('requests / s (mean)', result.requests.average.toFixed(0));
+  line('requests', String(result.requests.total));
+  line('errors', `${result.errors} ${aim(`${label}: errors`, result.errors, { below: 1 })}`);
+  line('timeouts', `${result.timeouts} ${aim(`${label}: timeouts`, result.timeouts, { below: 1 })}`);
+  line('non-2xx', `${result.non2xx} ${aim(`${label}: non-2xx answers`, result.non2xx, { below: 1 })}`);
 }
 
 console.log(`kindred serve: GET /api/comps on the demo store (${total} player-seasons), ${paths.length} targets, ${connections} connections, ${seconds} s each`);
