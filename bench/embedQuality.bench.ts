@@ -13,15 +13,15 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { simulateLeague } from '../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
-import { buildStore } from '../src/build/buildStore.ts';
+import { buildStore } from '../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../src/store/openProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../src/query/findComps.ts';
 import { playerTarget } from '../src/query/playerTarget.ts';
 import type { ProfileStore } from '../src/store/ProfileStore.ts';
 import { readRoster } from '../src/ingest/readRoster.ts';
 import { buildProfiles } from '../src/profiles/buildProfiles.ts';
-import { embedProfiles } from '../src/build/embedProfiles.ts';
-import { resolveEmbedSettings, type EmbedMethod, type EmbedSettingsInput } from '../src/build/EmbedSettings.ts';
+import { embedProfiles } from '../src/pipeline/embedProfiles.ts';
+import { resolveEmbedSettings, type EmbedMethod, type EmbedSettingsInput } from '../src/pipeline/EmbedSettings.ts';
 import type { PositionGroup } from '../src/profiles/positionGroup.ts';
 import { compsQuality } from './lib/compsQuality.ts';
 

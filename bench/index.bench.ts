@@ -7,9 +7,9 @@ import { mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
-import { exactSearch } from '../src/index/exactSearch.ts';
-import { GuardedIndex } from '../src/index/GuardedIndex.ts';
-import type { IndexParams } from '../src/index/types.ts';
+import { exactSearch } from '../src/ann/exactSearch.ts';
+import { GuardedIndex } from '../src/ann/GuardedIndex.ts';
+import type { IndexParams } from '../src/ann/types.ts';
 import { createRng } from '../src/embed/createRng.ts';
 import { nearestRankQuantile } from '../src/stats/quantile.ts';
 

@@ -21,7 +21,7 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { buildStore } from '../src/build/buildStore.ts';
+import { buildStore } from '../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../src/store/ProfileStore.ts';
 import { simulateLeague } from '../src/sim/simulateLeague.ts';

@@ -15,13 +15,13 @@
 import { benchLeagues, withBenchLeague } from './leagues.ts';
 import { collectForecasts, type RawForecast } from '../src/outlook/collectForecasts.ts';
 import { runBacktest, trainingFor, type KindBacktest, type WithInterval } from '../src/outlook/runBacktest.ts';
-import { fitLogistic, logisticProbability } from '../src/outlook/fitLogistic.ts';
-import { brierScore } from '../src/outlook/brierScore.ts';
-import { spearmanCorrelation } from '../src/outlook/spearmanCorrelation.ts';
+import { fitLogistic, logisticProbability } from '../src/stats/fitLogistic.ts';
+import { brierScore } from '../src/stats/brierScore.ts';
+import { spearmanCorrelation } from '../src/stats/spearmanCorrelation.ts';
 import { playerIndexOf } from '../src/sim/SimTruth.ts';
 import type { SimLeague } from '../src/sim/simTypes.ts';
 import type { ProfileStore } from '../src/store/ProfileStore.ts';
-import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from '../src/outlook/findProspectComps.ts';
+import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from '../src/jobs/findProspectComps.ts';
 import { DEFAULT_CALIBRATION, type CalibrationChoice } from '../src/outlook/calibrateForecast.ts';
 
 const playerSeasons = Number(process.argv[2] ?? 15000);

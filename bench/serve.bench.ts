@@ -12,7 +12,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { aim } from './lib/aim.ts';
 import { serveUnderLoad } from './lib/serveUnderLoad.ts';
-import { buildStore } from '../src/build/buildStore.ts';
+import { buildStore } from '../src/pipeline/buildStore.ts';
 import { DEMO_ROSTER } from '../src/cli/commands/demoCommand.ts';
 import { openProfileStore } from '../src/store/openProfileStore.ts';
 

@@ -11,7 +11,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { simulateLeague } from '../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../src/sim/writeLeagueCsv.ts';
-import { buildStore } from '../src/build/buildStore.ts';
+import { buildStore } from '../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../src/store/openProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../src/query/findComps.ts';
 import { DEFAULT_PROFILE_OPTIONS } from '../src/profiles/buildProfiles.ts';

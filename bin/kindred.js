@@ -6,7 +6,7 @@ import { readdirSync, statSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 
 const built = new URL('../dist/cli.js', import.meta.url);
-const sources = fileURLToPath(new URL('../src/', import.meta.url));
+const sources = fileURLToPath(new URL('../src', import.meta.url));
 
 /** Modification time of the build, or undefined when there is none. */
 function builtAt() {

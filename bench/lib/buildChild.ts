@@ -3,7 +3,7 @@
  * `node --import tsx bench/lib/buildChild.ts <roster> <store>`
  */
 import { availableParallelism } from 'node:os';
-import { buildStore } from '../../src/build/buildStore.ts';
+import { buildStore } from '../../src/pipeline/buildStore.ts';
 
 const [roster, store] = process.argv.slice(2);
 if (!roster || !store) throw new Error('usage: buildChild.ts <roster> <store>');

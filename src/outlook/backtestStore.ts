@@ -6,7 +6,7 @@ import type { ProfileStore } from '../store/ProfileStore.ts';
 import { BACKTEST_FILE, BACKTEST_FORMAT, BACKTEST_VERSION, backtestFileSchema, type BacktestFile, type KindSummary } from './backtestFile.ts';
 import { DEFAULT_CALIBRATION, fitCalibration, type CalibrationChoice, type FittedCalibration } from './calibrateForecast.ts';
 import { collectForecasts } from './collectForecasts.ts';
-import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from './findProspectComps.ts';
+import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from './Outcomes.ts';
 import { runBacktest, type BacktestResult, type KindBacktest, type WithInterval } from './runBacktest.ts';
 import type { OutcomeKind } from './types.ts';

@@ -1,7 +1,7 @@
-import { conformalQuantile, rangeScore } from './conformalQuantile.ts';
+import { conformalQuantile, rangeScore } from '../stats/conformalQuantile.ts';
 import type { RawForecast, Spread } from './collectForecasts.ts';
-import { fitLogistic, logisticProbability, type LogisticFit } from './fitLogistic.ts';
-import { applyIsotonicMap, fitIsotonicMap, type IsotonicMap } from './isotonicRegression.ts';
+import { fitLogistic, logisticProbability, type LogisticFit } from '../stats/fitLogistic.ts';
+import { applyIsotonicMap, fitIsotonicMap, type IsotonicMap } from '../stats/isotonicRegression.ts';
 
 /**
  * Inputs of the reached-the-top-level model (project choices, decided by bench/outlook.bench.ts), each

@@ -5,7 +5,7 @@ import type { BacktestFile } from './backtestFile.ts';
 import { fittedFromFile } from './backtestStore.ts';
 import { calibrateForecast } from './calibrateForecast.ts';
 import { rawForecastOf, rowOutcomes } from './collectForecasts.ts';
-import type { ProspectOptions } from './findProspectComps.ts';
+import type { ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from './Outcomes.ts';
 import type { CalibratedOutlook, ProspectResult } from './types.ts';
 

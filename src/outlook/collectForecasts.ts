@@ -1,7 +1,7 @@
 import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts';
 import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { playerTarget } from '../query/playerTarget.ts';
-import { findProspectComps, type ProspectOptions } from './findProspectComps.ts';
+import { findProspectComps, type ProspectOptions } from '../jobs/findProspectComps.ts';
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 import { peakOf, type Outcomes } from './Outcomes.ts';
 import { peakSummaryOf } from './summariseOutlook.ts';

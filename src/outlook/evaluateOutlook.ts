@@ -1,11 +1,11 @@
 import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { playerTarget } from '../query/playerTarget.ts';
-import { brierScore } from './brierScore.ts';
-import { findProspectComps, type ProspectOptions } from './findProspectComps.ts';
-import { intervalCoverage } from './intervalCoverage.ts';
+import { brierScore } from '../stats/brierScore.ts';
+import { findProspectComps, type ProspectOptions } from '../jobs/findProspectComps.ts';
+import { intervalCoverage } from '../stats/intervalCoverage.ts';
 import { peakOf, type Outcomes } from './Outcomes.ts';
-import { spearmanCorrelation } from './spearmanCorrelation.ts';
+import { spearmanCorrelation } from '../stats/spearmanCorrelation.ts';
 import { peakSummaryOf } from './summariseOutlook.ts';
 import type { OutcomeKind, OutlookFigures } from './types.ts';
 

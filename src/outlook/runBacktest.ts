@@ -1,10 +1,10 @@
-import { bootstrapInterval } from './bootstrapInterval.ts';
-import { brierScore } from './brierScore.ts';
+import { bootstrapInterval } from '../stats/bootstrapInterval.ts';
+import { brierScore } from '../stats/brierScore.ts';
 import { calibrateForecast, DEFAULT_CALIBRATION, fitCalibration, MIN_BASE_PLAYERS, type CalibrationChoice, type FittedCalibration } from './calibrateForecast.ts';
 import type { RawForecast } from './collectForecasts.ts';
-import { intervalCoverage } from './intervalCoverage.ts';
-import { murphyDecomposition, type MurphyBin } from './murphyDecomposition.ts';
-import { spearmanCorrelation } from './spearmanCorrelation.ts';
+import { intervalCoverage } from '../stats/intervalCoverage.ts';
+import { murphyDecomposition, type MurphyBin } from '../stats/murphyDecomposition.ts';
+import { spearmanCorrelation } from '../stats/spearmanCorrelation.ts';
 import type { OutcomeKind } from './types.ts';
 
 export interface BacktestOptions {

@@ -1,4 +1,4 @@
-import { partitionVector } from '../index/partitionVector.ts';
+import { partitionVector } from '../ann/partitionVector.ts';
 import type { StoredGroup } from '../store/ProfileStore.ts';
 import { closestRows } from './closestRows.ts';
 import { searchIndexPool } from './searchIndexPool.ts';

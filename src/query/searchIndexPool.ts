@@ -1,4 +1,4 @@
-import type { GuardedIndex } from '../index/GuardedIndex.ts';
+import type { GuardedIndex } from '../ann/GuardedIndex.ts';
 
 /** Up to this many rows left out of the pool, the index is searched without a filter callback. */
 export const UNFILTERED_SEARCH_MAX_EXCLUDED = 64;

@@ -1,5 +1,5 @@
 import { ParameterError } from '../errors/ParameterError.ts';
-import { DEFAULT_SALARY_LIMIT, findCheaperComps, type CheaperOptions, type SalaryLimit } from '../outlook/findCheaperComps.ts';
+import { DEFAULT_SALARY_LIMIT, findCheaperComps, type CheaperOptions, type SalaryLimit } from '../jobs/findCheaperComps.ts';
 import type { CheaperResult } from '../outlook/types.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';

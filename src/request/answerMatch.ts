@@ -1,5 +1,5 @@
 import { ParameterError } from '../errors/ParameterError.ts';
-import { matchPlayers, type MatchOptions } from '../outlook/matchPlayers.ts';
+import { matchPlayers, type MatchOptions } from '../jobs/matchPlayers.ts';
 import type { MatchResult } from '../outlook/types.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { resolvePlayer } from '../query/resolvePlayer.ts';

@@ -1,4 +1,4 @@
-import { findProspectComps, type ProspectOptions } from '../outlook/findProspectComps.ts';
+import { findProspectComps, type ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import type { ProspectResult } from '../outlook/types.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';

@@ -1,5 +1,5 @@
 import type { Bats, Position, Throws } from '../ingest/types.ts';
-import { DEFAULT_PROSPECT_OPTIONS } from '../outlook/findProspectComps.ts';
+import { DEFAULT_PROSPECT_OPTIONS } from '../jobs/findProspectComps.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../query/findComps.ts';
 import { isWeightPreset, WEIGHT_PRESETS, type WeightPreset } from '../query/weightPresets.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';

@@ -3,7 +3,7 @@ import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
 import type { ShrinkageUsed } from '../profiles/shrinkage.ts';
-import type { GuardedIndex } from '../index/GuardedIndex.ts';
+import type { GuardedIndex } from '../ann/GuardedIndex.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import type { OpenStore } from './openStore.ts';
 import type { StoredEmbedding } from './StoredEmbedding.ts';

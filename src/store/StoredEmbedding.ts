@@ -1,6 +1,6 @@
 import type { Encoder } from '../embed/embeddedDistanceGame.ts';
 import type { EmbeddingSpace } from '../embed/EmbeddingModel.ts';
-import type { GroupEmbeddingFile } from '../store/groupEmbeddingFile.ts';
+import type { GroupEmbeddingFile } from './groupEmbeddingFile.ts';
 
 /** A group's learned space as queries see it (loaded and checked by loadGroupEmbedding). */
 export interface StoredEmbedding {

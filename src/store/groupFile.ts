@@ -49,7 +49,7 @@ export const groupFileSchema = z.strictObject({
   /** The index of `group-<G>.hnsw` over all rows (the codes of a learned space); null in the input space. */
   index: indexSchema.nullable(),
   /**
-   * Input space: the rows split by coverage pattern (src/index/partitionByCoverage.ts), each with the
+   * Input space: the rows split by coverage pattern (src/ann/partitionByCoverage.ts), each with the
    * dimensions its vectors hold and, when it is large enough, its own index `group-<G>.p<i>.hnsw`.
    */
   partitions: z.array(

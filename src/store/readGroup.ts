@@ -1,4 +1,4 @@
-import { GuardedIndex } from '../index/GuardedIndex.ts';
+import { GuardedIndex } from '../ann/GuardedIndex.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
 import type { ShrinkageUsed } from '../profiles/shrinkage.ts';

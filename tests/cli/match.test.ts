@@ -5,7 +5,7 @@ import { parse } from 'csv-parse/sync';
 import { runCli } from '../helpers/runCli.ts';
 import { buildSimStore, type SimStore } from '../outlook/simStore.ts';
 import { matchResultSchema } from '../outlook/outlookContract.ts';
-import { compsResultSchema } from '../cli/compsContract.ts';
+import { compsResultSchema } from './compsContract.ts';
 
 let sim: SimStore;
 let store: string;

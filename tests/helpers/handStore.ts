@@ -2,7 +2,7 @@
 import { mkdtemp, mkdir, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { buildStore } from '../../src/build/buildStore.ts';
+import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { DEFAULT_STANDARDISE } from '../../src/profiles/standardiseByStratum.ts';

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
-import { buildStore } from '../../src/build/buildStore.ts';
+import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import type { SimLeague } from '../../src/sim/simTypes.ts';

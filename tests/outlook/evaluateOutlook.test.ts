@@ -3,7 +3,7 @@ import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import type { Outcomes } from '../../src/outlook/Outcomes.ts';
 import { evaluateOutlook, type OutlookEvaluation } from '../../src/outlook/evaluateOutlook.ts';
-import { DEFAULT_PROSPECT_OPTIONS } from '../../src/outlook/findProspectComps.ts';
+import { DEFAULT_PROSPECT_OPTIONS } from '../../src/jobs/findProspectComps.ts';
 import { buildSimStore, type SimStore } from './simStore.ts';
 
 // The honesty check on a small simulated league (the bigger one is bench/outlook.bench.ts): prospects

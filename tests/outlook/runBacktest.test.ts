@@ -6,7 +6,7 @@ import { Outcomes } from '../../src/outlook/Outcomes.ts';
 import { OUTCOMES_FILE } from '../../src/store/storeFileNames.ts';
 import { collectForecasts, type RawForecast } from '../../src/outlook/collectForecasts.ts';
 import { runBacktest, trainingFor } from '../../src/outlook/runBacktest.ts';
-import { DEFAULT_PROSPECT_OPTIONS } from '../../src/outlook/findProspectComps.ts';
+import { DEFAULT_PROSPECT_OPTIONS } from '../../src/jobs/findProspectComps.ts';
 import { buildSimStore, type SimStore } from './simStore.ts';
 
 // Rolling origin (Tashman 2000): nothing after a cut may influence that cut's forecasts. A top-level

@@ -2,7 +2,7 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { buildStore } from '../../src/build/buildStore.ts';
+import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import type { SimOptions } from '../../src/sim/simTypes.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { closestRows } from '../../src/query/closestRows.ts';
-import { mulberry32 } from '../index/randomVectors.ts';
+import { mulberry32 } from '../ann/randomVectors.ts';
 
 /** Brute force written out here: the missing-aware distance (Gower-style available-case), sorted by (d2, row). */
 function brute(target: Float64Array, z: Float32Array, d: number, rows: Int32Array, mask: Uint8Array, w: Float64Array, minCoverage: number, c: number): number[] {

@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
-import { buildStore } from '../../src/build/buildStore.ts';
+import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findCompsWithRows } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';

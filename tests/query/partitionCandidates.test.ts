@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { partitionCandidates, type CandidateQuery } from '../../src/query/partitionCandidates.ts';
 import type { StoredPartition } from '../../src/store/ProfileStore.ts';
-import { GuardedIndex } from '../../src/index/GuardedIndex.ts';
-import { partitionVectors } from '../../src/build/buildStore.ts';
-import { mulberry32 } from '../index/randomVectors.ts';
+import { GuardedIndex } from '../../src/ann/GuardedIndex.ts';
+import { partitionVectors } from '../../src/pipeline/buildStore.ts';
+import { mulberry32 } from '../ann/randomVectors.ts';
 
 /**
  * Two coverage partitions as a store has them (rows with every dimension; rows without the last three,

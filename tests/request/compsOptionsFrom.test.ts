@@ -2,7 +2,7 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildStore } from '../../src/build/buildStore.ts';
+import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
 import { plausibleRange } from '../../src/ingest/fileColumns.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';

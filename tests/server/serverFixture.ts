@@ -4,7 +4,7 @@ import { request as httpRequest } from 'node:http';
 import { connect } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { buildStore, type BuildOptions } from '../../src/build/buildStore.ts';
+import { buildStore, type BuildOptions } from '../../src/pipeline/buildStore.ts';
 import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
 
 export async function tempDir(prefix: string): Promise<{ dir: string; remove: () => Promise<void> }> {

@@ -8,11 +8,11 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { KindredError } from '../../src/errors/KindredError.ts';
-import { GuardedIndex } from '../../src/index/GuardedIndex.ts';
-import type { IndexMeta } from '../../src/index/types.ts';
+import { GuardedIndex } from '../../src/ann/GuardedIndex.ts';
+import type { IndexMeta } from '../../src/ann/types.ts';
 import { openStore } from '../../src/store/openStore.ts';
 import { writeStore } from '../../src/store/writeStore.ts';
-import { randomVectors } from '../index/randomVectors.ts';
+import { randomVectors } from '../ann/randomVectors.ts';
 
 const work = process.argv[2] ?? '.';
 const dim = 8;

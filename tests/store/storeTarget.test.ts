@@ -2,7 +2,7 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, lstatSync, mkdirSync, readFileSync, readdirSync, symlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { buildStore } from '../../src/build/buildStore.ts';
+import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { openStore } from '../../src/store/openStore.ts';
 import { checkStoreTarget, cleanLeftovers, lockFileOf, lockStore } from '../../src/store/storeTarget.ts';
 import { writeStore } from '../../src/store/writeStore.ts';

@@ -7,7 +7,7 @@ import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { KindredError, UsageError } from '../../errors/KindredError.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import { backtestStore } from '../../outlook/backtestStore.ts';
-import { DEFAULT_PROSPECT_OPTIONS } from '../../outlook/findProspectComps.ts';
+import { DEFAULT_PROSPECT_OPTIONS } from '../../jobs/findProspectComps.ts';
 import { reliabilitySvg } from '../../outlook/charts/reliabilitySvg.ts';
 import { coverageSvg } from '../../outlook/charts/coverageSvg.ts';
 import { backtestTable } from '../../report/backtestTable.ts';

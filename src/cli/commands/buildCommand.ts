@@ -1,7 +1,7 @@
 import { Command } from 'commander';
 import cliProgress from 'cli-progress';
 import type { CliIo } from '../CliIo.ts';
-import { buildStore, type BuildSummary } from '../../build/buildStore.ts';
+import { buildStore, type BuildSummary } from '../../pipeline/buildStore.ts';
 import { loadColumnMap } from '../../ingest/loadColumnMap.ts';
 import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { z } from 'zod';

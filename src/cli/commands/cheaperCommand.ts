@@ -5,7 +5,7 @@ import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
-import { findCheaperComps } from '../../outlook/findCheaperComps.ts';
+import { findCheaperComps } from '../../jobs/findCheaperComps.ts';
 import type { CheaperResult } from '../../outlook/types.ts';
 import { cheaperTable } from '../../report/cheaperTable.ts';
 import { cheaperCsv } from '../../report/cheaperCsv.ts';

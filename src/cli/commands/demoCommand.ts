@@ -2,7 +2,7 @@ import { Command } from 'commander';
 import { isAbsolute, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { CliIo } from '../CliIo.ts';
-import { buildStore } from '../../build/buildStore.ts';
+import { buildStore } from '../../pipeline/buildStore.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../../query/findComps.ts';
 import { playerTarget } from '../../query/playerTarget.ts';

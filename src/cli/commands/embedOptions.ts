@@ -7,7 +7,7 @@ import {
   type EmbedInput,
   type EmbedMethod,
   type EmbedSettingsInput,
-} from '../../build/EmbedSettings.ts';
+} from '../../pipeline/EmbedSettings.ts';
 import { ACTIVATIONS, type Activation } from '../../embed/activation.ts';
 
 /**

@@ -6,7 +6,7 @@ import { UsageError } from '../../errors/KindredError.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { resolvePlayer } from '../../query/resolvePlayer.ts';
-import { matchPlayers } from '../../outlook/matchPlayers.ts';
+import { matchPlayers } from '../../jobs/matchPlayers.ts';
 import type { MatchResult } from '../../outlook/types.ts';
 import { matchTable } from '../../report/matchTable.ts';
 import { matchCsv } from '../../report/matchCsv.ts';

@@ -4,7 +4,7 @@ import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
-import { findProspectComps } from '../../outlook/findProspectComps.ts';
+import { findProspectComps } from '../../jobs/findProspectComps.ts';
 import type { ProspectResult } from '../../outlook/types.ts';
 import { calibrateOutlook } from '../../outlook/calibrateOutlook.ts';
 import { readBacktestFile } from '../../outlook/backtestStore.ts';

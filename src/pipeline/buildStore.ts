@@ -1,0 +1,202 @@
+import { mkdtemp, rm } from 'node:fs/promises';
+import { availableParallelism, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { readRoster, type ColumnMap } from '../ingest/readRoster.ts';
+import { writeRejects } from '../ingest/writeRejects.ts';
+import { buildProfiles, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
+import type { GroupFile } from '../store/groupFile.ts';
+import { encodeGroupFiles } from '../store/encodeGroupFiles.ts';
+import { encodePlayersFile } from '../store/playersFile.ts';
+import { encodeOutcomesFile } from '../store/outcomesFile.ts';
+import { chartsFolderOf, groupFileNames, OUTCOMES_FILE, PLAYERS_FILE } from '../store/storeFileNames.ts';
+import { IndexBuildPool } from './IndexBuildPool.ts';
+import type { IndexParams } from '../ann/types.ts';
+import { writeStore } from '../store/writeStore.ts';
+import { checkStoreTarget, cleanLeftovers, lockStore } from '../store/storeTarget.ts';
+import { partitionByCoverage, type CoveragePartition } from '../ann/partitionByCoverage.ts';
+import { partitionVector } from '../ann/partitionVector.ts';
+import type { PositionGroup } from '../profiles/positionGroup.ts';
+import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.ts';
+import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
+import { stageCharts } from './stageCharts.ts';
+import { computeOutcomes } from '../outlook/computeOutcomes.ts';
+
+export const DEFAULT_INDEX_PARAMS: IndexParams = { M: 16, efConstruction: 100, ef: 128, seed: 100 };
+
+export interface BuildOptions {
+  readonly lenient: boolean;
+  readonly columnMap?: ColumnMap;
+  /** Where --lenient writes the skipped rows (default: beside the store, `<store>.rejects.csv`). */
+  readonly rejectsPath?: string;
+  readonly profile?: ProfileOptions;
+  readonly index?: IndexParams;
+  /** The learned embedding to rank comps in (default none: the weighted input space). */
+  readonly embed?: EmbedSettingsInput;
+  /**
+   * Worker threads that build the HNSW indexes (default: the machine's cores); 1 builds them in this
+   * thread. The store is byte for byte the same either way.
+   */
+  readonly threads?: number;
+  readonly onProgress?: (stage: string, done: number, total: number) => void;
+}
+
+export interface BuildSummary {
+  readonly storeDir: string;
+  readonly rowsRead: Readonly<Record<string, number>>;
+  readonly rejected: number;
+  readonly rejectsPath: string | null;
+  /** Position groups the roster's files leave empty, in words (Roster.notices). */
+  readonly notices: readonly string[];
+  readonly profiles: Readonly<Partial<Record<PositionGroup, number>>>;
+  readonly skipped: ProfileSet['skipped'];
+  readonly seconds: number;
+  /** The ranking space, and per embedded group its code size and fitting time (absent for the input space). */
+  readonly embedding?: {
+    readonly space: 'pca' | 'autoencoder';
+    readonly groups: Readonly<Partial<Record<PositionGroup, { readonly dim: number; readonly seconds: number }>>>;
+    readonly chartsDir: string;
+  };
+}
+
+/**
+ * Reads a roster folder, builds the profiles and HNSW indexes per position group (one per coverage
+ * pattern in the input space, one on the codes of a learned space), and writes the
+ * store (temporary folder, then renamed into place). On bad input in strict mode nothing is written and
+ * an existing store is left as it was. Before any work the target is checked (checkStoreTarget: parent
+ * folder, no symbolic link, only a Kindred store is replaced), the store's build lock is taken
+ * (`<store>.lock`, one build at a time) and what killed builds left beside it is removed.
+ */
+export async function buildStore(rosterDir: string, storeDir: string, options: BuildOptions): Promise<BuildSummary> {
+  await checkStoreTarget(storeDir);
+  const lock = await lockStore(storeDir);
+  try {
+    await cleanLeftovers(storeDir);
+    return await buildLocked(rosterDir, storeDir, options);
+  } finally {
+    await lock.release();
+  }
+}
+
+async function buildLocked(rosterDir: string, storeDir: string, options: BuildOptions): Promise<BuildSummary> {
+  const started = performance.now();
+  const progress = options.onProgress ?? (() => {});
+  const roster = await readRoster(rosterDir, {
+    lenient: options.lenient,
+    ...(options.columnMap ? { columnMap: options.columnMap } : {}),
+    onProgress: (file, rows) => progress(`reading ${file}`, rows, 0),
+  });
+  let rejectsPath: string | null = null;
+  if (roster.rejected.length > 0) {
+    rejectsPath = options.rejectsPath ?? `${storeDir.replace(/\/+$/, '')}.rejects.csv`;
+    await writeRejects(rejectsPath, roster.rejected);
+  }
+  progress('profiles', 0, 1);
+  const profiles = buildProfiles(roster, options.profile ?? DEFAULT_PROFILE_OPTIONS);
+  const files = new Map<string, Uint8Array | string>();
+  const { text: playersText, playerIndex } = encodePlayersFile(roster);
+  files.set(PLAYERS_FILE, playersText);
+  files.set(OUTCOMES_FILE, encodeOutcomesFile(computeOutcomes(roster)));
+  const indexParams = options.index ?? DEFAULT_INDEX_PARAMS;
+  const counts: Partial<Record<PositionGroup, number>> = {};
+  const embed = resolveEmbedSettings(options.embed ?? {});
+  const charts = new Map<string, string>();
+  const embedded: Partial<Record<PositionGroup, { dim: number; seconds: number }>> = {};
+  const scratch = await mkdtemp(join(tmpdir(), 'kindred-index-'));
+  const pool = new IndexBuildPool(options.threads ?? availableParallelism());
+  /** Index builds in flight; each puts its file in `files` (at the place reserved for it) when saved. */
+  const indexFiles: Promise<void>[] = [];
+  const indexFile = (name: string, vectors: Float32Array, dim: number): void => {
+    files.set(name, new Uint8Array(0));
+    const built = pool.build(vectors, dim, indexParams, join(scratch, name)).then((bytes) => {
+      files.set(name, bytes);
+    });
+    built.catch(() => {}); // awaited below; a failure must not go unhandled while the loop still runs
+    indexFiles.push(built);
+  };
+  try {
+    let done = 0;
+    for (const [group, g] of profiles.groups) {
+      const names = groupFileNames(group);
+      let e: EmbeddedGroup | null = null;
+      if (embed.method !== 'none' && g.meta.length >= MIN_EMBED_ROWS && g.dims.length >= 2) {
+        progress(`embedding ${group}`, done, profiles.groups.size);
+        e = await embedProfiles(g, embed);
+        for (const [name, content] of e.files) files.set(name, content);
+        for (const [name, svg] of e.charts) charts.set(name, svg);
+        embedded[group] = { dim: e.dim, seconds: e.seconds };
+      }
+      progress(`index ${group}`, done, profiles.groups.size);
+      let mainIndex: GroupFile['index'] = null;
+      const partitions: GroupFile['partitions'] = [];
+      if (e) {
+        indexFile(names.index, e.vectors, e.dim);
+        mainIndex = { ...indexParams, dim: e.dim, count: g.meta.length };
+      } else {
+        const sqrtW = Float64Array.from(g.redundancy, Math.sqrt);
+        for (const [i, part] of partitionByCoverage(g.z, g.meta.length, g.dims.length).entries()) {
+          let meta: GroupFile['index'] = null;
+          if (part.rows.length >= PARTITION_INDEX_MIN_ROWS) {
+            indexFile(names.partitionIndex(i), partitionVectors(g.z, g.dims.length, part, sqrtW), part.dims.length);
+            meta = { ...indexParams, dim: part.dims.length, count: part.rows.length };
+          }
+          partitions.push({ dims: [...part.dims], rows: [...part.rows], index: meta });
+        }
+      }
+      const groupFiles = encodeGroupFiles(g, playerIndex, roster.levels, {
+        index: mainIndex,
+        partitions,
+        ...(e ? { embedding: { space: e.space, dim: e.dim } } : {}),
+      });
+      for (const [name, content] of groupFiles) files.set(name, content);
+      counts[group] = g.meta.length;
+      done++;
+    }
+    progress('index', done, profiles.groups.size);
+    await Promise.all(indexFiles);
+    progress('writing store', 0, 1);
+    const staged = await stageCharts(chartsFolderOf(storeDir), charts);
+    try {
+      await writeStore(storeDir, {
+        params: {
+          roster: rosterDir,
+          lenient: options.lenient,
+          profile: options.profile ?? DEFAULT_PROFILE_OPTIONS,
+          index: indexParams,
+          space: embed.method === 'none' ? 'input' : embed.method,
+          ...(embed.method === 'none' ? {} : { embedding: settingsRecord(embed) }),
+          groups: counts,
+        },
+        files,
+      });
+    } catch (error) {
+      await staged.discard();
+      throw error;
+    }
+    await staged.commit();
+  } finally {
+    await pool.close();
+    await rm(scratch, { recursive: true, force: true });
+  }
+  return {
+    storeDir,
+    rowsRead: roster.rowsRead,
+    rejected: roster.rejected.length,
+    rejectsPath,
+    notices: roster.notices,
+    profiles: counts,
+    skipped: profiles.skipped,
+    seconds: (performance.now() - started) / 1000,
+    ...(embed.method === 'none' ? {} : { embedding: { space: embed.method, groups: embedded, chartsDir: chartsFolderOf(storeDir) } }),
+  };
+}
+
+/** A partition with fewer rows is scanned at query time instead of indexed (scanning is as fast, and exact). */
+export const PARTITION_INDEX_MIN_ROWS = 2000;
+
+/** A partition's index vectors, one partitionVector per row. */
+export function partitionVectors(z: Float32Array, d: number, part: CoveragePartition, sqrtW: Float64Array): Float32Array {
+  const width = part.dims.length;
+  const out = new Float32Array(part.rows.length * width);
+  part.rows.forEach((row, r) => partitionVector(z, row * d, part.dims, sqrtW, out, r * width));
+  return out;
+}
