@@ -3,7 +3,7 @@
  * (6 latent factors through a mild non-linearity plus noise, 5% missing, 4 seasons per player).
  * Run: node --import tsx bench/embed.bench.ts [rows]
  */
-import { createRng } from '../src/embed/createRng.ts';
+import { SeededRandom } from '../src/random/SeededRandom.ts';
 import type { EmbedData } from '../src/embed/EmbedData.ts';
 import { fitPcaEmbedding } from '../src/embed/fitPcaEmbedding.ts';
 import { trainAutoencoder } from '../src/embed/trainAutoencoder.ts';
@@ -13,7 +13,7 @@ import { attributeDistance } from '../src/embed/attributeDistance.ts';
 import { aim } from './lib/aim.ts';
 
 function structuredData(n: number, d: number, factors: number, seed: number): EmbedData {
-  const rng = createRng(seed);
+  const rng = new SeededRandom(seed);
   const loadings = Float64Array.from({ length: factors * d }, () => rng.normal() / Math.sqrt(factors));
   const x = new Float64Array(n * d);
   const groups: string[] = [];

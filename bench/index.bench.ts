@@ -10,7 +10,7 @@ import { performance } from 'node:perf_hooks';
 import { exactSearch } from '../src/ann/exactSearch.ts';
 import { GuardedIndex } from '../src/ann/GuardedIndex.ts';
 import type { IndexParams } from '../src/ann/types.ts';
-import { createRng } from '../src/embed/createRng.ts';
+import { SeededRandom } from '../src/random/SeededRandom.ts';
 import { nearestRankQuantile } from '../src/stats/quantile.ts';
 
 const DIM = 24;
@@ -20,7 +20,7 @@ const K = 10;
 const PARAMS: IndexParams = { M: 16, efConstruction: 200, ef: 128, seed: 42 };
 
 function randomRows(count: number, seed: number): Float32Array {
-  const rng = createRng(seed);
+  const rng = new SeededRandom(seed);
   const next = (): number => rng.next();
   const out = new Float32Array(count * DIM);
   for (let i = 0; i < out.length; i++) out[i] = next();

@@ -7,7 +7,7 @@ import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import type { Target } from '../../src/query/Target.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
-import { SeededRandom } from '../../src/sim/random.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 
 /** Coverage classes, by the share of the group's default weight the target has. */
 export const COVERAGE_CLASSES = ['every dimension', 'most (>= 75% of weight)', 'part (< 75%, e.g. untracked)', 'want, 2-6 dimensions'] as const;

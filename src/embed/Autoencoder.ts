@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { StoreError } from '../errors/KindredError.ts';
 import { UsageError } from '../errors/KindredError.ts';
 import { ACTIVATIONS, activateInPlace, type Activation } from './activation.ts';
-import type { Rng } from './createRng.ts';
+import type { Rng } from '../random/Rng.ts';
 
 /** The architecture: d inputs, 0 to 2 hidden layers, a linear latent layer, a mirrored decoder, linear output. */
 export interface AutoencoderShape {
@@ -79,7 +79,7 @@ function shapeProblem(shape: AutoencoderShape): string | null {
  * Built complete by `initialise` (seeded random weights) or `fromJSON` (validated), never half-made.
  *
  * @example
- * const ae = Autoencoder.initialise({ d: 3, hidden: [4], latent: 2, activation: 'tanh' }, createRng(1));
+ * const ae = Autoencoder.initialise({ d: 3, hidden: [4], latent: 2, activation: 'tanh' }, new SeededRandom(1));
  * ae.encode(Float64Array.from([0.5, NaN, -1])).length; // => 2
  */
 export class Autoencoder {

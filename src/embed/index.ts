@@ -13,8 +13,8 @@ export type { CapacityStep, CapacityRow, CapacityResult, CapacityOptions } from 
 export { evaluateReconstruction } from './evaluateReconstruction.ts';
 export { splitByPlayer } from './splitByPlayer.ts';
 export type { PlayerSplit } from './splitByPlayer.ts';
-export { createRng } from './createRng.ts';
-export type { Rng } from './createRng.ts';
+export { SeededRandom } from '../random/SeededRandom.ts';
+export type { Rng } from '../random/Rng.ts';
 export { PcaEmbedding, PCA_FORMAT, PCA_VERSION } from './PcaEmbedding.ts';
 export type { PcaEmbeddingJson } from './PcaEmbedding.ts';
 export { fitPcaEmbedding } from './fitPcaEmbedding.ts';

@@ -1,6 +1,6 @@
 import { activateInPlace, multiplyByDerivative } from './activation.ts';
 import type { Autoencoder } from './Autoencoder.ts';
-import type { Rng } from './createRng.ts';
+import type { Rng } from '../random/Rng.ts';
 
 /**
  * The training objective of the autoencoder and its gradient by back-propagation

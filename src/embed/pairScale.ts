@@ -1,5 +1,5 @@
 import { UsageError } from '../errors/KindredError.ts';
-import { createRng } from './createRng.ts';
+import { SeededRandom } from '../random/SeededRandom.ts';
 
 /**
  * The scale s of embedded likeness: half the mean squared Euclidean distance between the codes of
@@ -19,7 +19,7 @@ export function pairScale(codes: Float64Array, n: number, k: number, pairs: numb
     throw new UsageError(`pairScale: ${codes.length} values for n ${n}, k ${k} (expected n * k)`);
   }
   if (!(Number.isInteger(pairs) && pairs >= 1)) throw new UsageError(`pairScale: pairs ${pairs} (expected a positive integer)`);
-  const rng = createRng(seed);
+  const rng = new SeededRandom(seed);
   let sum = 0;
   for (let p = 0; p < pairs; p++) {
     const i = rng.int(n);

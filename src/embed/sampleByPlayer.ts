@@ -1,5 +1,6 @@
 import { UsageError } from '../errors/KindredError.ts';
-import { createRng, shuffleInPlace } from './createRng.ts';
+import { SeededRandom } from '../random/SeededRandom.ts';
+import { shuffleInPlace } from '../random/shuffleInPlace.ts';
 
 /**
  * A seeded sample of whole players holding at most about `maxRows` rows (every row of a chosen player
@@ -21,7 +22,7 @@ export function sampleByPlayer(groups: readonly string[], maxRows: number, seed:
     else rowsOf.set(g, [i]);
   });
   const ids = [...rowsOf.keys()].sort();
-  const order = shuffleInPlace(Int32Array.from(ids.keys()), createRng(seed));
+  const order = shuffleInPlace(Int32Array.from(ids.keys()), new SeededRandom(seed));
   const taken = new Uint8Array(groups.length);
   let count = 0;
   for (const p of order) {

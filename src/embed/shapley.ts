@@ -1,5 +1,6 @@
 import { UsageError } from '../errors/KindredError.ts';
-import { createRng, shuffleInPlace } from './createRng.ts';
+import { SeededRandom } from '../random/SeededRandom.ts';
+import { shuffleInPlace } from '../random/shuffleInPlace.ts';
 
 /** A cooperative game's characteristic function: coalition[i] = 1 when player i is in. Must not keep the array. */
 export type CoalitionValue = (coalition: Uint8Array) => number;
@@ -123,7 +124,7 @@ export function permutationShapley(n: number, value: CoalitionValue, options: Pe
     }
   };
 
-  const rng = createRng(seed);
+  const rng = new SeededRandom(seed);
   const order = Int32Array.from({ length: n }, (_, i) => i);
   const sum = new Float64Array(n);
   const sumSq = new Float64Array(n);

@@ -1,5 +1,6 @@
 import { UsageError } from '../errors/KindredError.ts';
-import { createRng, shuffleInPlace } from './createRng.ts';
+import { SeededRandom } from '../random/SeededRandom.ts';
+import { shuffleInPlace } from '../random/shuffleInPlace.ts';
 
 export interface PlayerSplit {
   /** Row indices for training, ascending. */
@@ -29,7 +30,7 @@ export function splitByPlayer(groups: readonly string[], valFraction: number, se
     else rowsOf.set(g, [i]);
   });
   const ids = [...rowsOf.keys()].sort();
-  const order = shuffleInPlace(Int32Array.from(ids.keys()), createRng(seed));
+  const order = shuffleInPlace(Int32Array.from(ids.keys()), new SeededRandom(seed));
   const wanted = valFraction * groups.length;
   const isVal = new Uint8Array(groups.length);
   let valRows = 0;

@@ -1,6 +1,7 @@
 import { Adam } from './Adam.ts';
 import { Autoencoder } from './Autoencoder.ts';
-import { createRng, shuffleInPlace } from './createRng.ts';
+import { SeededRandom } from '../random/SeededRandom.ts';
+import { shuffleInPlace } from '../random/shuffleInPlace.ts';
 import { checkEmbedData, type EmbedData } from './EmbedData.ts';
 import { evaluateReconstruction } from './evaluateReconstruction.ts';
 import { createGradients, createWorkspace, loadRows, lossAndGradient } from './lossAndGradient.ts';
@@ -47,14 +48,14 @@ export function trainAutoencoder(data: EmbedData, partial: Partial<TrainOptions>
   const started = performance.now();
   checkEmbedData(data);
   const options = resolveTrainOptions(partial);
-  const master = createRng(options.seed);
+  const master = new SeededRandom(options.seed);
   const split = splitByPlayer(data.groups, options.valFraction, options.seed);
   const model = Autoencoder.initialise(
     { d: data.d, hidden: options.hidden, latent: options.latent, activation: options.activation },
-    createRng(master.int(0x100000000)),
+    new SeededRandom(master.int(0x100000000)),
   );
-  const orderRng = createRng(master.int(0x100000000));
-  const dropout = options.dropout > 0 ? { rate: options.dropout, rng: createRng(master.int(0x100000000)) } : null;
+  const orderRng = new SeededRandom(master.int(0x100000000));
+  const dropout = options.dropout > 0 ? { rate: options.dropout, rng: new SeededRandom(master.int(0x100000000)) } : null;
   const adam = new Adam(model, options);
   const ws = createWorkspace(model, Math.min(options.batchSize, split.train.length));
   const grads = createGradients(model);

@@ -1,5 +1,6 @@
 import type { AttributionRow } from '../embed/charts/attributionSpreadSvg.ts';
-import { createRng, shuffleInPlace } from '../embed/createRng.ts';
+import { SeededRandom } from '../random/SeededRandom.ts';
+import { shuffleInPlace } from '../random/shuffleInPlace.ts';
 import type { Encoder } from '../embed/embeddedDistanceGame.ts';
 import type { EmbeddingDriver } from '../store/groupEmbeddingFile.ts';
 import { quantileSorted } from '../stats/quantile.ts';
@@ -38,7 +39,7 @@ export interface DriverSummary {
  */
 export function attributionDrivers(input: DriverInput, targets: number, comps: number, seed: number): DriverSummary {
   const { n, d, dim, codes, z } = input;
-  const order = shuffleInPlace(Int32Array.from({ length: n }, (_, i) => i), createRng(seed));
+  const order = shuffleInPlace(Int32Array.from({ length: n }, (_, i) => i), new SeededRandom(seed));
   const picked = order.subarray(0, Math.min(targets, n));
   const values: number[][] = Array.from({ length: d }, () => []);
   const rows: AttributionRow[] = [];

@@ -26,7 +26,7 @@
 import { BATTING_COLUMNS, columnAt } from './fileSchemas.ts';
 import { LEVEL_SHIFT } from './levelTable.ts';
 import { logistic, logit } from './logistic.ts';
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 import { H_CONTACT, H_EYE, H_POWER, H_SPEED } from './talentNames.ts';
 
 /** Mean talent of a top-level regular (outcome rates are centred there). */

@@ -10,7 +10,7 @@
  * choosePosition(rng, talents, 'R');
  */
 import type { FieldPosition, Throws } from '../ingest/types.ts';
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 import { H_ARM, H_GLOVE, H_POWER, H_SPEED } from './talentNames.ts';
 
 export type HitterPosition = FieldPosition | 'DH';

@@ -8,7 +8,7 @@
  * @example
  * drawHitterTalents(new SeededRandom(3), new Float64Array(7)); // fills 7 talents, each ~N(0, 1)
  */
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 import {
   H_ARM, H_CONTACT, H_CTHROW, H_EYE, H_GLOVE, H_POWER, H_SPEED,
   P_CONTROL, P_GROUNDBALL, P_SPIN, P_STAMINA, P_STUFF, P_VELOCITY,

@@ -18,7 +18,7 @@
 import type { FieldPosition } from '../ingest/types.ts';
 import { FIELDING_COLUMNS, columnAt } from './fileSchemas.ts';
 import { logistic, logit } from './logistic.ts';
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 import { H_ARM, H_CTHROW, H_GLOVE, H_SPEED } from './talentNames.ts';
 
 const C = (name: string): number => columnAt(FIELDING_COLUMNS, name);

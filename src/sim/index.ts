@@ -42,7 +42,7 @@ export { writeLeagueCsv } from './writeLeagueCsv.ts';
 export { cellText } from './cellText.ts';
 export { SimTruth, playerIndexOf, type SeasonTruth } from './SimTruth.ts';
 export { ColumnTable, type ColumnSpec, type ColumnFormat } from './ColumnTable.ts';
-export { SeededRandom } from './random.ts';
+export { SeededRandom } from '../random/SeededRandom.ts';
 export { HITTER_TALENTS, PITCHER_TALENTS, TALENT_NAMES, type SimKind } from './talentNames.ts';
 export { SIM_LEVELS } from './levelTable.ts';
 export { simLadder, type SimLadder } from './simLadder.ts';

@@ -5,7 +5,7 @@
  * @example
  * inventClubs(new SeededRandom(1), 6, 2).length; // => 12, level-major order
  */
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 
 const TOWN_HEADS = [
   'Harrow', 'Copper', 'Ash', 'Bright', 'Cinder', 'Dun', 'Elder', 'Fern', 'Gull', 'Hollow', 'Iron', 'Juniper',

@@ -6,7 +6,7 @@
  * @example
  * inventName(new SeededRandom(1)); // => a "First Last" string such as "Keldo Varnovar"
  */
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 
 const FIRST_HEADS = [
   'Al', 'Bran', 'Cal', 'Dar', 'Ed', 'Fal', 'Gav', 'Hol', 'Ivo', 'Jar', 'Kel', 'Lor', 'Mal', 'Nor', 'Os',

@@ -21,7 +21,7 @@
 import { PITCHING_COLUMNS, columnAt } from './fileSchemas.ts';
 import { LEVEL_SHIFT } from './levelTable.ts';
 import { logistic, logit } from './logistic.ts';
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 import { P_CONTROL, P_GROUNDBALL, P_SPIN, P_STUFF, P_VELOCITY } from './talentNames.ts';
 
 /** Mean talent of a top-level pitcher (outcome rates are centred there). */

@@ -12,7 +12,7 @@
  * @example
  * salaryThousands(rng, 2003, 0, 1.0); // => about 300 to 375 ($300k to $375k)
  */
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 import { LEVEL_BAR, LEVEL_MLB } from './levelTable.ts';
 
 export function leagueMinimumThousands(season: number): number {

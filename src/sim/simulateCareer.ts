@@ -24,7 +24,7 @@ import { choosePosition, secondaryPosition, type HitterPosition } from './choose
 import { drawHitterTalents, drawPitcherTalents } from './drawTalents.ts';
 import { simLadder, type SimLadder } from './simLadder.ts';
 import { hitterValue, pitcherValue } from './playerValue.ts';
-import type { SeededRandom } from './random.ts';
+import type { SeededRandom } from '../random/SeededRandom.ts';
 import { HITTER_CURVES, PITCHER_CURVES } from './talentCurves.ts';
 import { H_GLOVE, H_SPEED, HITTER_TALENTS, P_STAMINA, PITCHER_TALENTS, type SimKind } from './talentNames.ts';
 import type { FieldPosition } from '../ingest/types.ts';

@@ -26,7 +26,7 @@ import { inventClubs } from './inventClubs.ts';
 import { inventName } from './inventName.ts';
 import { simLadder, type SimLadder } from './simLadder.ts';
 import { pitchingLine } from './pitchingLine.ts';
-import { SeededRandom } from './random.ts';
+import { SeededRandom } from '../random/SeededRandom.ts';
 import { salaryThousands } from './salary.ts';
 import { DEFAULT_CAREER_RULES, simulateCareer, type Career, type CareerRules, type CareerSeason } from './simulateCareer.ts';
 import { positionIndex } from './simPositions.ts';

@@ -3,12 +3,12 @@
  * `rounds` times, compute the statistic each time, and take its alpha/2 and 1 - alpha/2 quantiles.
  *
  * Source: Efron and Tibshirani (1993), An Introduction to the Bootstrap, chapter 13 (the percentile
- * interval). Deterministic for a seed (mulberry32, src/embed/createRng.ts).
+ * interval). Deterministic for a seed (src/random/SeededRandom.ts).
  *
  * @example
  * bootstrapInterval(100, (idx) => mean(idx.map((i) => xs[i])), { rounds: 1000, seed: 1 }); // => [lo, hi]
  */
-import { createRng } from '../embed/createRng.ts';
+import { SeededRandom } from '../random/SeededRandom.ts';
 
 export interface BootstrapOptions {
   readonly rounds?: number;
@@ -20,7 +20,7 @@ export function bootstrapInterval(n: number, statistic: (indices: readonly numbe
   const rounds = options.rounds ?? 1000;
   const alpha = options.alpha ?? 0.05;
   if (n < 2) return [NaN, NaN];
-  const rng = createRng(options.seed ?? 1);
+  const rng = new SeededRandom(options.seed ?? 1);
   const values: number[] = [];
   const idx = new Array<number>(n);
   for (let r = 0; r < rounds; r++) {

@@ -9,12 +9,12 @@ import { describe, expect, it } from 'vitest';
 import { Adam } from '../../src/embed/Adam.ts';
 import { Autoencoder } from '../../src/embed/Autoencoder.ts';
 import { createGradients } from '../../src/embed/lossAndGradient.ts';
-import { createRng } from '../../src/embed/createRng.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 
 const SETTINGS = { learningRate: 0.1, beta1: 0.9, beta2: 0.999, epsilon: 1e-8 };
 
 function model(): Autoencoder {
-  return Autoencoder.initialise({ d: 2, hidden: [], latent: 1, activation: 'tanh' }, createRng(3));
+  return Autoencoder.initialise({ d: 2, hidden: [], latent: 1, activation: 'tanh' }, new SeededRandom(3));
 }
 
 describe('Adam(model, settings).step(model, gradients)', () => {

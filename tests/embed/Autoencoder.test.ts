@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { Autoencoder } from '../../src/embed/Autoencoder.ts';
-import { createRng } from '../../src/embed/createRng.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { StoreError } from '../../src/errors/KindredError.ts';
 
-const model = Autoencoder.initialise({ d: 5, hidden: [6, 4], latent: 2, activation: 'relu' }, createRng(4));
+const model = Autoencoder.initialise({ d: 5, hidden: [6, 4], latent: 2, activation: 'relu' }, new SeededRandom(4));
 const row = Float64Array.from([0.3, NaN, -1.2, 2.0, 0.1]);
 
 function codeOf(fn: () => unknown): string | undefined {

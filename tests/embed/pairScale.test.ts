@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { pairScale } from '../../src/embed/pairScale.ts';
-import { createRng } from '../../src/embed/createRng.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { UsageError } from '../../src/errors/KindredError.ts';
 
 describe('pairScale(codes, n, k, pairs, seed)', () => {
@@ -10,7 +10,7 @@ describe('pairScale(codes, n, k, pairs, seed)', () => {
 
   it('approaches the code variance summed over coordinates for independent standard normal codes (E|x-y|^2 = 2k)', () => {
     // for x, y independent N(0, I_k): E||x - y||^2 = 2k, so s = k (a textbook identity)
-    const rng = createRng(3);
+    const rng = new SeededRandom(3);
     const n = 4000;
     const k = 3;
     const codes = Float64Array.from({ length: n * k }, () => rng.normal());

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { battingLine } from '../../src/sim/battingLine.ts';
 import { BATTING_COLUMNS, columnAt } from '../../src/sim/fileSchemas.ts';
 import { LEVEL_MLB } from '../../src/sim/levelTable.ts';
-import { SeededRandom } from '../../src/sim/random.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { H_CONTACT, H_EYE, H_POWER, HITTER_TALENTS } from '../../src/sim/talentNames.ts';
 
 const col = (name: string): number => columnAt(BATTING_COLUMNS, name);

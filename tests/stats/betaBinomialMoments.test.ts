@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { betaBinomialMoments } from '../../src/stats/betaBinomialMoments.ts';
-import { createRng } from '../../src/embed/createRng.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 
 describe('betaBinomialMoments(successes, trials)', () => {
   it('matches the method-of-moments example worked by hand (equal n: (s² - p̄(1 - p̄)/n) / (1 - 1/n))', () => {
@@ -24,7 +24,7 @@ describe('betaBinomialMoments(successes, trials)', () => {
 
   it('recovers a known talent variance on simulated binomial data (unequal samples) within its standard error', () => {
     // talents uniform on [0.15, 0.35]: σ² = 0.2² / 12; samples 50-650 trials; 200 leagues of 300 players
-    const rng = createRng(11);
+    const rng = new SeededRandom(11);
     const truth = 0.04 / 12;
     const estimates: number[] = [];
     for (let rep = 0; rep < 200; rep++) {

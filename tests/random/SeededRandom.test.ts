@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SeededRandom } from '../../src/sim/random.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 
 /** Mean and variance of a sample. */
 function moments(xs: readonly number[]): { mean: number; variance: number } {

@@ -1,3 +1,5 @@
+import type { Rng } from './Rng.ts';
+
 /**
  * A small seeded pseudo-random generator, so that a league is a pure
  * function of its seed.
@@ -16,7 +18,7 @@
  * const a = new SeededRandom(7); const b = new SeededRandom(7);
  * a.next() === b.next(); // => true, and every later draw matches too
  */
-export class SeededRandom {
+export class SeededRandom implements Rng {
   private a: number;
   private b: number;
   private c: number;
