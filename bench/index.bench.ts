@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { exactSearch } from '../src/ann/exactSearch.ts';
 import { GuardedIndex } from '../src/ann/GuardedIndex.ts';
-import type { IndexParams } from '../src/ann/types.ts';
+import type { IndexParams } from '../src/ann/IndexParams.ts';
 import { SeededRandom } from '../src/random/SeededRandom.ts';
 import { nearestRankQuantile } from '../src/stats/quantile.ts';
 

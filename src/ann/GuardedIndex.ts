@@ -5,7 +5,7 @@ import hnswlib from 'hnswlib-node';
 import { IndexError, StoreError, UsageError } from '../errors/KindredError.ts';
 import { checkRows, checkVector } from './checkVector.ts';
 import { checkK, exactSearch } from './exactSearch.ts';
-import type { IndexHits, IndexMeta, IndexParams, LabelFilter } from './types.ts';
+import type { IndexHits, IndexMeta, IndexParams, LabelFilter } from './IndexParams.ts';
 import { verifyHnswFile } from './verifyHnswFile.ts';
 import { withCause } from '../errors/withCause.ts';
 

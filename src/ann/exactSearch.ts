@@ -1,6 +1,6 @@
 import { IndexError, UsageError } from '../errors/KindredError.ts';
 import { checkVector } from './checkVector.ts';
-import type { IndexHits, LabelFilter } from './types.ts';
+import type { IndexHits, LabelFilter } from './IndexParams.ts';
 
 /**
  * Exact k nearest neighbours by brute force under squared Euclidean distance,

@@ -1,5 +1,5 @@
 import { StoreError } from '../errors/KindredError.ts';
-import type { IndexMeta } from './types.ts';
+import type { IndexMeta } from './IndexParams.ts';
 
 /** Byte size of the header hnswlib 0.8 writes before the layer-0 block (12 fields, packed, little-endian). */
 export const HNSW_HEADER_BYTES = 96;

@@ -1,5 +1,5 @@
 import { InputError, formatIssue, type InputIssue } from '../errors/InputError.ts';
-import type { RejectedRow } from './types.ts';
+import type { RejectedRow } from './Roster.ts';
 
 /** How many issues a strict read keeps before it only counts them. */
 export const ISSUE_CAP = 200;

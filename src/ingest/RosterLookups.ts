@@ -1,6 +1,6 @@
 import type { Column } from './HeaderColumns.ts';
 import type { RowReader } from './RowReader.ts';
-import type { Player } from './types.ts';
+import type { Player } from './Roster.ts';
 
 /** Seasons a roster may hold, first and last year inclusive. */
 export interface SeasonSpan {

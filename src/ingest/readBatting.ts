@@ -2,7 +2,7 @@ import { BATTING_CHECKS, BATTING_COLUMNS } from './battingColumns.ts';
 import type { RosterLookups } from './RosterLookups.ts';
 import { readSeasonFile } from './readSeasonFile.ts';
 import type { TableOptions, TableRead } from './readTable.ts';
-import type { BattingSeason } from './types.ts';
+import type { BattingSeason } from './Roster.ts';
 
 /**
  * Reads batting.csv (one row per player, season, level and team) as its

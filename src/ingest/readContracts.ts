@@ -2,7 +2,7 @@ import { CONTRACTS_COLUMNS } from './contractsColumns.ts';
 import { RecordReader } from './RecordReader.ts';
 import { KeyLines, type RosterLookups } from './RosterLookups.ts';
 import { readTable, type TableOptions, type TableRead } from './readTable.ts';
-import type { Contract } from './types.ts';
+import type { Contract } from './Roster.ts';
 
 /** Reads contracts.csv (optional) as its column table says (contractsColumns.ts); one row per player and season. */
 export async function readContracts(

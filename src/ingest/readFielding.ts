@@ -2,7 +2,7 @@ import { FIELDING_CHECKS, FIELDING_COLUMNS } from './fieldingColumns.ts';
 import type { RosterLookups } from './RosterLookups.ts';
 import { readSeasonFile } from './readSeasonFile.ts';
 import type { TableOptions, TableRead } from './readTable.ts';
-import type { FieldingSeason } from './types.ts';
+import type { FieldingSeason } from './Roster.ts';
 
 /**
  * Reads fielding.csv (one row per player, season, level, team and position)

@@ -2,7 +2,7 @@ import { PITCHING_CHECKS, PITCHING_COLUMNS } from './pitchingColumns.ts';
 import type { RosterLookups } from './RosterLookups.ts';
 import { readSeasonFile } from './readSeasonFile.ts';
 import type { TableOptions, TableRead } from './readTable.ts';
-import type { PitchingSeason } from './types.ts';
+import type { PitchingSeason } from './Roster.ts';
 
 /**
  * Reads pitching.csv (one row per player, season, level and team) as its

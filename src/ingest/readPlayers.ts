@@ -2,7 +2,7 @@ import { PLAYERS_COLUMNS } from './playersColumns.ts';
 import { RecordReader } from './RecordReader.ts';
 import { KeyLines } from './RosterLookups.ts';
 import { readTable, type TableOptions } from './readTable.ts';
-import type { Player } from './types.ts';
+import type { Player } from './Roster.ts';
 
 export interface PlayersRead {
   readonly players: ReadonlyMap<string, Player>;

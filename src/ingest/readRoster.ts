@@ -9,7 +9,7 @@ import { readLevels } from './readLevels.ts';
 import { readPitching } from './readPitching.ts';
 import { readPlayers } from './readPlayers.ts';
 import type { TableOptions, TableRead } from './readTable.ts';
-import type { RejectedRow, Roster } from './types.ts';
+import type { RejectedRow, Roster } from './Roster.ts';
 
 export type { ColumnMap } from './loadColumnMap.ts';
 

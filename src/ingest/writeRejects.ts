@@ -3,7 +3,7 @@ import { rename, unlink, writeFile } from 'node:fs/promises';
 import { stringify } from 'csv-stringify/sync';
 import { stringifyCsv } from '../text/stringifyCsv.ts';
 import { KindredError } from '../errors/KindredError.ts';
-import type { RejectedRow } from './types.ts';
+import type { RejectedRow } from './Roster.ts';
 
 export const REJECTS_HEADER = ['file', 'line', 'column', 'field', 'value', 'code', 'expected', 'raw_row'] as const;
 

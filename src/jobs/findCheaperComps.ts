@@ -7,7 +7,7 @@ import type { Target } from '../query/Target.ts';
 import { valueAt } from '../query/valueAt.ts';
 import { round } from '../stats/round.ts';
 import { likenessPerMillion } from './likenessPerMillion.ts';
-import type { CheaperComp, CheaperResult } from '../outlook/types.ts';
+import type { CheaperComp, CheaperResult } from './CheaperResult.ts';
 import { valueFrontier } from './valueFrontier.ts';
 
 /** The salary limit: an amount in USD, or a share of the target's salary in his season. */

@@ -19,7 +19,8 @@ import { OUTLOOK_CONSTANTS } from '../outlook/outlookConstants.ts';
 import { pathDistance, pathTargetSteps, type PathScore } from './pathDistance.ts';
 import { summariseOutlook } from '../outlook/summariseOutlook.ts';
 import { effectiveCount } from '../stats/effectiveCount.ts';
-import type { CompOutcome, OutcomeKind, PathStep, ProspectComp, ProspectPoolEcho, ProspectResult } from '../outlook/types.ts';
+import type { CompOutcome, OutcomeKind } from '../outlook/CompOutcome.ts';
+import type { PathStep, ProspectComp, ProspectPoolEcho, ProspectResult } from './ProspectResult.ts';
 
 export interface ProspectOptions {
   readonly comps: CompsOptions;

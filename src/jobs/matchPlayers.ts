@@ -10,7 +10,7 @@ import { valueAt } from '../query/valueAt.ts';
 import { round } from '../stats/round.ts';
 import { closestSeasonRow, type SeasonChoice } from './closestSeasonRow.ts';
 import { poolPercentile } from './poolPercentile.ts';
-import type { MatchResult } from '../outlook/types.ts';
+import type { MatchResult } from './MatchResult.ts';
 
 export interface MatchOptions {
   readonly comps: CompsOptions;

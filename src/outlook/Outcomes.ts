@@ -1,7 +1,7 @@
 import { StoreError } from '../errors/KindredError.ts';
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 import type { OutcomesFile } from '../store/outcomesFile.ts';
-import type { CompOutcome, OutcomeKind } from './types.ts';
+import type { CompOutcome, OutcomeKind } from './CompOutcome.ts';
 
 /** One top-level season of one player: the sample and the league-relative value (NaN when undefined). */
 interface TopSeason {

@@ -9,7 +9,7 @@ import { collectForecasts } from './collectForecasts.ts';
 import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from './Outcomes.ts';
 import { runBacktest, type BacktestResult, type KindBacktest, type WithInterval } from './runBacktest.ts';
-import type { OutcomeKind } from './types.ts';
+import type { OutcomeKind } from './CompOutcome.ts';
 
 export interface StoreBacktestOptions {
   readonly prospect?: ProspectOptions;

@@ -7,7 +7,8 @@ import { calibrateForecast } from './calibrateForecast.ts';
 import { rawForecastOf, rowOutcomes } from './collectForecasts.ts';
 import type { ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from './Outcomes.ts';
-import type { CalibratedOutlook, ProspectResult } from './types.ts';
+import type { CalibratedOutlook } from './Outlook.ts';
+import type { ProspectResult } from '../jobs/ProspectResult.ts';
 
 const r1 = (x: number): number | null => (Number.isFinite(x) ? Number(x.toFixed(1)) : null);
 

@@ -5,7 +5,8 @@ import { findProspectComps, type ProspectOptions } from '../jobs/findProspectCom
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 import { peakOf, type Outcomes } from './Outcomes.ts';
 import { peakSummaryOf } from './summariseOutlook.ts';
-import type { OutcomeKind, Outlook } from './types.ts';
+import type { OutcomeKind } from './CompOutcome.ts';
+import type { Outlook } from './Outlook.ts';
 
 /** A distribution's p10, p50, p90 (NaN when it has no values) and how many values it rests on. */
 export interface Spread {

@@ -1,4 +1,4 @@
-import type { BattingSeason, PitchingSeason, Roster } from '../ingest/types.ts';
+import type { BattingSeason, PitchingSeason, Roster } from '../ingest/Roster.ts';
 import { fip } from '../stats/fip.ts';
 import { fipMinus } from '../stats/fipMinus.ts';
 import { onBasePercentage } from '../stats/onBasePercentage.ts';

@@ -7,7 +7,8 @@ import { intervalCoverage } from '../stats/intervalCoverage.ts';
 import { peakOf, type Outcomes } from './Outcomes.ts';
 import { spearmanCorrelation } from '../stats/spearmanCorrelation.ts';
 import { peakSummaryOf } from './summariseOutlook.ts';
-import type { OutcomeKind, OutlookFigures } from './types.ts';
+import type { OutcomeKind } from './CompOutcome.ts';
+import type { OutlookFigures } from './Outlook.ts';
 
 export interface EvaluateOptions {
   readonly prospect: ProspectOptions;

@@ -1,4 +1,4 @@
-import type { BattingSeason } from '../ingest/types.ts';
+import type { BattingSeason } from '../ingest/Roster.ts';
 import { onBasePercentage } from '../stats/onBasePercentage.ts';
 import { sluggingPercentage } from '../stats/sluggingPercentage.ts';
 import { pooledRate } from '../stats/Rate.ts';

@@ -5,7 +5,7 @@ import type { RawForecast } from './collectForecasts.ts';
 import { intervalCoverage } from '../stats/intervalCoverage.ts';
 import { murphyDecomposition, type MurphyBin } from '../stats/murphyDecomposition.ts';
 import { spearmanCorrelation } from '../stats/spearmanCorrelation.ts';
-import type { OutcomeKind } from './types.ts';
+import type { OutcomeKind } from './CompOutcome.ts';
 
 export interface BacktestOptions {
   readonly horizon: number;

@@ -1,7 +1,8 @@
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 import { roundOrNull } from '../stats/round.ts';
 import { peakOf } from './Outcomes.ts';
-import type { CompOutcome, OutcomeKind, OutlookFigures, QuantileSummary, SeasonsSummary } from './types.ts';
+import type { CompOutcome, OutcomeKind } from './CompOutcome.ts';
+import type { OutlookFigures, QuantileSummary, SeasonsSummary } from './Outlook.ts';
 import { weightedQuantiles } from '../stats/quantile.ts';
 
 export interface WeightedOutcome {

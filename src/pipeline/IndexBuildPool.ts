@@ -5,7 +5,7 @@ import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import { IndexError, StoreError } from '../errors/KindredError.ts';
 import { GuardedIndex } from '../ann/GuardedIndex.ts';
-import type { IndexParams } from '../ann/types.ts';
+import type { IndexParams } from '../ann/IndexParams.ts';
 import { isIndexJobDone, type IndexJob } from './indexJob.ts';
 
 interface Pending {

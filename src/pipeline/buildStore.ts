@@ -10,7 +10,7 @@ import { encodePlayersFile } from '../store/playersFile.ts';
 import { encodeOutcomesFile } from '../store/outcomesFile.ts';
 import { chartsFolderOf, groupFileNames, OUTCOMES_FILE, PLAYERS_FILE } from '../store/storeFileNames.ts';
 import { IndexBuildPool } from './IndexBuildPool.ts';
-import type { IndexParams } from '../ann/types.ts';
+import type { IndexParams } from '../ann/IndexParams.ts';
 import { writeStore } from '../store/writeStore.ts';
 import { checkStoreTarget, cleanLeftovers, lockStore } from '../store/storeTarget.ts';
 import { partitionByCoverage, type CoveragePartition } from '../ann/partitionByCoverage.ts';

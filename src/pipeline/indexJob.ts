@@ -1,4 +1,4 @@
-import type { IndexParams } from '../ann/types.ts';
+import type { IndexParams } from '../ann/IndexParams.ts';
 
 /** One HNSW index to build and save: the message a build worker thread receives. */
 export interface IndexJob {

@@ -1,4 +1,4 @@
-import type { BattingSeason, FieldingSeason } from '../ingest/types.ts';
+import type { BattingSeason, FieldingSeason } from '../ingest/Roster.ts';
 
 /** A hitter's season at one level: his batting and the fielding row of his primary position (if any). */
 export interface HitterLine {

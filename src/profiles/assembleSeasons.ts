@@ -1,4 +1,4 @@
-import type { FieldingSeason, PitchingSeason, Position, Roster } from '../ingest/types.ts';
+import type { FieldingSeason, PitchingSeason, Position, Roster } from '../ingest/Roster.ts';
 import type { HitterLine } from './HitterLine.ts';
 import { ageOnJune30 } from '../stats/ageOnJune30.ts';
 

@@ -1,4 +1,4 @@
-import type { Roster } from '../ingest/types.ts';
+import type { Roster } from '../ingest/Roster.ts';
 import type { Dimension, DimensionInfo, LeagueContext } from './Dimension.ts';
 import { describeDimension } from './Dimension.ts';
 import { assembleSeasons, DEFAULT_MINIMUMS, type AssembledSeasons, type SampleMinimums, type SeasonMeta } from './assembleSeasons.ts';
@@ -13,7 +13,7 @@ import { groupOf, POSITION_GROUPS, type PositionGroup } from './positionGroup.ts
 import { HITTER_DIMENSIONS } from './hitterDimensions.ts';
 import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
 import { leagueFip } from '../stats/leagueFip.ts';
-import type { PitchingSeason } from '../ingest/types.ts';
+import type { PitchingSeason } from '../ingest/Roster.ts';
 
 /** The profiles of one position group, row-major n x d. */
 export interface GroupProfiles {

@@ -3,7 +3,7 @@
  * and, for catchers, throwing. Each rate is a rate of src/stats (numerator and denominator written
  * once there); the store-level values are checked by hand in tests/profiles/dimensionValues.test.ts.
  */
-import type { BattingSeason } from '../ingest/types.ts';
+import type { BattingSeason } from '../ingest/Roster.ts';
 import type { HitterLine } from './HitterLine.ts';
 import type { Dimension } from './Dimension.ts';
 import { rateMeasure, rateSource } from './rateMeasure.ts';

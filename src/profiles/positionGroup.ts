@@ -1,4 +1,4 @@
-import type { Position } from '../ingest/types.ts';
+import type { Position } from '../ingest/Roster.ts';
 
 /**
  * Position groups: each has its own dimension set, its own standardisation strata and its own index.

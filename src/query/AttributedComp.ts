@@ -1,4 +1,4 @@
-import type { Comp } from './types.ts';
+import type { Comp } from './CompsResult.ts';
 
 /**
  * A comp answered in a learned space (the fields are added to the JSON contract of Comp):

@@ -1,4 +1,4 @@
-import type { Bats, Position, Throws } from '../ingest/types.ts';
+import type { Bats, Position, Throws } from '../ingest/Roster.ts';
 
 /** Which player-seasons may be comps. Every field is optional: absent means no restriction. */
 export interface PoolFilter {

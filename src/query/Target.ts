@@ -1,4 +1,4 @@
-import type { Position } from '../ingest/types.ts';
+import type { Position } from '../ingest/Roster.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 
 /** What comps are sought for: an existing player-season or a hand-built profile. */

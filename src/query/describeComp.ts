@@ -7,7 +7,7 @@ import { likeness } from './likeness.ts';
 import type { PreparedQuery } from './prepareQuery.ts';
 import type { QuerySpace } from './QuerySpace.ts';
 import type { ScoredRow } from './scoreRow.ts';
-import type { Comp } from './types.ts';
+import type { Comp } from './CompsResult.ts';
 import { valueAt } from './valueAt.ts';
 
 export interface DescribeSettings {

@@ -2,7 +2,7 @@ import type { PoolFilter } from './PoolFilter.ts';
 import { familyTotals } from '../profiles/familyWeights.ts';
 import type { PreparedQuery } from './prepareQuery.ts';
 import { round } from '../stats/round.ts';
-import type { PoolEcho, QueryEcho } from './types.ts';
+import type { PoolEcho, QueryEcho } from './CompsResult.ts';
 
 /** The query as the JSON echoes it: the target, its profile in natural units, k, method and space. */
 export function echoQuery(q: PreparedQuery, k: number, method: QueryEcho['method'], space: QueryEcho['space']): QueryEcho {

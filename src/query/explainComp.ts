@@ -1,7 +1,7 @@
 import { roundOrNull } from '../stats/round.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import { toGrade } from '../stats/toGrade.ts';
-import type { DimensionDetail } from './types.ts';
+import type { DimensionDetail } from './CompsResult.ts';
 import { alikeApart } from './alikeApart.ts';
 
 

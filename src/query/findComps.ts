@@ -1,6 +1,6 @@
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { Target } from './Target.ts';
-import type { CompsResult } from './types.ts';
+import type { CompsResult } from './CompsResult.ts';
 import { prepareQuery, type PreparedQuery, type QuerySettings } from './prepareQuery.ts';
 import { querySpace, type QuerySpace } from './QuerySpace.ts';
 import { scoreRow, type ScoredRow } from './scoreRow.ts';

@@ -1,5 +1,5 @@
 import { QueryError } from '../errors/KindredError.ts';
-import type { Position } from '../ingest/types.ts';
+import type { Position } from '../ingest/Roster.ts';
 import { fromGrade } from '../stats/fromGrade.ts';
 import type { StoredGroup, ProfileStore } from '../store/ProfileStore.ts';
 import type { Target } from './Target.ts';

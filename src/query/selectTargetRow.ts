@@ -1,6 +1,6 @@
 import { valueAt } from './valueAt.ts';
 import { QueryError } from '../errors/KindredError.ts';
-import type { Position } from '../ingest/types.ts';
+import type { Position } from '../ingest/Roster.ts';
 import { groupOf, type PositionGroup } from '../profiles/positionGroup.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 

@@ -1,5 +1,5 @@
 import { stringifyCsv } from '../text/stringifyCsv.ts';
-import type { CheaperResult } from '../outlook/types.ts';
+import type { CheaperResult } from '../jobs/CheaperResult.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 
 /**

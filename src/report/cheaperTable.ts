@@ -1,4 +1,4 @@
-import type { CheaperResult } from '../outlook/types.ts';
+import type { CheaperResult } from '../jobs/CheaperResult.ts';
 import { formatUsd } from './formatUsd.ts';
 import { plainTable } from './plainTable.ts';
 

@@ -1,5 +1,5 @@
 import { stringifyCsv } from '../text/stringifyCsv.ts';
-import type { CompsResult } from '../query/types.ts';
+import type { CompsResult } from '../query/CompsResult.ts';
 
 /**
  * The comps as CSV, one row per comp: identity, playing time (PA or BF), likeness, distance, coverage, alike and apart

@@ -1,6 +1,6 @@
 import Table from 'cli-table3';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
-import type { CompsResult } from '../query/types.ts';
+import type { CompsResult } from '../query/CompsResult.ts';
 import { formatValue } from './formatValue.ts';
 
 const PLAIN = {

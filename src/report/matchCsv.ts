@@ -1,5 +1,5 @@
 import { stringifyCsv } from '../text/stringifyCsv.ts';
-import type { MatchResult } from '../outlook/types.ts';
+import type { MatchResult } from '../jobs/MatchResult.ts';
 
 /** A match as CSV: one row per dimension, with the target, the candidate, his likeness and percentile on every row. */
 export function matchCsv(result: MatchResult, header = true): string {

@@ -1,5 +1,5 @@
 import type { DimensionInfo } from '../profiles/Dimension.ts';
-import type { MatchResult } from '../outlook/types.ts';
+import type { MatchResult } from '../jobs/MatchResult.ts';
 import { formatValue } from './formatValue.ts';
 import { plainTable } from './plainTable.ts';
 

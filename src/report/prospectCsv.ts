@@ -1,5 +1,5 @@
 import { stringifyCsv } from '../text/stringifyCsv.ts';
-import type { ProspectResult } from '../outlook/types.ts';
+import type { ProspectResult } from '../jobs/ProspectResult.ts';
 
 /**
  * The prospect comps as CSV, one row per comp: the target, the comp's identity and likeness, then what

@@ -1,4 +1,5 @@
-import type { ProspectResult, QuantileSummary } from '../outlook/types.ts';
+import type { ProspectResult } from '../jobs/ProspectResult.ts';
+import type { QuantileSummary } from '../outlook/Outlook.ts';
 import { peakSummaryOf } from '../outlook/summariseOutlook.ts';
 import { plainTable } from './plainTable.ts';
 

@@ -1,6 +1,6 @@
 import { ParameterError } from '../errors/ParameterError.ts';
 import { DEFAULT_SALARY_LIMIT, findCheaperComps, type CheaperOptions, type SalaryLimit } from '../jobs/findCheaperComps.ts';
-import type { CheaperResult } from '../outlook/types.ts';
+import type { CheaperResult } from '../jobs/CheaperResult.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';

@@ -1,6 +1,6 @@
 import { findComps } from '../query/findComps.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
-import type { CompsResult } from '../query/types.ts';
+import type { CompsResult } from '../query/CompsResult.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
 import { targetFrom } from './targetFrom.ts';

@@ -1,6 +1,6 @@
 import { ParameterError } from '../errors/ParameterError.ts';
 import { matchPlayers, type MatchOptions } from '../jobs/matchPlayers.ts';
-import type { MatchResult } from '../outlook/types.ts';
+import type { MatchResult } from '../jobs/MatchResult.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { resolvePlayer } from '../query/resolvePlayer.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';

@@ -1,6 +1,6 @@
 import { findProspectComps, type ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
-import type { ProspectResult } from '../outlook/types.ts';
+import type { ProspectResult } from '../jobs/ProspectResult.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';

@@ -3,12 +3,14 @@
  * server's endpoints answer with and the page reads. Stable: fields are only ever added, never renamed
  * or removed. The result types of the jobs are declared beside the jobs and named here.
  */
-import type { Bats, Position, Throws } from '../ingest/types.ts';
+import type { Bats, Position, Throws } from '../ingest/Roster.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 
-export type { Comp, CompsResult, DimensionDetail, PoolEcho, QueryEcho } from '../query/types.ts';
-export type { CheaperComp, CheaperResult, MatchCandidate, MatchResult, ProspectComp, ProspectResult } from '../outlook/types.ts';
+export type { Comp, CompsResult, DimensionDetail, PoolEcho, QueryEcho } from '../query/CompsResult.ts';
+export type { CheaperComp, CheaperResult } from '../jobs/CheaperResult.ts';
+export type { MatchCandidate, MatchResult } from '../jobs/MatchResult.ts';
+export type { ProspectComp, ProspectResult } from '../jobs/ProspectResult.ts';
 export type { DimensionInfo } from '../profiles/Dimension.ts';
 
 /** `GET /api/dims`: the dimensions of each position group (or of one). */

@@ -1,4 +1,4 @@
-import type { Bats, Position, Throws } from '../ingest/types.ts';
+import type { Bats, Position, Throws } from '../ingest/Roster.ts';
 import { DEFAULT_PROSPECT_OPTIONS } from '../jobs/findProspectComps.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../query/findComps.ts';
 import { isWeightPreset, WEIGHT_PRESETS, type WeightPreset } from '../query/weightPresets.ts';

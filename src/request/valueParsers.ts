@@ -1,4 +1,4 @@
-import type { Bats, Position, Throws } from '../ingest/types.ts';
+import type { Bats, Position, Throws } from '../ingest/Roster.ts';
 import { isPosition, POSITIONS } from '../profiles/positionGroup.ts';
 import { BadValue } from './BadValue.ts';
 

@@ -10,7 +10,7 @@
  * const t = league.truth.find('p000001', 2010);
  * t?.talents[0]; // => contact (hitter) or stuff (pitcher) that season
  */
-import type { Position } from '../ingest/types.ts';
+import type { Position } from '../ingest/Roster.ts';
 import { SIM_POSITIONS } from './simPositions.ts';
 import { MAX_TALENTS, TALENT_NAMES, type SimKind } from './talentNames.ts';
 

@@ -9,7 +9,7 @@
  * // A fast, rangy, strong-armed player is most often a shortstop or centre fielder.
  * choosePosition(rng, talents, 'R');
  */
-import type { FieldPosition, Throws } from '../ingest/types.ts';
+import type { FieldPosition, Throws } from '../ingest/Roster.ts';
 import type { SeededRandom } from '../random/SeededRandom.ts';
 import { H_ARM, H_GLOVE, H_POWER, H_SPEED } from './talentNames.ts';
 

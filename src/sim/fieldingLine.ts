@@ -15,7 +15,7 @@
  * // 120 games at SS by an average glove: about 1000 innings, 180 PO, 330 A, 14 E.
  * fieldingLine(rng, talents, 'SS', 120, true, true, false, row);
  */
-import type { FieldPosition } from '../ingest/types.ts';
+import type { FieldPosition } from '../ingest/Roster.ts';
 import { FIELDING_COLUMNS, columnAt } from './fileSchemas.ts';
 import { logistic, logit } from './logistic.ts';
 import type { SeededRandom } from '../random/SeededRandom.ts';

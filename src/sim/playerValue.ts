@@ -10,7 +10,7 @@
  * @example
  * hitterValue(new Float64Array([0, 0, 0, 0, 0, 0, 0]), 'SS'); // => 0
  */
-import type { FieldPosition } from '../ingest/types.ts';
+import type { FieldPosition } from '../ingest/Roster.ts';
 import {
   H_ARM, H_CONTACT, H_CTHROW, H_EYE, H_GLOVE, H_POWER, H_SPEED,
   P_CONTROL, P_GROUNDBALL, P_SPIN, P_STAMINA, P_STUFF, P_VELOCITY,

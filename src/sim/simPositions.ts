@@ -1,5 +1,5 @@
 /** Positions in the order stored in the tables (`pos` columns and truth rows hold an index into this list). */
-import type { Position } from '../ingest/types.ts';
+import type { Position } from '../ingest/Roster.ts';
 
 export const SIM_POSITIONS: readonly Position[] = ['C', '1B', '2B', '3B', 'SS', 'LF', 'CF', 'RF', 'DH', 'SP', 'RP'];
 

@@ -1,5 +1,5 @@
 /** Options and result of simulateLeague. */
-import type { Bats, Throws } from '../ingest/types.ts';
+import type { Bats, Throws } from '../ingest/Roster.ts';
 import type { ColumnTable } from './ColumnTable.ts';
 import type { SimTruth } from './SimTruth.ts';
 

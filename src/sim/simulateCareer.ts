@@ -18,7 +18,7 @@
  *   season's playing time, others a part; some seasons are cut by injury.
  * - About 4% of stints are split by a mid-season move to another club.
  */
-import type { Bats, Throws } from '../ingest/types.ts';
+import type { Bats, Throws } from '../ingest/Roster.ts';
 import { ageOffset } from './ageCurve.ts';
 import { choosePosition, secondaryPosition, type HitterPosition } from './choosePosition.ts';
 import { drawHitterTalents, drawPitcherTalents } from './drawTalents.ts';
@@ -27,7 +27,7 @@ import { hitterValue, pitcherValue } from './playerValue.ts';
 import type { SeededRandom } from '../random/SeededRandom.ts';
 import { HITTER_CURVES, PITCHER_CURVES } from './talentCurves.ts';
 import { H_GLOVE, H_SPEED, HITTER_TALENTS, P_STAMINA, PITCHER_TALENTS, type SimKind } from './talentNames.ts';
-import type { FieldPosition } from '../ingest/types.ts';
+import type { FieldPosition } from '../ingest/Roster.ts';
 
 export interface CareerStint {
   readonly level: number;

@@ -16,7 +16,7 @@
  * const league = simulateLeague({ seed: 1, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: 12000 });
  * league.truth.length; // => about 12,000
  */
-import type { FieldPosition } from '../ingest/types.ts';
+import type { FieldPosition } from '../ingest/Roster.ts';
 import { UsageError } from '../errors/KindredError.ts';
 import { battingLine } from './battingLine.ts';
 import { ColumnTable } from './ColumnTable.ts';
@@ -33,7 +33,7 @@ import { positionIndex } from './simPositions.ts';
 import { SimTruth } from './SimTruth.ts';
 import type { MeasuredFrom, ResolvedSimOptions, SimLeague, SimOptions } from './simTypes.ts';
 import { P_STAMINA } from './talentNames.ts';
-import type { Bats, Throws } from '../ingest/types.ts';
+import type { Bats, Throws } from '../ingest/Roster.ts';
 
 /** Seasons of intake simulated before firstSeason (longer careers are very rare). */
 const WARM_UP = 20;

@@ -1,4 +1,4 @@
-import type { Bats, Position, Throws } from '../ingest/types.ts';
+import type { Bats, Position, Throws } from '../ingest/Roster.ts';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';

@@ -4,7 +4,7 @@
  * read by decodePlayersFile.
  */
 import { z } from 'zod';
-import type { Roster } from '../ingest/types.ts';
+import type { Roster } from '../ingest/Roster.ts';
 import { parseStoreJson } from './parseStoreJson.ts';
 
 export const playersFileSchema = z.strictObject({

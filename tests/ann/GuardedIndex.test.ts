@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { IndexError, StoreError } from '../../src/errors/KindredError.ts';
 import { exactSearch } from '../../src/ann/exactSearch.ts';
 import { GuardedIndex } from '../../src/ann/GuardedIndex.ts';
-import type { IndexParams } from '../../src/ann/types.ts';
+import type { IndexParams } from '../../src/ann/IndexParams.ts';
 import { meanRecall, randomVectors, row } from './randomVectors.ts';
 
 // Invented data: 20,000 rows of 24 uniform values; recall is measured against brute force (the reference).

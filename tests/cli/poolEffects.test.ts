@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { rm } from 'node:fs/promises';
 import { runCli } from '../helpers/runCli.ts';
 import { simStore, type SimStore } from '../helpers/simStore.ts';
-import type { CompsResult } from '../../src/query/types.ts';
+import type { CompsResult } from '../../src/query/CompsResult.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 import { WEIGHT_PRESETS } from '../../src/query/weightPresets.ts';
 

@@ -3,7 +3,7 @@ import { BATTING_COLUMNS } from '../../src/ingest/battingColumns.ts';
 import { combineStints } from '../../src/ingest/combineStints.ts';
 import { FIELDING_COLUMNS } from '../../src/ingest/fieldingColumns.ts';
 import { PITCHING_COLUMNS } from '../../src/ingest/pitchingColumns.ts';
-import type { BattingSeason, FieldingSeason, PitchingSeason } from '../../src/ingest/types.ts';
+import type { BattingSeason, FieldingSeason, PitchingSeason } from '../../src/ingest/Roster.ts';
 
 const key = { playerId: 'p1', season: 2021, level: 'AA' } as const;
 const bat = { ...key, AB: 0, H: 0, doubles: 0, triples: 0, HR: 0, BB: 0, HBP: 0, SF: 0, SO: 0 } as const;

@@ -1,5 +1,5 @@
 /** Hand-made roster lines for the outlook tests (invented numbers). */
-import type { BattingSeason, PitchingSeason, Player, Roster } from '../../src/ingest/types.ts';
+import type { BattingSeason, PitchingSeason, Player, Roster } from '../../src/ingest/Roster.ts';
 
 export function bat(playerId: string, season: number, level: string, line: Partial<BattingSeason> & { PA: number; AB: number; H: number }): BattingSeason {
   return { playerId, season, level, teams: ['Club'], doubles: 0, triples: 0, HR: 0, BB: 0, HBP: 0, SF: 0, SO: 0, ...line };

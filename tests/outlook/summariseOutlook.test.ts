@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { summariseOutlook, peakSummaryOf } from '../../src/outlook/summariseOutlook.ts';
-import type { HitterOutcome } from '../../src/outlook/types.ts';
+import type { HitterOutcome } from '../../src/outlook/CompOutcome.ts';
 import { weightedQuantiles } from '../../src/stats/quantile.ts';
 
 const outcome = (mlb: number, peak: number | null): HitterOutcome => ({

@@ -10,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
-import type { CompsResult } from '../../src/query/types.ts';
+import type { CompsResult } from '../../src/query/CompsResult.ts';
 import { runCli } from '../helpers/runCli.ts';
 
 let dir = '';

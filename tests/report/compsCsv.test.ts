@@ -1,6 +1,6 @@
 import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
-import type { CompsResult } from '../../src/query/types.ts';
+import type { CompsResult } from '../../src/query/CompsResult.ts';
 import { compsCsv } from '../../src/report/compsCsv.ts';
 
 const result: CompsResult = {

@@ -9,7 +9,7 @@ import { rm } from 'node:fs/promises';
 import { parse } from 'csv-parse/sync';
 import { runCli } from '../helpers/runCli.ts';
 import { simStore, type SimStore } from '../helpers/simStore.ts';
-import type { CompsResult } from '../../src/query/types.ts';
+import type { CompsResult } from '../../src/query/CompsResult.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 
 /** The table's headings; the playing-time column says PA for hitters and BF for pitchers. */

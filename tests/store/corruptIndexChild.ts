@@ -9,7 +9,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { KindredError } from '../../src/errors/KindredError.ts';
 import { GuardedIndex } from '../../src/ann/GuardedIndex.ts';
-import type { IndexMeta } from '../../src/ann/types.ts';
+import type { IndexMeta } from '../../src/ann/IndexParams.ts';
 import { openStore } from '../../src/store/openStore.ts';
 import { writeStore } from '../../src/store/writeStore.ts';
 import { randomVectors } from '../ann/randomVectors.ts';

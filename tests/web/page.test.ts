@@ -9,7 +9,7 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import { createServer, type RunningServer } from '../../src/server/createServer.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
-import type { CompsResult } from '../../src/query/types.ts';
+import type { CompsResult } from '../../src/query/CompsResult.ts';
 import { buildDemoStore, tempDir } from '../server/serverFixture.ts';
 import { ensureWebBuilt } from './ensureWebBuilt.ts';
 import { findBrowser } from '../helpers/findBrowser.ts';

@@ -6,7 +6,7 @@ import { UsageError } from '../../errors/KindredError.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { findCheaperComps } from '../../jobs/findCheaperComps.ts';
-import type { CheaperResult } from '../../outlook/types.ts';
+import type { CheaperResult } from '../../jobs/CheaperResult.ts';
 import { cheaperTable } from '../../report/cheaperTable.ts';
 import { cheaperCsv } from '../../report/cheaperCsv.ts';
 import { answerCheaper, cheaperOptionsFrom } from '../../request/answerCheaper.ts';

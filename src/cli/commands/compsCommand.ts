@@ -5,7 +5,7 @@ import { runBatch } from './runBatch.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { findComps } from '../../query/findComps.ts';
-import type { CompsResult } from '../../query/types.ts';
+import type { CompsResult } from '../../query/CompsResult.ts';
 import { compsTable } from '../../report/compsTable.ts';
 import { compsCsv } from '../../report/compsCsv.ts';
 import { UsageError } from '../../errors/KindredError.ts';

@@ -7,7 +7,7 @@ import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { resolvePlayer } from '../../query/resolvePlayer.ts';
 import { matchPlayers } from '../../jobs/matchPlayers.ts';
-import type { MatchResult } from '../../outlook/types.ts';
+import type { MatchResult } from '../../jobs/MatchResult.ts';
 import { matchTable } from '../../report/matchTable.ts';
 import { matchCsv } from '../../report/matchCsv.ts';
 import { answerMatch, matchOptionsFrom } from '../../request/answerMatch.ts';

@@ -5,7 +5,7 @@ import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import { findProspectComps } from '../../jobs/findProspectComps.ts';
-import type { ProspectResult } from '../../outlook/types.ts';
+import type { ProspectResult } from '../../jobs/ProspectResult.ts';
 import { calibrateOutlook } from '../../outlook/calibrateOutlook.ts';
 import { readBacktestFile } from '../../outlook/backtestStore.ts';
 import { prospectTable } from '../../report/prospectTable.ts';

@@ -2,7 +2,7 @@
  * The JSON contract of `kindred comps --format json` (and of the HTTP API).
  * Stable: fields are only ever added, never renamed or removed.
  */
-import type { Position } from '../ingest/types.ts';
+import type { Position } from '../ingest/Roster.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 
 /** One dimension of one comp: the target's and the comp's value and how much it drove the distance. */
