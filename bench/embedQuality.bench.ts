@@ -71,7 +71,7 @@ export async function runEmbedQuality(playerSeasons: number, spaces: readonly Va
         lines.push(`${space}: build ${summary.seconds.toFixed(1)} s`);
       }
       const cells = new Map<string, { ratio: number; targets: number }>();
-      for (const level of ['AA', 'MLB']) {
+      for (const level of ['High', 'Top']) {
         for (const [label, range] of SAMPLES) {
           const r = compsQuality(store, league.truth, {
             groups: GROUPS,
@@ -91,7 +91,7 @@ export async function runEmbedQuality(playerSeasons: number, spaces: readonly Va
     }
     lines.push(`comps quality, ${playerSeasons.toLocaleString('en-US')} simulated player-seasons, seed ${seed} (ratio to the ideal; 1.00 is perfect, lower is better)`);
     lines.push(`level  sample   targets  ${spaces.map((s) => s.padStart(11)).join(' ')}`);
-    for (const level of ['AA', 'MLB']) {
+    for (const level of ['High', 'Top']) {
       for (const [label] of SAMPLES) {
         const key = `${level}|${label}`;
         const targets = results.get(spaces[0] ?? '')?.get(key)?.targets ?? 0;

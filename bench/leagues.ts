@@ -54,7 +54,7 @@ export function benchLeagues(playerSeasons = 30000): BenchLeague[] {
     },
     {
       name: 'fast',
-      description: '3 minor levels (A, AA, AAA), easy promotions, noisy stat lines, offense falling, minors recorded from 2006',
+      description: '3 minor levels (Low, High, Elite), easy promotions, noisy stat lines, offense falling, minors recorded from 2006',
       options: {
         seed: 303, firstSeason: 2000, lastSeason: 2026, targetPlayerSeasons: size(1.3), minorLevels: 3,
         promotionMargin: -0.1, showingNoise: 0.2, statNoise: 0.2, eraDrift: -0.015, minorsRecordedFrom: 2006,

@@ -27,9 +27,9 @@ const SETTINGS: readonly { name: string; shrinkage: ShrinkageOptions }[] = [
 ];
 
 const CASES: readonly { name: string; groups: readonly PositionGroup[]; range: readonly [number, number] }[] = [
-  { name: 'MLB hitters 400+ PA', groups: ['C', 'IF', 'OF'], range: [400, 100000] },
-  { name: 'MLB SP 500+ BF', groups: ['SP'], range: [500, 100000] },
-  { name: 'MLB RP 150+ BF', groups: ['RP'], range: [150, 100000] },
+  { name: 'Top hitters 400+ PA', groups: ['C', 'IF', 'OF'], range: [400, 100000] },
+  { name: 'Top SP 500+ BF', groups: ['SP'], range: [500, 100000] },
+  { name: 'Top RP 150+ BF', groups: ['RP'], range: [150, 100000] },
 ];
 
 export async function runShrinkageQuality(playerSeasons: number, targetsPerCase: number): Promise<string[]> {
@@ -47,7 +47,7 @@ export async function runShrinkageQuality(playerSeasons: number, targetsPerCase:
         const store = await openProfileStore(storeDir);
         for (const [c, kase] of CASES.entries()) {
           const q = compsQuality(store, league.truth, {
-            groups: kase.groups, level: 'MLB', targetsPerGroup: Math.ceil(targetsPerCase / kase.groups.length), k: 10,
+            groups: kase.groups, level: 'Top', targetsPerGroup: Math.ceil(targetsPerCase / kase.groups.length), k: 10,
             seed: spec.options.seed, sampleRange: kase.range, compsOptions: { ...DEFAULT_COMPS_OPTIONS, exact: true },
           });
           (results[c] as number[][])[s]?.push(q.median);

@@ -55,6 +55,11 @@ export interface ColumnSpec {
   readonly skipped?: readonly string[];
   /** What a bad cell is expected to be, in words (choice and money columns). */
   readonly expected?: string;
+  /**
+   * Earlier canonical names of the column, still read (as a header name or a
+   * column map key) with a one-line notice giving the current name.
+   */
+  readonly formerly?: readonly string[];
 }
 
 export type ColumnTable = readonly ColumnSpec[];

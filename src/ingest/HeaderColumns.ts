@@ -14,10 +14,14 @@ export interface Column<N extends string = string> {
 /**
  * Locates canonical columns in a header, through the club's column names when
  * a column map renames them. Reports a wrong delimiter, duplicate header
- * names and missing required columns, and lists the columns it ignores.
+ * names and missing required columns, and lists the columns it ignores. A
+ * column found only under an earlier name of its own (`formerly`) is read,
+ * with a notice giving the new name.
  */
 export class HeaderColumns<F extends RosterFile> {
   readonly issues: InputIssue[] = [];
+  /** One line per column read under an earlier name of its own (ColumnSpec.formerly). */
+  readonly notices: string[] = [];
   private readonly positions = new Map<string, number>();
   private readonly used = new Set<number>();
   private readonly header: readonly string[];
@@ -57,7 +61,14 @@ export class HeaderColumns<F extends RosterFile> {
     if (spec === undefined) throw new RangeError(`${this.canonicalFile} has no column ${name}`);
     const { required } = spec;
     const club = this.renames[name];
-    const index = this.positions.get(club ?? name) ?? -1;
+    let index = this.positions.get(club ?? name) ?? -1;
+    if (index < 0 && club === undefined) {
+      const former = (spec.formerly ?? []).find((f) => this.positions.has(f));
+      if (former !== undefined) {
+        index = this.positions.get(former) ?? -1;
+        this.notices.push(`${this.fileName}: column ${former} read as ${name}, its new name (rename the column to ${name})`);
+      }
+    }
     if (index >= 0) {
       this.used.add(index);
     } else if (required && this.issues.every((i) => i.code !== 'kindred.input.wrongDelimiter')) {

@@ -18,11 +18,18 @@ export const REJECTED_CELL_CHARS = 256;
 export class IssueLog {
   readonly lenient: boolean;
   readonly rejected: RejectedRow[] = [];
+  /** What was read but deserves a line (a column under its former name), in words. */
+  readonly notices: string[] = [];
   private readonly kept: InputIssue[] = [];
   private total = 0;
 
   constructor(lenient: boolean) {
     this.lenient = lenient;
+  }
+
+  /** Something read as asked that the user should hear about (never fails the read). */
+  notice(line: string): void {
+    this.notices.push(line);
   }
 
   /** A problem that concerns a whole file or column: fails the read in both modes. */

@@ -42,11 +42,12 @@ export const BATTING_COLUMNS = [
     range: { min: -90, max: 90, unit: 'deg' }, combine: { mean: 'bbe', fallback: 'PA' } },
   /** Share of batted balls hit hard, 0 to 100. */
   { csv: 'hard_hit_pct', field: 'hardHitPct', kind: 'percent', required: false, combine: { mean: 'bbe', fallback: 'PA' } },
-  /** Share of batted balls in the launch-angle band, 0 to 100. */
-  { csv: 'sweet_spot_pct', field: 'sweetSpotPct', kind: 'percent', required: false, combine: { mean: 'bbe', fallback: 'PA' } },
-  /** Run speed, feet per second. */
-  { csv: 'sprint_ft_s', field: 'sprintFtS', kind: 'measure', required: false,
-    range: { min: 15, max: 35, unit: 'ft/s' }, combine: { mean: 'PA' } },
+  /** Share of batted balls in the productive launch-angle band, 0 to 100 (formerly sweet_spot_pct). */
+  { csv: 'la_band_pct', field: 'laBandPct', kind: 'percent', required: false, combine: { mean: 'bbe', fallback: 'PA' },
+    formerly: ['sweet_spot_pct'] },
+  /** Top running speed, feet per second (formerly sprint_ft_s). */
+  { csv: 'run_speed_ft_s', field: 'runSpeedFtS', kind: 'measure', required: false,
+    range: { min: 15, max: 35, unit: 'ft/s' }, combine: { mean: 'PA' }, formerly: ['sprint_ft_s'] },
 ] as const satisfies readonly ColumnSpec[];
 
 /** Consistency of a batting row (rules of the game: a hit is an at bat, a plate appearance is one of AB, BB, HBP, SF, ...). */

@@ -39,6 +39,16 @@ export function columnSpec(file: RosterFile, csv: string): ColumnSpec | undefine
   return tableOf(file).find((c) => c.csv === csv);
 }
 
+/** The current name of a column given by an earlier name of its own (ColumnSpec.formerly), undefined otherwise. */
+export function renamedColumn(file: RosterFile, former: string): string | undefined {
+  return tableOf(file).find((c) => c.formerly?.includes(former) === true)?.csv;
+}
+
+/** A file's earlier column names still read (ColumnSpec.formerly). */
+export function formerColumnsOf(file: RosterFile): readonly string[] {
+  return tableOf(file).flatMap((c) => c.formerly ?? []);
+}
+
 export function isRequiredColumn(file: RosterFile, column: string): boolean {
   return columnSpec(file, column)?.required ?? false;
 }

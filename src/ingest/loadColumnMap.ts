@@ -2,7 +2,7 @@ import { readFile } from 'node:fs/promises';
 import { z } from 'zod';
 import { KindredError } from '../errors/KindredError.ts';
 import { formatIssue, InputError, type InputIssue } from '../errors/InputError.ts';
-import { columnsOf, ROSTER_FILES, type RosterFile } from './fileColumns.ts';
+import { columnsOf, formerColumnsOf, renamedColumn, ROSTER_FILES, type RosterFile } from './fileColumns.ts';
 import { jsonKeyPositions, positionAt, type TextPosition } from './jsonKeyPositions.ts';
 
 /**
@@ -16,6 +16,8 @@ export interface ColumnMap {
   readonly columns: Readonly<Partial<Record<RosterFile, Readonly<Record<string, string>>>>>;
   /** The map file and where each key sits in it, for errors found when the roster is read. */
   readonly source?: ColumnMapSource;
+  /** One line per key given under a column's earlier name (read as the current name). */
+  readonly notices?: readonly string[];
 }
 
 export interface ColumnMapSource {
@@ -48,7 +50,7 @@ const columnMapSchema = z
         Object.fromEntries(
           ROSTER_FILES.map((f) => [
             f,
-            z.object(Object.fromEntries(columnsOf(f).map((c) => [c, clubName.optional()]))).strict().optional(),
+            z.object(Object.fromEntries([...columnsOf(f), ...formerColumnsOf(f)].map((c) => [c, clubName.optional()]))).strict().optional(),
           ]),
         ),
       )
@@ -112,6 +114,7 @@ function toColumnMap(source: ColumnMapSource, data: z.infer<typeof columnMapSche
   const files: Partial<Record<RosterFile, string>> = {};
   const columns: Partial<Record<RosterFile, Record<string, string>>> = {};
   const problems: MapProblem[] = [];
+  const notices: string[] = [];
   for (const file of ROSTER_FILES) {
     const name = data.files?.[file];
     if (name !== undefined) files[file] = name;
@@ -119,11 +122,19 @@ function toColumnMap(source: ColumnMapSource, data: z.infer<typeof columnMapSche
     if (cols === undefined) continue;
     const renamed: Record<string, string> = {};
     const seen = new Map<string, string>();
-    for (const [canonical, club] of Object.entries(cols)) {
+    for (const [key, club] of Object.entries(cols)) {
       if (club === undefined) continue;
+      const current = renamedColumn(file, key);
+      const canonical = current ?? key;
+      if (current !== undefined) {
+        if (cols[current] !== undefined) {
+          problems.push({ key: `columns.${file}.${key}`, value: club, expected: `one key for the column (${key} is the former name of ${current}, which the map also gives)` });
+        }
+        notices.push(`${source.path}: key ${key} of ${file} read as ${current}, its new name (rename the key to ${current})`);
+      }
       const earlier = seen.get(club);
       if (earlier !== undefined) {
-        problems.push({ key: `columns.${file}.${canonical}`, value: club, expected: `a column of its own ("${club}" is already the column of ${earlier})` });
+        problems.push({ key: `columns.${file}.${key}`, value: club, expected: `a column of its own ("${club}" is already the column of ${earlier})` });
       }
       seen.set(club, canonical);
       renamed[canonical] = club;
@@ -146,7 +157,7 @@ function toColumnMap(source: ColumnMapSource, data: z.infer<typeof columnMapSche
     if (file !== undefined) clubFiles.set(club, file);
   }
   if (problems.length > 0) throw mapError(source, problems);
-  return { files, columns, source };
+  return { files, columns, source, notices };
 }
 
 /** A column map problem as an input issue located at its key (line 1 when the key cannot be found). */

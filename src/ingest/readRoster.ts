@@ -84,7 +84,7 @@ export async function readRoster(dir: string, options: ReadRosterOptions = {}): 
     rejected: log.rejected,
     ignoredColumns,
     pitcherFieldingRows: fielding.pitcherRows,
-    notices: emptyGroups(batting, fielding, pitching),
+    notices: [...(table.columnMap.notices ?? []), ...log.notices, ...emptyGroups(batting, fielding, pitching)],
   };
 }
 

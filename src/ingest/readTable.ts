@@ -103,6 +103,7 @@ export async function readTable<F extends RosterFile>(
         for (const issue of header.issues) log.fileProblem(issue);
         return false;
       }
+      for (const notice of header.notices) log.notice(notice);
       width = header.width;
       ignored = header.ignored();
       handle = rowHandler;

@@ -51,7 +51,7 @@ export interface ProspectOptions {
  * Defaults of prospect comps (project choices, from the honesty check in bench/outlook.bench.ts):
  * 25 comps rather than 10, since the outlook is a distribution drawn from them; a coverage floor of
  * 0.25 rather than 0.5, since comps come from earlier seasons, often from before the tracking
- * measurements (exit velocity, sprint speed, arm, pitch tracking) were recorded, and those carry much
+ * measurements (exit velocity, run speed, arm, pitch tracking) were recorded, and those carry much
  * of a recent target's weight: at 0.5 most historical comps would be left out.
  */
 export const DEFAULT_PROSPECT_OPTIONS: ProspectOptions = {

@@ -2,7 +2,7 @@
 
 export type OutcomeKind = 'hitter' | 'pitcher';
 
-/** What one player did at the top level (MLB) in the seasons after one of his seasons. */
+/** What one player did at the top level (the roster's highest declared level) in the seasons after one of his seasons. */
 interface OutcomeBase {
   /** First and last season of the follow-up window (the season after, to `horizon` seasons after). */
   readonly window: readonly [number, number];
@@ -11,10 +11,10 @@ interface OutcomeBase {
   /** True when the window runs past the last season of the data: what happened next is not known. */
   readonly censored: boolean;
   /** At least one top-level line (PA or BF) in the window's observed seasons. */
-  readonly reached_mlb: boolean;
-  readonly first_mlb_season: number | null;
+  readonly reached_top_level: boolean;
+  readonly first_top_level_season: number | null;
   /** Seasons in the window with a top-level line. */
-  readonly mlb_seasons: number;
+  readonly top_level_seasons: number;
   /** Season of the peak value below (null when no season qualified). */
   readonly peak_season: number | null;
 }

@@ -98,9 +98,9 @@ export class Outcomes {
       window: [from, to] as const,
       seasons_observed: Math.max(0, seen - from + 1),
       censored: to > asOf,
-      reached_mlb: seasons > 0,
-      first_mlb_season: first,
-      mlb_seasons: seasons,
+      reached_top_level: seasons > 0,
+      first_top_level_season: first,
+      top_level_seasons: seasons,
       peak_season: peakSeason,
     };
     const value = Number.isNaN(peak) ? null : peak;

@@ -15,13 +15,13 @@ export interface SeasonsSummary extends QuantileSummary {
 }
 
 interface FiguresBase {
-  /** Weighted share who reached MLB in the window (0 to 1; null without comps). */
-  readonly reached_mlb: number | null;
-  /** MLB seasons played in the window, over every comp (0 for those who did not reach). */
-  readonly mlb_seasons: SeasonsSummary;
+  /** Weighted share who reached the top level in the window (0 to 1; null without comps). */
+  readonly reached_top_level: number | null;
+  /** Top-level seasons played in the window, over every comp (0 for those who did not reach). */
+  readonly top_level_seasons: SeasonsSummary;
 }
 
-/** Peak OPS+ (hitters) or best FIP- (pitchers) among those who had a qualifying MLB season. */
+/** Peak OPS+ (hitters) or best FIP- (pitchers) among those who had a qualifying top-level season. */
 export type PeakFigures = { readonly peak_ops_plus: QuantileSummary } | { readonly peak_fip_minus: QuantileSummary };
 
 export type OutlookFigures = FiguresBase & PeakFigures;
@@ -57,10 +57,10 @@ export interface BacktestFigure {
 export interface CalibratedOutlook {
   /** How the figures were made, in words (the pool, the probability map, the ranges). */
   readonly method: string;
-  readonly reached_mlb: number;
+  readonly reached_top_level: number;
   /** p10 / p50 / p90 of the peak OPS+ (hitters) or best FIP- (pitchers), adjusted to 80% coverage. */
   readonly peak: { readonly p10: number | null; readonly p50: number | null; readonly p90: number | null };
-  readonly mlb_seasons: { readonly p10: number | null; readonly p50: number | null; readonly p90: number | null };
+  readonly top_level_seasons: { readonly p10: number | null; readonly p50: number | null; readonly p90: number | null };
   /** On this roster, replayed at past cuts with only what was known then. */
   readonly backtest: {
     readonly cuts: readonly number[];

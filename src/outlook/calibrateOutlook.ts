@@ -60,11 +60,11 @@ export function calibrateOutlook(
       `pool: his level, age +/- 1, earlier seasons (playing time is not a pool band: on the benched leagues a band of x2 did not help); ` +
       `probability: logistic map (Platt 1999) starting from the level-and-age base rate, moved by the comps' share shrunk toward it ` +
       `(prior weight ${fit.choice.shrink} against ${result.outlook.comps_effective} effective comps) and by his playing time for his level (log ${kind === 'hitter' ? 'PA' : 'BF'}), ` +
-      `fitted on ${fit.training} earlier forecasts of this roster; ranges: comps' and base rate's p10-p90 of ${peakName} and MLB seasons ` +
+      `fitted on ${fit.training} earlier forecasts of this roster; ranges: comps' and base rate's p10-p90 of ${peakName} and top-level seasons ` +
       `adjusted by split conformal prediction (Lei et al. 2018) to ${Math.round((1 - fit.choice.alpha) * 100)}% coverage`,
-    reached_mlb: Number(c.reached.toFixed(3)),
+    reached_top_level: Number(c.reached.toFixed(3)),
     peak: { p10: r1(c.peak.p10), p50: r1(c.peak.p50), p90: r1(c.peak.p90) },
-    mlb_seasons: { p10: r1(c.seasons.p10), p50: r1(c.seasons.p50), p90: r1(c.seasons.p90) },
+    top_level_seasons: { p10: r1(c.seasons.p10), p50: r1(c.seasons.p50), p90: r1(c.seasons.p90) },
     backtest: {
       cuts: file.cuts,
       targets: summary.targets,

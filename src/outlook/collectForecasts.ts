@@ -115,10 +115,10 @@ export function rawForecastOf(
   return {
     kind, group, player: g.player[row] as number, row, season,
     level: g.level[row] as number, age: g.age[row] as number, sample: g.sample[row] as number,
-    comps: { used: o.comps_used, effective: o.comps_effective, share: nan(o.reached_mlb), peak: spreadOf(peakSummaryOf(o)), seasons: spreadOf(o.mlb_seasons) },
-    matched: { n: o.baseline.player_seasons, share: nan(o.baseline.reached_mlb), peak: spreadOf(peakSummaryOf(o.baseline)), seasons: spreadOf(o.baseline.mlb_seasons) },
+    comps: { used: o.comps_used, effective: o.comps_effective, share: nan(o.reached_top_level), peak: spreadOf(peakSummaryOf(o)), seasons: spreadOf(o.top_level_seasons) },
+    matched: { n: o.baseline.player_seasons, share: nan(o.baseline.reached_top_level), peak: spreadOf(peakSummaryOf(o.baseline)), seasons: spreadOf(o.baseline.top_level_seasons) },
     levelAge: levelAgeRate(g, row, Math.min(season, o.as_of_season), horizon, reachedOf),
-    truth: future ? { reached: future.reached_mlb, peak: peakOf(future), seasons: future.mlb_seasons } : null,
+    truth: future ? { reached: future.reached_top_level, peak: peakOf(future), seasons: future.top_level_seasons } : null,
   };
 }
 
@@ -128,7 +128,7 @@ export function rowOutcomes(g: StoredGroup, outcomes: Outcomes, kind: OutcomeKin
   for (let i = 0; i < g.n; i++) {
     const s = g.season[i] as number;
     if (s + horizon > outcomes.lastSeason) continue;
-    out[i] = outcomes.futureOf(g.player[i] as number, kind, s, horizon).reached_mlb ? 1 : 0;
+    out[i] = outcomes.futureOf(g.player[i] as number, kind, s, horizon).reached_top_level ? 1 : 0;
   }
   return out;
 }

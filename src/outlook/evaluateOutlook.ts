@@ -30,7 +30,7 @@ export interface FigureCheck {
 
 export interface KindEvaluation {
   readonly targets: number;
-  /** Brier score of reached_mlb (lower is better). */
+  /** Brier score of reached_top_level (lower is better). */
   readonly brier: FigureCheck;
   /** Share reached among the targets (the truth). */
   readonly reachedShare: number;
@@ -38,9 +38,9 @@ export interface KindEvaluation {
   readonly peakCoverage: FigureCheck;
   /** Spearman correlation of the forecast peak p50 with the true peak. */
   readonly peakSpearman: FigureCheck;
-  /** Share of true MLB-season counts inside the forecast p10 to p90. */
+  /** Share of true top-level season counts inside the forecast p10 to p90. */
   readonly seasonsCoverage: FigureCheck;
-  /** Spearman correlation of the forecast mean MLB seasons with the true count. */
+  /** Spearman correlation of the forecast mean top-level seasons with the true count. */
   readonly seasonsSpearman: FigureCheck;
 }
 
@@ -112,14 +112,14 @@ export function evaluateOutlook(store: ProfileStore, outcomes: Outcomes, options
     }
     const kind: OutcomeKind = isPitcherGroup(c.group) ? 'pitcher' : 'hitter';
     const truth = outcomes.futureOf(target.player, kind, season, horizon);
-    rows.push({ kind, comps: result.outlook, baseline: result.outlook.baseline, reached: truth.reached_mlb, peak: nan(peakOf(truth)), seasons: truth.mlb_seasons });
+    rows.push({ kind, comps: result.outlook, baseline: result.outlook.baseline, reached: truth.reached_top_level, peak: nan(peakOf(truth)), seasons: truth.top_level_seasons });
   }
   return { hitter: summarise(rows.filter((r) => r.kind === 'hitter')), pitcher: summarise(rows.filter((r) => r.kind === 'pitcher')), withoutComps };
 }
 
 function summarise(rows: readonly Row[]): KindEvaluation {
   const reached = rows.map((r) => r.reached);
-  const forecast = (pick: (r: Row) => OutlookFigures): number[] => rows.map((r) => nan(pick(r).reached_mlb));
+  const forecast = (pick: (r: Row) => OutlookFigures): number[] => rows.map((r) => nan(pick(r).reached_top_level));
   const check = (f: (figures: OutlookFigures, r: Row) => number, truthOf: (r: Row) => number, use: (a: number[], b: number[]) => number): FigureCheck => {
     const subset = rows.filter((r) => !Number.isNaN(truthOf(r)) && !Number.isNaN(f(r.comps, r)) && !Number.isNaN(f(r.baseline, r)));
     const truth = subset.map(truthOf);
@@ -146,7 +146,7 @@ function summarise(rows: readonly Row[]): KindEvaluation {
     reachedShare: rows.length > 0 ? reached.filter(Boolean).length / rows.length : NaN,
     peakCoverage: coverage((f) => nan(peakSummaryOf(f).p10), (f) => nan(peakSummaryOf(f).p90), peak),
     peakSpearman: check((f) => nan(peakSummaryOf(f).p50), peak, spearmanCorrelation),
-    seasonsCoverage: coverage((f) => nan(f.mlb_seasons.p10), (f) => nan(f.mlb_seasons.p90), seasons),
-    seasonsSpearman: check((f) => nan(f.mlb_seasons.mean), seasons, spearmanCorrelation),
+    seasonsCoverage: coverage((f) => nan(f.top_level_seasons.p10), (f) => nan(f.top_level_seasons.p90), seasons),
+    seasonsSpearman: check((f) => nan(f.top_level_seasons.mean), seasons, spearmanCorrelation),
   };
 }

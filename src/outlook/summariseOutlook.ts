@@ -18,10 +18,10 @@ function quantileSummary(values: readonly number[], weights: readonly number[], 
 
 /**
  * What a weighted set of players did next (each weight is a comp's likeness, or 1 for a base rate):
- * - reached_mlb: sum of the weights of those with a top-level season in the window / sum of all weights;
+ * - reached_top_level: sum of the weights of those with a top-level season in the window / sum of all weights;
  * - peak OPS+ (hitters) or best FIP- (pitchers): weighted p10, p50, p90 (weightedQuantile, midpoint rule)
  *   over those who had a qualifying top-level season (300 PA, 50 IP), with the same weights;
- * - mlb_seasons: weighted mean and quantiles over everyone (0 for those who did not reach).
+ * - top_level_seasons: weighted mean and quantiles over everyone (0 for those who did not reach).
  * Censored outcomes must be left out by the caller.
  */
 export function summariseOutlook(items: readonly WeightedOutcome[], kind: OutcomeKind): OutlookFigures {
@@ -35,9 +35,9 @@ export function summariseOutlook(items: readonly WeightedOutcome[], kind: Outcom
   for (const { weight, outcome } of items) {
     if (!(weight > 0)) continue;
     total += weight;
-    if (outcome.reached_mlb) reached += weight;
-    seasonSum += weight * outcome.mlb_seasons;
-    seasons.push(outcome.mlb_seasons);
+    if (outcome.reached_top_level) reached += weight;
+    seasonSum += weight * outcome.top_level_seasons;
+    seasons.push(outcome.top_level_seasons);
     seasonWeights.push(weight);
     const peak = peakOf(outcome);
     if (peak !== null) {
@@ -45,9 +45,9 @@ export function summariseOutlook(items: readonly WeightedOutcome[], kind: Outcom
       peakWeights.push(weight);
     }
   }
-  const mlbSeasons: SeasonsSummary = { ...quantileSummary(seasons, seasonWeights, 1), mean: total > 0 ? roundOrNull(seasonSum / total, 2) : null };
+  const topLevelSeasons: SeasonsSummary = { ...quantileSummary(seasons, seasonWeights, 1), mean: total > 0 ? roundOrNull(seasonSum / total, 2) : null };
   const peak = quantileSummary(peaks, peakWeights, 1);
-  const base = { reached_mlb: total > 0 ? roundOrNull(reached / total, 3) : null, mlb_seasons: mlbSeasons };
+  const base = { reached_top_level: total > 0 ? roundOrNull(reached / total, 3) : null, top_level_seasons: topLevelSeasons };
   return kind === 'hitter' ? { ...base, peak_ops_plus: peak } : { ...base, peak_fip_minus: peak };
 }
 

@@ -72,19 +72,19 @@ export const PITCHER_DIMENSIONS: readonly D[] = [
     measure: { kind: 'mean', value: (p) => p.gbPct, events: bipAgainst, stabilisation: k('gbPct') },
   },
   {
-    name: 'whiff_pct', label: 'Whiff%', unit: 'percent of swings', direction: 'higher', skill: 'stuff', family: 'missing bats',
+    name: 'whiff_pct', label: 'Swing-miss%', unit: 'percent of swings', direction: 'higher', skill: 'stuff', family: 'missing bats',
     meaning: 'Swings and misses per swing (0 to 100).', source: 'pitching.csv whiff_pct, weighted by BF',
     groups: PITCHERS, scope: 'group', digits: 1,
     measure: { kind: 'mean', value: (p) => p.whiffPct, events: (p) => p.BF, stabilisation: k('whiffPct') },
   },
   {
-    name: 'fb_mph', label: 'FB velo', unit: 'mph', direction: 'higher', skill: 'velocity', family: 'stuff',
+    name: 'fb_mph', label: 'Fastball velo', unit: 'mph', direction: 'higher', skill: 'velocity', family: 'stuff',
     meaning: 'Average fastball velocity (a measurement, not regressed).', source: 'pitching.csv fb_mph, weighted by BF',
     groups: PITCHERS, scope: 'group', digits: 1,
     measure: { kind: 'mean', value: (p) => p.fbMph, events: (p) => p.BF, stabilisation: 0 },
   },
   {
-    name: 'fb_spin_rpm', label: 'FB spin', unit: 'rpm', direction: 'higher', skill: 'velocity', family: 'stuff',
+    name: 'fb_spin_rpm', label: 'Fastball spin', unit: 'rpm', direction: 'higher', skill: 'velocity', family: 'stuff',
     meaning: 'Average fastball spin rate (a measurement, not regressed).', source: 'pitching.csv fb_spin_rpm, weighted by BF',
     groups: PITCHERS, scope: 'group', digits: 0,
     measure: { kind: 'mean', value: (p) => p.fbSpinRpm, events: (p) => p.BF, stabilisation: 0 },

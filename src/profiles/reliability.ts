@@ -9,7 +9,7 @@ import { PearsonSums } from '../stats/PearsonSums.ts';
  * Clamped to [0.02, 1]; a dimension with fewer than `minPairs` pairs gets `fallback`.
  *
  * @example
- * // a dimension that is pure noise scores about 0; a timed measurement such as sprint speed about 0.9
+ * // a dimension that is pure noise scores about 0; a timed measurement such as run speed about 0.9
  */
 export function reliability(
   z: Float64Array | Float32Array,

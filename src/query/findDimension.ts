@@ -10,10 +10,10 @@ const fold = (s: string): string => s.trim().toLowerCase();
 
 /**
  * The index of the dimension a user means by `text`: its name or its label, case ignored
- * (`obp`, `OBP`, `sprint`); -1 when none.
+ * (`obp`, `OBP`, `run speed`); -1 when none.
  *
  * @example
- * findDimension([{ name: 'obp', label: 'OBP' }, { name: 'sprint_ft_s', label: 'Sprint' }], 'sprint'); // => 1
+ * findDimension([{ name: 'obp', label: 'OBP' }, { name: 'run_speed_ft_s', label: 'Run speed' }], 'run speed'); // => 1
  */
 export function findDimension(dims: readonly NamedDimension[], text: string): number {
   const t = fold(text);

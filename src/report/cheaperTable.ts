@@ -22,7 +22,7 @@ export function cheaperTable(result: CheaperResult): string {
   const t = plainTable(
     ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Like', 'Salary', 'Like/$1M', 'Front'],
     ['right', 'left', 'left', 'left', 'left', 'right', 'right', 'right', 'left'],
-    [4, 34, 7, 5, 4, 5, 14, 9, 6],
+    [4, 33, 7, 6, 4, 5, 14, 9, 6],
   );
   for (const c of result.comps) {
     t.push([String(c.rank), `${c.name} (${c.player_id})`, String(c.season), c.level, c.position, c.likeness.toFixed(0), formatUsd(c.salary_usd), c.likeness_per_million.toFixed(1), c.frontier ? 'yes' : '']);

@@ -39,7 +39,7 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     chars: PLAIN,
     style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
     colAligns: ['right', 'left', 'left', 'left', 'left', 'right', 'right', 'right', 'right', 'left'],
-    colWidths: [3, 20, 7, 5, 4, 4, 5, 5, 5, 32],
+    colWidths: [3, 20, 7, 6, 4, 4, 5, 5, 5, 31],
     wordWrap: true,
   });
   const byName = new Map(dims.map((d) => [d.name, d]));
@@ -65,7 +65,7 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     chars: PLAIN,
     style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
     colAligns: ['left', 'right', ...top.map(() => 'right' as const)],
-    colWidths: [13, 12, ...top.map(() => 12)],
+    colWidths: [15, 12, ...top.map(() => 12)],
   });
   const first = result.comps[0];
   for (const [j, detail] of (first?.dimensions ?? []).entries()) {

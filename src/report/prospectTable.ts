@@ -18,10 +18,10 @@ function calibratedLines(result: ProspectResult, peakLabel: string): string[] {
   const tri = (q: { p10: number | null; p50: number | null; p90: number | null }, d = 0): string => `${num(q.p10, d)} / ${num(q.p50, d)} / ${num(q.p90, d)}`;
   const cov = (x: number | null): string => (x === null ? '-' : `${Math.round(x * 100)}%`);
   return [
-    `Calibrated on this roster's history: reached MLB ${pct(c.reached_mlb)}; ${peakLabel} p10 / p50 / p90 ${tri(c.peak)}; MLB seasons ${tri(c.mlb_seasons)}`,
-    `On this roster, ${result.query.group === 'SP' || result.query.group === 'RP' ? 'pitcher' : 'hitter'} outlooks replayed at ${b.cuts[0] ?? '-'}-${b.cuts[b.cuts.length - 1] ?? '-'} (${b.targets.toLocaleString('en-US')} prospects, ${pct(b.reached_share)} reached MLB):`,
+    `Calibrated on this roster's history: reached the top level ${pct(c.reached_top_level)}; ${peakLabel} p10 / p50 / p90 ${tri(c.peak)}; top-level seasons ${tri(c.top_level_seasons)}`,
+    `On this roster, ${result.query.group === 'SP' || result.query.group === 'RP' ? 'pitcher' : 'hitter'} outlooks replayed at ${b.cuts[0] ?? '-'}-${b.cuts[b.cuts.length - 1] ?? '-'} (${b.targets.toLocaleString('en-US')} prospects, ${pct(b.reached_share)} reached the top level):`,
     `  Brier skill against the level-and-age base rate ${signed(b.skill_vs_level_age.value)}${span(b.skill_vs_level_age.low, b.skill_vs_level_age.high)};` +
-      ` p10-p90 held the ${peakLabel} ${cov(b.peak_coverage.value)} of the time and the MLB seasons ${cov(b.seasons_coverage.value)} (nominal 80%);` +
+      ` p10-p90 held the ${peakLabel} ${cov(b.peak_coverage.value)} of the time and the top-level seasons ${cov(b.seasons_coverage.value)} (nominal 80%);` +
       ` Spearman of p50 with the realised ${peakLabel} ${num(b.spearman_peak.value, 2)}`,
     `  How: ${c.method}.`,
   ];
@@ -49,9 +49,9 @@ export function prospectTable(result: ProspectResult): string {
     lines.push('No comps: nobody earlier at this level and age shares enough of the profile (see --min-coverage, --path).');
   } else {
     const t = plainTable(
-      ['#', 'Player', 'Season', 'Lvl', 'Age', 'Like', 'First MLB', 'MLB yrs', peakLabel],
+      ['#', 'Player', 'Season', 'Lvl', 'Age', 'Like', 'First top', 'Top yrs', peakLabel],
       ['right', 'left', 'left', 'left', 'right', 'right', 'right', 'right', 'right'],
-      [4, 34, 7, 5, 4, 5, 10, 8, 10],
+      [4, 33, 7, 6, 4, 5, 10, 8, 10],
     );
     for (const c of result.comps) {
       const peak = c.outcome.kind === 'hitter' ? c.outcome.peak_ops_plus : c.outcome.peak_fip_minus;
@@ -62,8 +62,8 @@ export function prospectTable(result: ProspectResult): string {
         c.level,
         c.age === null ? '-' : String(c.age),
         c.likeness.toFixed(0),
-        c.outcome.first_mlb_season === null ? '-' : String(c.outcome.first_mlb_season),
-        String(c.outcome.mlb_seasons),
+        c.outcome.first_top_level_season === null ? '-' : String(c.outcome.first_top_level_season),
+        String(c.outcome.top_level_seasons),
         num(peak),
       ]);
     }
@@ -79,17 +79,18 @@ export function prospectTable(result: ProspectResult): string {
   const peak = peakSummaryOf(o);
   const basePeak = peakSummaryOf(b);
   const t = plainTable(['', 'Comps', `Base rate (${b.player_seasons.toLocaleString('en-US')} player-seasons)`], ['left', 'right', 'right'], [30, 18, 36]);
-  t.push(['Reached MLB', pct(o.reached_mlb), pct(b.reached_mlb)]);
+  t.push(['Reached the top level', pct(o.reached_top_level), pct(b.reached_top_level)]);
   t.push([`${peakLabel} (${hitter ? '300+ PA' : '50+ IP'}), players`, String(peak.n), String(basePeak.n)]);
   t.push(['  p10 / p50 / p90', range(peak), range(basePeak)]);
-  t.push(['MLB seasons, mean', num(o.mlb_seasons.mean, 1), num(b.mlb_seasons.mean, 1)]);
-  t.push(['  p10 / p50 / p90', range(o.mlb_seasons), range(b.mlb_seasons)]);
+  t.push(['Top-level seasons, mean', num(o.top_level_seasons.mean, 1), num(b.top_level_seasons.mean, 1)]);
+  t.push(['  p10 / p50 / p90', range(o.top_level_seasons), range(b.top_level_seasons)]);
   lines.push(t.toString());
   lines.push(
     hitter
-      ? 'Peak OPS+: best OPS+ in an MLB season of 300+ PA, against that MLB season of this roster (no park factor; 100 average).'
-      : 'Best FIP-: lowest FIP- in an MLB season of 50+ IP, against that MLB season of this roster (no park factor; 100 average, lower better).',
+      ? 'Peak OPS+: best OPS+ in a top-level season of 300+ PA, against that season of this roster (no park factor; 100 average).'
+      : 'Best FIP-: lowest FIP- in a top-level season of 50+ IP, against that season of this roster (no park factor; 100 average, lower better).',
   );
+  lines.push('Top level: the highest level the roster declares (levels.csv). First top: first top-level season.');
   lines.push('Base rate: every earlier player-season at this level and age with a complete follow-up, unweighted.');
   lines.push('');
   lines.push(...calibratedLines(result, peakLabel));

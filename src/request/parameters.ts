@@ -139,7 +139,7 @@ export const PARAMETERS: { readonly [K in ParameterKey]: Parameter<RequestValues
     name: 'preset', value: 'name', help: `skill-family shares: ${Object.keys(WEIGHT_PRESETS).join(', ')} (bat, glove, power, speed for hitters; results, stuff, command for pitchers)`, parse: preset, default: DEFAULT_COMPS_OPTIONS.preset, jobs: TARGET_JOBS,
   },
   weights: {
-    name: 'weights', value: 'list', help: 'per-dimension multipliers by name or label, e.g. obp=2,sprint_ft_s=0', parse: v.weightOverrides, jobs: TARGET_JOBS,
+    name: 'weights', value: 'list', help: 'per-dimension multipliers by name or label, e.g. obp=2,run_speed_ft_s=0', parse: v.weightOverrides, jobs: TARGET_JOBS,
   },
   weighting: {
     name: 'weighting', value: 'scheme', help: 'redundancy (default: family shares, repeated skills weigh less) or plain z-scores', parse: v.oneOf(['redundancy', 'plain']),

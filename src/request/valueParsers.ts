@@ -95,7 +95,7 @@ export function fraction(value: string): number {
 }
 
 /**
- * "obp=2,Sprint=0": a multiplier per dimension (0 switches a dimension off), keyed by the name or
+ * "obp=2,Run speed=0": a multiplier per dimension (0 switches a dimension off), keyed by the name or
  * label as typed (checked against the store's dimensions later). A name given twice, or a multiplier
  * that is not a finite number from 0 to MAX_WEIGHT, is refused.
  */

@@ -19,7 +19,7 @@ export class PlayerColumns {
   private readonly entrySeason: number[] = [];
   private readonly entryAge: number[] = [];
   private readonly highestLevel: number[] = [];
-  private readonly mlbSeasons: number[] = [];
+  private readonly topLevelSeasons: number[] = [];
   private readonly active: number[] = [];
   private readonly peakValue: number[] = [];
 
@@ -43,7 +43,7 @@ export class PlayerColumns {
   /** The last added player's whole-career summary: highest level index and top-level seasons. */
   end(highestLevel: number, topLevelSeasons: number): void {
     this.highestLevel.push(highestLevel);
-    this.mlbSeasons.push(topLevelSeasons);
+    this.topLevelSeasons.push(topLevelSeasons);
   }
 
   seal(): SimPlayers {
@@ -60,7 +60,7 @@ export class PlayerColumns {
       entrySeason: Int16Array.from(this.entrySeason),
       entryAge: Int8Array.from(this.entryAge),
       highestLevel: Int8Array.from(this.highestLevel),
-      mlbSeasons: Int16Array.from(this.mlbSeasons),
+      topLevelSeasons: Int16Array.from(this.topLevelSeasons),
       peakValue: Float32Array.from(this.peakValue),
       active: Uint8Array.from(this.active),
     };

@@ -8,20 +8,20 @@
  * one talent on purpose: walks and IBB on eye (and power); strikeouts on
  * contact (and eye); home runs, doubles, exit velocity, 90th-percentile exit
  * velocity, hard-hit rate and launch angle on power; triples, steals and
- * sprint speed on speed. Outcome rates use the talent plus the level shift
+ * run speed on speed. Outcome rates use the talent plus the level shift
  * (weaker opposition at lower levels); physical measurements (exit velocity,
- * sprint speed) use the talent alone. Batted-ball averages carry noise
+ * run speed) use the talent alone. Batted-ball averages carry noise
  * sd / sqrt(bbe).
  * `era` (talent units, default 0) moves the league's run environment: more
  * power and less contact when positive (more home runs and strikeouts), at
  * every level alike; the simulator's eraDrift option sets it by season.
- * Centre: a talent at MLB_CENTRE (a typical top-level regular) gives
+ * Centre: a talent at TOP_CENTRE (a typical top-level regular) gives
  * top-level rates near OBP .320, K% 22, BB% 8.5, HR/PA 3%, EV 88.5 mph,
- * hard-hit 39%, sprint 27 ft/s (common practice, from memory).
+ * hard contact 39%, run speed 27 ft/s (common practice, from memory).
  *
  * @example
  * // 600 PA by a typical top-level regular: about 130 SO, 50 BB, 150 H, 18 HR.
- * battingLine(rng, talents, LEVEL_MLB, 600, 150, true, true, row);
+ * battingLine(rng, talents, LEVEL_TOP, 600, 150, true, true, row);
  */
 import { BATTING_COLUMNS, columnAt } from './fileSchemas.ts';
 import { LEVEL_SHIFT } from './levelTable.ts';
@@ -30,13 +30,13 @@ import type { SeededRandom } from '../random/SeededRandom.ts';
 import { H_CONTACT, H_EYE, H_POWER, H_SPEED } from './talentNames.ts';
 
 /** Mean talent of a top-level regular (outcome rates are centred there). */
-export const MLB_CENTRE = { contact: 0.6, power: 0.8, eye: 0.65, speed: 0.1 } as const;
+export const TOP_CENTRE = { contact: 0.6, power: 0.8, eye: 0.65, speed: 0.1 } as const;
 
 const C = (name: string): number => columnAt(BATTING_COLUMNS, name);
 const iG = C('G'), iPA = C('PA'), iAB = C('AB'), iH = C('H'), i2B = C('2B'), i3B = C('3B'), iHR = C('HR');
 const iBB = C('BB'), iIBB = C('IBB'), iHBP = C('HBP'), iSF = C('SF'), iSO = C('SO'), iSB = C('SB'), iCS = C('CS');
 const iBBE = C('bbe'), iEV = C('ev_avg_mph'), iEV90 = C('ev_p90_mph'), iLA = C('la_avg_deg');
-const iHARD = C('hard_hit_pct'), iSWEET = C('sweet_spot_pct'), iSPRINT = C('sprint_ft_s');
+const iHARD = C('hard_hit_pct'), iSWEET = C('la_band_pct'), iSPRINT = C('run_speed_ft_s');
 
 const L_BB = logit(0.085), L_SO = logit(0.22), L_HR = logit(0.043), L_BABIP = logit(0.295);
 const L_3B = logit(0.022), L_2B = logit(0.21), L_IBB = logit(0.04);
@@ -58,14 +58,14 @@ export function battingLine(
   era = 0,
 ): void {
   const shift = LEVEL_SHIFT[level] ?? 0;
-  let contact = (t[H_CONTACT] ?? 0) - MLB_CENTRE.contact;
-  let power = (t[H_POWER] ?? 0) - MLB_CENTRE.power;
+  let contact = (t[H_CONTACT] ?? 0) - TOP_CENTRE.contact;
+  let power = (t[H_POWER] ?? 0) - TOP_CENTRE.power;
   if (era !== 0) {
     contact -= era;
     power += era;
   }
-  const eye = (t[H_EYE] ?? 0) - MLB_CENTRE.eye;
-  const speed = (t[H_SPEED] ?? 0) - MLB_CENTRE.speed;
+  const eye = (t[H_EYE] ?? 0) - TOP_CENTRE.eye;
+  const speed = (t[H_SPEED] ?? 0) - TOP_CENTRE.speed;
   const xc = contact + shift, xp = power + shift, xe = eye + shift, xs = speed + shift * 0.5;
 
   const pBB = logistic(L_BB + 0.32 * xe + 0.08 * xp - 0.05 * xc);
@@ -128,6 +128,6 @@ export function battingLine(
   } else {
     row[iBBE] = nan; row[iEV] = nan; row[iEV90] = nan; row[iLA] = nan; row[iHARD] = nan; row[iSWEET] = nan;
   }
-  // Sprint speed needs enough competitive runs; noise shrinks with the runs seen.
+  // Run speed needs enough competitive runs; noise shrinks with the runs seen.
   row[iSPRINT] = sprint && pa >= 25 ? 27.0 + 1.25 * speed + (0.9 / Math.sqrt(Math.min(60, pa / 8))) * rng.normal() : nan;
 }

@@ -24,7 +24,7 @@ function parseFormat(text: string): ColumnSpec['format'] {
 
 export const BATTING_COLUMNS = spec(
   'player_id:player, season, level:level, team:team, G, PA, AB, H, 2B, 3B, HR, BB, IBB, HBP, SF, SO, SB, CS, bbe,' +
-    ' ev_avg_mph:fixed1, ev_p90_mph:fixed1, la_avg_deg:fixed1, hard_hit_pct:fixed1, sweet_spot_pct:fixed1, sprint_ft_s:fixed1',
+    ' ev_avg_mph:fixed1, ev_p90_mph:fixed1, la_avg_deg:fixed1, hard_hit_pct:fixed1, la_band_pct:fixed1, run_speed_ft_s:fixed1',
 );
 
 export const FIELDING_COLUMNS = spec(

@@ -1,6 +1,6 @@
 /**
- * The league simulator: an invented professional league (levels Rk, A, A+,
- * AA, AAA, MLB) whose players' true talents are known, for the demo, the
+ * The league simulator: an invented professional league (levels Entry, Low, Mid,
+ * High, Elite, Top) whose players' true talents are known, for the demo, the
  * end-to-end tests and the benchmarks.
  *
  * Model in brief (details in each module's doc comment):
@@ -21,12 +21,12 @@
  *   each other).
  * - Careers (simulateCareer): entry at 17 to 23, promotion, demotion,
  *   release and retirement by value, showing and age; about one entrant in
- *   six or seven reaches MLB; careers running at the last season are censored
+ *   six or seven reaches the top level; careers running at the last season are censored
  *   (players.active).
  * - Measurement availability (MeasuredFrom; missing cells are empty, never
- *   0): batted-ball columns and sprint speed from lastSeason - 9, arm
+ *   0): batted-ball columns and run speed from lastSeason - 9, arm
  *   velocity and catcher pop/exchange from lastSeason - 7, pitch tracking
- *   from lastSeason - 9, all only at AA and above; gb_pct from
+ *   from lastSeason - 9, all only at High and above; gb_pct from
  *   lastSeason - 15 at every level. `sb_against` counts stolen-base attempts
  *   against a catcher (stolen plus caught), so cs_caught <= sb_against.
  * - Salaries (salary): top-level seasons only, for about 92% of them.

@@ -1,16 +1,18 @@
 /**
  * The levels of the invented league, low to high, with the constants the
- * simulator uses for each. All figures are project choices (invented), tuned
- * so that the output looks like a professional ladder: a rookie level with a
- * short season, four full-season minor levels and a top level.
+ * simulator uses for each. Names and figures are project choices (invented),
+ * tuned so that the output looks like a professional ladder: an entry level
+ * with a short season, four full-season levels below the top and the top
+ * level. The simulator writes them to levels.csv in this order, so the top
+ * level is the roster's own highest declared level.
  */
-export const SIM_LEVELS = ['Rk', 'A', 'A+', 'AA', 'AAA', 'MLB'] as const;
+export const SIM_LEVELS = ['Entry', 'Low', 'Mid', 'High', 'Elite', 'Top'] as const;
 export type SimLevel = (typeof SIM_LEVELS)[number];
 
-export const LEVEL_RK = 0;
-export const LEVEL_AA = 3;
-export const LEVEL_AAA = 4;
-export const LEVEL_MLB = 5;
+export const LEVEL_ENTRY = 0;
+export const LEVEL_HIGH = 3;
+export const LEVEL_ELITE = 4;
+export const LEVEL_TOP = 5;
 
 /** Games in a team's season. */
 export const SEASON_GAMES: readonly number[] = [56, 132, 132, 138, 144, 162];
@@ -26,7 +28,7 @@ export const FULL_RELIEF_GAMES: readonly number[] = [18, 40, 42, 45, 48, 64];
 
 /**
  * Current value (in talent units, see valueOf) a player must show to be
- * promoted into the level; Rk takes anyone.
+ * promoted into the level; Entry takes anyone.
  */
 export const LEVEL_BAR: readonly number[] = [-Infinity, -1.15, -0.6, -0.1, 0.4, 1.15];
 

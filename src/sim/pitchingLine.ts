@@ -16,7 +16,7 @@
  *
  * @example
  * // 540 outs (180 IP) by a typical starter: about 770 BF, 170 SO, 62 BB, 84 ER.
- * pitchingLine(rng, talents, LEVEL_MLB, 30, 30, 540, false, true, true, row);
+ * pitchingLine(rng, talents, LEVEL_TOP, 30, 30, 540, false, true, true, row);
  */
 import { PITCHING_COLUMNS, columnAt } from './fileSchemas.ts';
 import { LEVEL_SHIFT } from './levelTable.ts';
@@ -25,7 +25,7 @@ import type { SeededRandom } from '../random/SeededRandom.ts';
 import { P_CONTROL, P_GROUNDBALL, P_SPIN, P_STUFF, P_VELOCITY } from './talentNames.ts';
 
 /** Mean talent of a top-level pitcher (outcome rates are centred there). */
-export const MLB_PITCH_CENTRE = { stuff: 1.2, control: 0.75, groundball: 0.1, velocity: 0.6, spin: 0.25 } as const;
+export const TOP_PITCH_CENTRE = { stuff: 1.2, control: 0.75, groundball: 0.1, velocity: 0.6, spin: 0.25 } as const;
 
 const C = (name: string): number => columnAt(PITCHING_COLUMNS, name);
 const iG = C('G'), iGS = C('GS'), iIP = C('IP'), iBF = C('BF'), iH = C('H'), iHR = C('HR'), iBB = C('BB');
@@ -52,11 +52,11 @@ export function pitchingLine(
 ): void {
   // Pitchers climb the ladder further below the top level's talent than hitters, so their shift is larger.
   const shift = PITCHER_SHIFT_SCALE * (LEVEL_SHIFT[level] ?? 0);
-  const stuff = (t[P_STUFF] ?? 0) - MLB_PITCH_CENTRE.stuff + (era !== 0 ? era : 0);
-  const control = (t[P_CONTROL] ?? 0) - MLB_PITCH_CENTRE.control;
-  const gb = (t[P_GROUNDBALL] ?? 0) - MLB_PITCH_CENTRE.groundball;
-  const velo = (t[P_VELOCITY] ?? 0) - MLB_PITCH_CENTRE.velocity;
-  const spin = (t[P_SPIN] ?? 0) - MLB_PITCH_CENTRE.spin;
+  const stuff = (t[P_STUFF] ?? 0) - TOP_PITCH_CENTRE.stuff + (era !== 0 ? era : 0);
+  const control = (t[P_CONTROL] ?? 0) - TOP_PITCH_CENTRE.control;
+  const gb = (t[P_GROUNDBALL] ?? 0) - TOP_PITCH_CENTRE.groundball;
+  const velo = (t[P_VELOCITY] ?? 0) - TOP_PITCH_CENTRE.velocity;
+  const spin = (t[P_SPIN] ?? 0) - TOP_PITCH_CENTRE.spin;
   const xs = stuff + shift, xc = control + shift, xg = gb;
   // Relievers throw harder and miss more bats in short stints (common practice).
   const relief = reliever ? 0.25 : 0;

@@ -13,7 +13,7 @@
  * salaryThousands(rng, 2003, 0, 1.0); // => about 300 to 375 ($300k to $375k)
  */
 import type { SeededRandom } from '../random/SeededRandom.ts';
-import { LEVEL_BAR, LEVEL_MLB } from './levelTable.ts';
+import { LEVEL_BAR, LEVEL_TOP } from './levelTable.ts';
 
 export function leagueMinimumThousands(season: number): number {
   return Math.round(300 * Math.pow(1.035, season - 2003));
@@ -21,7 +21,7 @@ export function leagueMinimumThousands(season: number): number {
 
 export function salaryThousands(rng: SeededRandom, season: number, service: number, value: number): number {
   const min = leagueMinimumThousands(season);
-  const above = value - (LEVEL_BAR[LEVEL_MLB] ?? 1);
+  const above = value - (LEVEL_BAR[LEVEL_TOP] ?? 1);
   let pay: number;
   if (service < 3) {
     pay = min * (1 + 0.25 * rng.next());

@@ -1,15 +1,15 @@
 /**
  * The ladder of levels a simulated league uses: the default six-level table
- * (levelTable.ts: Rk, A, A+, AA, AAA, MLB) or a shorter one with 3 or 4
+ * (levelTable.ts: Entry, Low, Mid, High, Elite, Top) or a shorter one with 3 or 4
  * minor levels, made of rows of the same table so that each level keeps its
  * bar, opposition shift, typical age and season length:
- * - 5 minor levels: Rk, A, A+, AA, AAA (the default);
- * - 4 minor levels: Rk, A, AA, AAA (no A+: the step from A to AA is bigger);
- * - 3 minor levels: A, AA, AAA (no rookie level: everyone enters at A or above).
- * The top level is always the last (MLB). Project choice (invented).
+ * - 5 minor levels: Entry, Low, Mid, High, Elite (the default);
+ * - 4 minor levels: Entry, Low, High, Elite (no Mid: the step from Low to High is bigger);
+ * - 3 minor levels: Low, High, Elite (no entry level: everyone enters at Low or above).
+ * The top level is always the last (Top). Project choice (invented).
  *
  * @example
- * simLadder(4).names; // => ['Rk', 'A', 'AA', 'AAA', 'MLB']
+ * simLadder(4).names; // => ['Entry', 'Low', 'High', 'Elite', 'Top']
  * simLadder(4).base;  // => [0, 1, 3, 4, 5] (rows of the default table)
  */
 import { UsageError } from '../errors/KindredError.ts';

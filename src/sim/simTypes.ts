@@ -5,9 +5,9 @@ import type { SimTruth } from './SimTruth.ts';
 
 /** First season from which each measured column is recorded (missing before). */
 export interface MeasuredFrom {
-  /** bbe, ev_avg_mph, ev_p90_mph, la_avg_deg, hard_hit_pct, sweet_spot_pct (default lastSeason - 9). */
+  /** bbe, ev_avg_mph, ev_p90_mph, la_avg_deg, hard_hit_pct, la_band_pct (default lastSeason - 9). */
   readonly battedBall: number;
-  /** sprint_ft_s (default lastSeason - 9). */
+  /** run_speed_ft_s (default lastSeason - 9). */
   readonly sprint: number;
   /** arm_mph (default lastSeason - 7). */
   readonly arm: number;
@@ -32,9 +32,9 @@ export interface SimOptions {
   /** Share of entrants who are pitchers (default 0.4). */
   readonly pitcherShare?: number;
   readonly measuredFrom?: Partial<MeasuredFrom>;
-  /** Lowest level with tracking measurements (every column of MeasuredFrom but groundball; default 'AA'). */
+  /** Lowest level with tracking measurements (every column of MeasuredFrom but groundball; default 'High'). */
   readonly trackedFromLevel?: string;
-  /** Minor levels below the top level: 5 (Rk, A, A+, AA, AAA; default), 4 (no A+) or 3 (A, AA, AAA); see simLadder. */
+  /** Minor levels below the top level: 5 (Entry, Low, Mid, High, Elite; default), 4 (no Mid) or 3 (Low, High, Elite); see simLadder. */
   readonly minorLevels?: number;
   /** Showing above the next level's bar needed for a promotion between seasons (default 0.05; higher promotes fewer). */
   readonly promotionMargin?: number;
@@ -88,7 +88,7 @@ export interface SimPlayers {
   /** Highest level index reached (over the whole career, including seasons before firstSeason). */
   readonly highestLevel: Int8Array;
   /** Seasons with a top-level stint (whole career). */
-  readonly mlbSeasons: Int16Array;
+  readonly topLevelSeasons: Int16Array;
   /** Overall value (playerValue, talent units) of the player's peak talents: his true ceiling. */
   readonly peakValue: Float32Array;
   /** 1 when the career was still going after lastSeason (censored). */

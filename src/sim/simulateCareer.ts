@@ -4,8 +4,8 @@
  * birth date), his true talents each season, and where he played.
  *
  * Career model (invented, plausible):
- * - Entry at ages 17 to 23 (on June 30): the youngest at Rk, college-age
- *   players at A or, if already good enough, A+.
+ * - Entry at ages 17 to 23 (on June 30): the youngest at Entry, college-age
+ *   players at Low or, if already good enough, Mid.
  * - Talent each season = peak talent + age curve (scaled by the player's own
  *   development speed) + a slow random walk (sd 0.06 a year per talent).
  * - A season's showing is the current value plus noise (sd 0.3). A showing
@@ -84,7 +84,7 @@ const ENTRY_WEIGHTS = [0.12, 0.25, 0.1, 0.1, 0.26, 0.13, 0.04] as const;
 const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31] as const;
 const WALK_SD = 0.06;
 const LAST_AGE = 41;
-/** Value a Rk player is measured against (Rk itself has no bar). */
+/** Value an Entry player is measured against (Entry itself has no bar). */
 const RK_FLOOR = -1.7;
 
 function drawEntryAge(rng: SeededRandom): number {

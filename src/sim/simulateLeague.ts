@@ -72,7 +72,7 @@ export function resolveSimOptions(options: SimOptions): ResolvedSimOptions {
   const perSeason = intake * 5;
   const teamsPerLevel = options.teamsPerLevel ?? Math.max(4, Math.round(perSeason / (ladder.names.length * PLAYERS_PER_CLUB)));
   if (!Number.isInteger(teamsPerLevel) || teamsPerLevel < 2) throw new UsageError(`teamsPerLevel ${teamsPerLevel}: expected an integer >= 2`, { teamsPerLevel });
-  const trackedFromLevel = options.trackedFromLevel ?? 'AA';
+  const trackedFromLevel = options.trackedFromLevel ?? 'High';
   if (!ladder.names.some((l) => l === trackedFromLevel)) {
     throw new UsageError(`trackedFromLevel ${JSON.stringify(trackedFromLevel)}: expected one of ${ladder.names.join(', ')}`, { trackedFromLevel });
   }

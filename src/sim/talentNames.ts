@@ -11,7 +11,7 @@ export const HITTER_TALENTS = [
   'power',
   /** Plate discipline: walks, fewer strikeouts. */
   'eye',
-  /** Foot speed: sprint speed, steals, triples, range in the field. */
+  /** Foot speed: run speed, steals, triples, range in the field. */
   'speed',
   /** Range and hands: chances taken and errors avoided. */
   'glove',

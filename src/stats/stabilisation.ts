@@ -41,7 +41,7 @@ export type StabilisationRate =
   | 'hardHitPct'
   | 'evP90Mph'
   | 'laAvgDeg'
-  | 'sweetSpotPct'
+  | 'laBandPct'
   | 'stolenBaseSuccess'
   // pitching
   | 'pitcherStrikeoutRate'
@@ -67,7 +67,7 @@ export const STABILISATION: Readonly<Record<StabilisationRate, StabilisationEntr
   hardHitPct: { sample: 80, unit: 'BBE', source: 'from memory' },
   evP90Mph: { sample: 50, unit: 'BBE', source: 'project choice' },
   laAvgDeg: { sample: 60, unit: 'BBE', source: 'project choice' },
-  sweetSpotPct: { sample: 100, unit: 'BBE', source: 'project choice' },
+  laBandPct: { sample: 100, unit: 'BBE', source: 'project choice' },
   stolenBaseSuccess: { sample: 40, unit: 'attempts', source: 'project choice' },
   pitcherStrikeoutRate: { sample: 70, unit: 'BF', source: 'from memory' },
   pitcherWalkRate: { sample: 170, unit: 'BF', source: 'from memory' },

@@ -2,8 +2,11 @@ import { z } from 'zod';
 
 /** Format tag written into every manifest; a folder whose manifest lacks it is not a Kindred store. */
 export const STORE_FORMAT = 'kindred-store';
-/** Version of the store layout. Bump it when the layout or any file's meaning changes; old stores are then refused. */
-export const STORE_FORMAT_VERSION = 4;
+/**
+ * Version of the store layout. Bump it when the layout or any file's meaning changes; old stores are then refused.
+ * 5: dimensions la_band_pct and run_speed_ft_s (formerly sweet_spot_pct and sprint_ft_s).
+ */
+export const STORE_FORMAT_VERSION = 5;
 /** Name of the manifest inside a store folder (reserved: no data file may use it). */
 export const MANIFEST_NAME = 'manifest.json';
 

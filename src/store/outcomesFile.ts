@@ -16,7 +16,7 @@ const num = z.number();
 export const outcomesFileSchema = z.strictObject({
   format: z.literal(OUTCOMES_FORMAT),
   version: z.literal(OUTCOMES_VERSION),
-  /** The roster's highest level, taken as MLB. */
+  /** The roster's highest declared level: the top level of every outcome. */
   top_level: z.string(),
   /** First and last season with any line in the roster (every level). */
   first_season: z.number().int(),

@@ -30,7 +30,7 @@ const range = (id: string, label: string, min: number, max: number): HTMLElement
 export function filtersForm(info: StoreInfo): FiltersForm {
   const k = h('input', { id: 'opt-k', type: 'number', min: '1', max: '100', value: '10' });
   const preset = h('select', { id: 'opt-preset' }, ...info.presets.map((p) => h('option', { value: p }, p)));
-  const weights = h('input', { id: 'opt-weights', type: 'text', placeholder: 'e.g. obp=2,sprint_ft_s=0', spellcheck: 'false' });
+  const weights = h('input', { id: 'opt-weights', type: 'text', placeholder: 'e.g. obp=2,run_speed_ft_s=0', spellcheck: 'false' });
   const coverage = h('input', { id: 'opt-min-coverage', type: 'number', min: '0', max: '1', step: '0.05', value: '0.5' });
   const allSeasons = h('input', { id: 'opt-all-seasons', type: 'checkbox' });
   const element = h(

@@ -24,8 +24,8 @@ export function outcomeChartSpec(r: ProspectResult): TopLevelSpec {
   const b = o.baseline;
   const basePeak = m.key === 'peak_ops_plus' && 'peak_ops_plus' in b ? b.peak_ops_plus : 'peak_fip_minus' in b ? b.peak_fip_minus : null;
   const reached = [
-    { who: 'comps', share: o.reached_mlb ?? 0 },
-    { who: 'base rate', share: b.reached_mlb ?? 0 },
+    { who: 'comps', share: o.reached_top_level ?? 0 },
+    { who: 'base rate', share: b.reached_top_level ?? 0 },
   ];
   const dots = r.comps
     .filter((c) => !c.censored)

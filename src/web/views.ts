@@ -136,14 +136,14 @@ const prospectView: ViewDef = {
     const c = o.calibrated;
     const bt = c?.backtest;
     const calibrated = c && bt
-      ? ` Calibrated on this roster's history: ${pct(c.reached_mlb)}. On this roster, outlooks replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''} scored a Brier skill of ${bt.skill_vs_level_age.value ?? 'n/a'} against the level-and-age base rate, and their p10-p90 held the realised peak ${pct(bt.peak_coverage.value)} of the time (nominal 80%).`
+      ? ` Calibrated on this roster's history: ${pct(c.reached_top_level)}. On this roster, outlooks replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''} scored a Brier skill of ${bt.skill_vs_level_age.value ?? 'n/a'} against the level-and-age base rate, and their p10-p90 held the realised peak ${pct(bt.peak_coverage.value)} of the time (nominal 80%).`
       : ` No calibrated outlook: ${o.calibration_note ?? 'no backtest stored'}.`;
-    const note = `Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_mlb)} reached the top level, against a base rate of ${pct(o.baseline.reached_mlb)} for ${o.baseline.player_seasons} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
+    const note = `Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_top_level)} reached the top level, against a base rate of ${pct(o.baseline.reached_top_level)} for ${o.baseline.player_seasons} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
       note,
       extra: [
-        { title: 'reached MLB', value: (c) => (prospectOf(c) ? yesNo(prospectOf(c)?.outcome.reached_mlb ?? false) : null) },
-        { title: 'MLB seasons', value: (c) => prospectOf(c)?.outcome.mlb_seasons ?? null },
+        { title: 'reached top level', value: (c) => (prospectOf(c) ? yesNo(prospectOf(c)?.outcome.reached_top_level ?? false) : null) },
+        { title: 'top-level seasons', value: (c) => prospectOf(c)?.outcome.top_level_seasons ?? null },
         { title: m.label, value: (c) => { const pc = prospectOf(c); return pc ? peakOf(pc) : null; } },
         { title: 'follow-up over', value: (c) => { const pc = prospectOf(c); return pc ? yesNo(!pc.censored) : null; } },
       ],

@@ -16,7 +16,7 @@ beforeAll(async () => {
   charts = await mkdtemp(join(tmpdir(), 'kindred-charts-'));
   const store = await openProfileStore(sim.storeDir);
   const g = store.groups.get('IF');
-  const aa = store.levels.indexOf('AA');
+  const aa = store.levels.indexOf('High');
   for (let i = 0; g && i < g.n && prospectId === ''; i++) if (g.season[i] === 2026 && g.level[i] === aa && !Number.isNaN(g.age[i] ?? NaN)) prospectId = store.players[g.player[i] ?? -1]?.playerId ?? '';
 }, 300_000);
 afterAll(async () => {
@@ -57,9 +57,9 @@ describe('kindred backtest', () => {
     expect(before.outlook.calibration_note).toMatch(/no backtest stored/);
     await storeBacktest(sim.storeDir, { stdout: { write: () => true }, stderr: { write: () => true }, isTTY: false });
     const after = await runCli('prospect', prospectId, '--store', sim.storeDir, '--format', 'json');
-    const json = JSON.parse(after.stdout) as { outlook: { calibrated: { reached_mlb: number; backtest: { cuts: number[] }; method: string } | null } };
-    expect(json.outlook.calibrated?.reached_mlb).toBeGreaterThan(0);
-    expect(json.outlook.calibrated?.reached_mlb).toBeLessThan(1);
+    const json = JSON.parse(after.stdout) as { outlook: { calibrated: { reached_top_level: number; backtest: { cuts: number[] }; method: string } | null } };
+    expect(json.outlook.calibrated?.reached_top_level).toBeGreaterThan(0);
+    expect(json.outlook.calibrated?.reached_top_level).toBeLessThan(1);
     expect(json.outlook.calibrated?.backtest.cuts.length).toBeGreaterThan(0);
     expect(json.outlook.calibrated?.method).toMatch(/split conformal/);
     const table = await runCli('prospect', prospectId, '--store', sim.storeDir);

@@ -9,7 +9,7 @@ import { cheaperResultSchema } from '../outlook/outlookContract.ts';
 
 let sim: SimStore;
 let store: string;
-/** A well-paid MLB infielder (id, season, salary) and a prospect with no salary. */
+/** A well-paid Top infielder (id, season, salary) and a prospect with no salary. */
 let star = { id: '', season: 0, salary: 0 };
 let unpaid = '';
 

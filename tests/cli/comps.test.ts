@@ -177,7 +177,7 @@ describe('usage errors exit 2, missing stores exit 1', () => {
     [['comps', '--want', 'obp=.300,obp=.400', '--position', 'SS'], /^kindred: --want: obp is given more than once/],
     [['comps', '--want', 'obp=5', '--position', 'SS'], /^kindred: --want: obp=5 is not a plausible value: expected \.\d+ to \.\d+/],
     [['comps', '--want', 'obp=360', '--position', 'SS'], /obp=360 is not a plausible value/],
-    [['comps', 'x', '--weights', 'sprnt=0'], /^kindred: --weights: no dimension "sprnt" \(did you mean sprint_ft_s\?\)/],
+    [['comps', 'x', '--weights', 'run_sped=0'], /^kindred: --weights: no dimension "run_sped" \(did you mean run_speed_ft_s\?\)/],
   ])('kindred %j', async (argv, message) => {
     const out = await runCli(...argv, '--store', store);
     expect(out.code).toBe(2);
@@ -195,7 +195,7 @@ describe('kindred dims', () => {
   it('lists the catcher dimensions with labels, units and direction, within 100 columns', async () => {
     const out = await runCli('dims', '--position', 'C');
     expect(out.code).toBe(0);
-    expect(out.stdout).toMatch(/pop_2b_s\s+│?\s*Pop 2B\s+│?\s*s\s+│?\s*lower/);
+    expect(out.stdout).toMatch(/pop_2b_s\s+│?\s*Pop time\s+│?\s*s\s+│?\s*lower/);
     for (const line of out.stdout.split('\n')) expect([...line].length).toBeLessThanOrEqual(100);
     expect(out.stdout).not.toContain('fb_mph');
   });

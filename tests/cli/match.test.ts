@@ -20,8 +20,8 @@ beforeAll(async () => {
   const { openProfileStore } = await import('../../src/store/openProfileStore.ts');
   const s = await openProfileStore(store);
   const g = s.groups.get('SP');
-  const mlb = s.levels.indexOf('MLB');
-  for (let i = 0; g && i < g.n; i++) if (g.level[i] === mlb) target = s.players[g.player[i] as number]?.playerId ?? '';
+  const top = s.levels.indexOf('Top');
+  for (let i = 0; g && i < g.n; i++) if (g.level[i] === top) target = s.players[g.player[i] as number]?.playerId ?? '';
   hitter = s.players[s.groups.get('OF')?.player[0] ?? 0]?.playerId ?? '';
   const comps = compsResultSchema.parse(JSON.parse((await runCli('comps', target, '--store', store, '--format', 'json', '--k', '10', '--exact')).stdout));
   first = { id: comps.comps[0]?.player_id ?? '', season: comps.comps[0]?.season ?? 0 };

@@ -11,7 +11,7 @@ import { prospectResultSchema } from '../outlook/outlookContract.ts';
 
 let sim: SimStore;
 let store: string;
-/** An AA shortstop-type hitter and an AA starter of the last season, each with a season before it. */
+/** A High-level infielder and a High-level starter of the last season, each with a season before it. */
 let hitter = '';
 let pitcher = '';
 let lastSeason = 0;
@@ -22,7 +22,7 @@ beforeAll(async () => {
   const s = await openProfileStore(store);
   const pick = (group: 'IF' | 'SP'): string => {
     const g = s.groups.get(group);
-    const aa = s.levels.indexOf('AA');
+    const aa = s.levels.indexOf('High');
     lastSeason = Math.max(...(g?.season ?? [0]));
     for (let i = (g?.n ?? 0) - 1; g && i >= 0; i--) {
       if (g.level[i] === aa && g.season[i] === lastSeason && !Number.isNaN(g.age[i] as number)) {
@@ -30,7 +30,7 @@ beforeAll(async () => {
         if (g.player.some((q, j) => q === p && g.season[j] === lastSeason - 1)) return s.players[p]?.playerId ?? '';
       }
     }
-    throw new Error(`no AA ${group} in the test league`);
+    throw new Error(`no High ${group} in the test league`);
   };
   hitter = pick('IF');
   pitcher = pick('SP');
@@ -48,11 +48,23 @@ describe('kindred prospect <player>', () => {
   it('prints comps, what became of them, and the outlook beside the base rate', async () => {
     const out = await runCli('prospect', hitter, '--store', store);
     expect(out.code).toBe(0);
-    expect(out.stdout).toMatch(/^Prospect comps for .*\(p\d+\), \d{4} AA /);
+    expect(out.stdout).toMatch(/^Prospect comps for .*\(p\d+\), \d{4} High /);
     expect(out.stdout).toMatch(/Outlook: what the \d+ comps did in the next 6 seasons/);
-    expect(out.stdout).toMatch(/Reached MLB +\d+% +\d+%/);
+    expect(out.stdout).toMatch(/Reached the top level +\d+% +\d+%/);
     expect(out.stdout).toMatch(/Peak OPS\+/);
     expect(out.stdout).toMatch(/not what this one will do/);
+  });
+
+  it('calls the top level by the roster\'s own word, never by a real league\'s name, in table, CSV and JSON', async () => {
+    // Project rule: the top level is the roster's highest declared level (here the demo league's "Top").
+    const table = await runCli('prospect', hitter, '--store', store);
+    const csv = await runCli('prospect', hitter, '--store', store, '--format', 'csv');
+    const r = await json(pitcher);
+    for (const text of [table.stdout, csv.stdout, JSON.stringify(r)]) expect(text).not.toMatch(/MLB|mlb/);
+    expect(table.stdout).toMatch(/First top +Top yrs/);
+    expect(csv.stdout.split('\n')[0]).toContain('reached_top_level,first_top_level_season,top_level_seasons');
+    expect(r.outlook).toHaveProperty('reached_top_level');
+    expect(r.comps[0]?.outcome).toHaveProperty('first_top_level_season');
   });
 
   it('--format json holds to the contract, echoes player_id and season, and gives hitters peak OPS+', async () => {
@@ -92,14 +104,14 @@ describe('kindred prospect <player>', () => {
     expect(out.code).toBe(0);
     const rows: string[][] = parse(out.stdout);
     expect(rows[0]).toContain('peak_ops_plus');
-    expect(rows[0]).toContain('reached_mlb');
+    expect(rows[0]).toContain('reached_top_level');
     expect(rows).toHaveLength(6);
     expect(rows.slice(1).every((r) => r[0] === hitter && (r[rows[0]?.indexOf('censored') ?? -1] === 'false'))).toBe(true);
   });
 
   it('--batch writes one JSON line per target and an error line for a bad one (exit 1)', async () => {
     const file = join(sim.dir, 'targets.csv');
-    await writeFile(file, `player_id,season,level\n${hitter},${lastSeason},AA\nnobody,,\n${pitcher},,\n`);
+    await writeFile(file, `player_id,season,level\n${hitter},${lastSeason},High\nnobody,,\n${pitcher},,\n`);
     const out = await runCli('prospect', '--batch', file, '--store', store, '--k', '3');
     expect(out.code).toBe(1);
     const lines = out.stdout.trim().split('\n').map((l) => JSON.parse(l) as { query: { player_id: string }; error?: { code: string } });

@@ -27,10 +27,10 @@ describe('combineStints(BATTING_COLUMNS, stints)', () => {
     expect('bbe' in out).toBe(false);
   });
   it('uses only the stints that have a value and leaves absent what no stint has', () => {
-    const a: BattingSeason = { ...bat, teams: ['T1'], PA: 100, sprintFtS: 27 };
+    const a: BattingSeason = { ...bat, teams: ['T1'], PA: 100, runSpeedFtS: 27 };
     const b: BattingSeason = { ...bat, teams: ['T2'], PA: 300 };
     const out = combineStints(BATTING_COLUMNS, [a, b]);
-    expect(out.sprintFtS).toBe(27);
+    expect(out.runSpeedFtS).toBe(27);
     expect('laAvgDeg' in out).toBe(false);
   });
 });

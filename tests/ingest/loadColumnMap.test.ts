@@ -33,6 +33,16 @@ describe('loadColumnMap(path)', () => {
     expect(map.source?.positions.get('columns.batting.csv.PA')).toEqual({ line: 1, column: 72 });
     expect(await loadColumnMap(mapFile('{}'))).toMatchObject({ files: {}, columns: {} });
   });
+  it('reads a key given under a column\'s former name (sprint_ft_s) as the current one, with a notice', async () => {
+    const map = await loadColumnMap(mapFile(JSON.stringify({ columns: { 'batting.csv': { sprint_ft_s: 'speed' } } })));
+    expect(map.columns).toEqual({ 'batting.csv': { run_speed_ft_s: 'speed' } });
+    expect(map.notices).toEqual([expect.stringMatching(/: key sprint_ft_s of batting.csv read as run_speed_ft_s, its new name \(rename the key to run_speed_ft_s\)$/)]);
+  });
+  it('refuses a column given under both its names, naming the former key', async () => {
+    const err = await mapError(JSON.stringify({ columns: { 'batting.csv': { sweet_spot_pct: 'a', la_band_pct: 'b' } } }));
+    expect(err.issues[0]?.field).toBe('columns.batting.csv.sweet_spot_pct');
+    expect(err.issues[0]?.expected).toContain('former name of la_band_pct');
+  });
   it('refuses an unknown canonical column, naming the key', async () => {
     const err = await mapError(JSON.stringify({ columns: { 'batting.csv': { PAA: 'plate_app' } } }));
     expect(err.message).toContain('columns.batting.csv.PAA');

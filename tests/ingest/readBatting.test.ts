@@ -84,9 +84,9 @@ describe('readRoster: batting.csv measurements (plausible ranges)', () => {
     const issues = await battingIssues([{ la_avg_deg: '-95' }]);
     expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'la_avg_deg'), value: '-95' });
   });
-  it('refuses a sprint speed of 40 ft/s (15 to 35)', async () => {
-    const issues = await battingIssues([{ sprint_ft_s: '40' }]);
-    expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'sprint_ft_s'), value: '40' });
+  it('refuses a run speed of 40 ft/s (15 to 35)', async () => {
+    const issues = await battingIssues([{ run_speed_ft_s: '40' }]);
+    expectOneIssue(issues, { code: 'kindred.input.outOfRange', file: 'batting.csv', line: 2, column: col('batting', 'run_speed_ft_s'), value: '40' });
   });
   it('refuses a percent above 100', async () => {
     const issues = await battingIssues([{ hard_hit_pct: '101' }]);
@@ -103,8 +103,8 @@ describe('readRoster: batting.csv measurements (plausible ranges)', () => {
     expect(issue.expected).toContain('0 to 100');
   });
   it('accepts small percents when another value of the column is above 1', async () => {
-    const roster = await readRoster(rosterDir({ 'batting.csv': csv('batting', [{ sweet_spot_pct: '0.5' }, { player_id: 'p2', sweet_spot_pct: '31' }]) }));
-    expect(roster.batting.map((b) => b.sweetSpotPct)).toEqual([0.5, 31]);
+    const roster = await readRoster(rosterDir({ 'batting.csv': csv('batting', [{ la_band_pct: '0.5' }, { player_id: 'p2', la_band_pct: '31' }]) }));
+    expect(roster.batting.map((b) => b.laBandPct)).toEqual([0.5, 31]);
   });
 });
 
@@ -155,5 +155,25 @@ describe('readRoster: batting.csv keys', () => {
     expect(roster.batting).toHaveLength(1);
     expect(roster.batting[0]?.teams).toEqual(['T1', 'T2']);
     expect(roster.batting[0]?.PA).toBe(240);
+  });
+});
+
+describe('readRoster: batting.csv columns under their former names', () => {
+  // Project choice: la_band_pct and run_speed_ft_s were called sweet_spot_pct and sprint_ft_s; an export
+  // made for the old names still reads, with one line a column naming the new name.
+  const oldHeader = (text: string): string => text.replace('la_band_pct', 'sweet_spot_pct').replace('run_speed_ft_s', 'sprint_ft_s');
+  it('reads sweet_spot_pct as la_band_pct and sprint_ft_s as run_speed_ft_s, one notice each naming the new name', async () => {
+    const roster = await readRoster(rosterDir({ 'batting.csv': oldHeader(csv('batting', [{ la_band_pct: '31', run_speed_ft_s: '28.5' }])) }));
+    expect(roster.batting[0]?.laBandPct).toBe(31);
+    expect(roster.batting[0]?.runSpeedFtS).toBe(28.5);
+    expect(roster.ignoredColumns['batting.csv']).toBeUndefined();
+    expect(roster.notices.filter((n) => n.includes('its new name'))).toEqual([
+      'batting.csv: column sweet_spot_pct read as la_band_pct, its new name (rename the column to la_band_pct)',
+      'batting.csv: column sprint_ft_s read as run_speed_ft_s, its new name (rename the column to run_speed_ft_s)',
+    ]);
+  });
+  it('reads the current name and says nothing when a file has it', async () => {
+    const roster = await readRoster(rosterDir({ 'batting.csv': csv('batting', [{}]) }));
+    expect(roster.notices.some((n) => n.includes('its new name'))).toBe(false);
   });
 });

@@ -88,12 +88,12 @@ describe('readRoster(dir, { lenient: true })', () => {
 });
 
 describe('readRoster: combining stints', () => {
-  it('sums counts and weights the batted-ball averages by bbe and sprint speed by PA (worked by hand)', async () => {
+  it('sums counts and weights the batted-ball averages by bbe and run speed by PA (worked by hand)', async () => {
     const dir = rosterDir({
       'batting.csv': csv('batting', [
         {},
-        { team: 'T2', G: '15', PA: '60', AB: '52', H: '14', '2B': '3', '3B': '0', HR: '2', BB: '5', IBB: '0', HBP: '1', SF: '2', SO: '12', SB: '1', CS: '0', bbe: '40', ev_avg_mph: '85.5', ev_p90_mph: '100.0', la_avg_deg: '10.0', hard_hit_pct: '30', sweet_spot_pct: '27', sprint_ft_s: '28.0' },
-        { team: 'T3', G: '5', PA: '20', AB: '18', H: '4', '2B': '1', '3B': '0', HR: '0', BB: '2', IBB: '0', HBP: '0', SF: '0', SO: '5', SB: '0', CS: '0', bbe: '12', ev_avg_mph: '', ev_p90_mph: '', la_avg_deg: '', hard_hit_pct: '', sweet_spot_pct: '', sprint_ft_s: '' },
+        { team: 'T2', G: '15', PA: '60', AB: '52', H: '14', '2B': '3', '3B': '0', HR: '2', BB: '5', IBB: '0', HBP: '1', SF: '2', SO: '12', SB: '1', CS: '0', bbe: '40', ev_avg_mph: '85.5', ev_p90_mph: '100.0', la_avg_deg: '10.0', hard_hit_pct: '30', la_band_pct: '27', run_speed_ft_s: '28.0' },
+        { team: 'T3', G: '5', PA: '20', AB: '18', H: '4', '2B': '1', '3B': '0', HR: '0', BB: '2', IBB: '0', HBP: '0', SF: '0', SO: '5', SB: '0', CS: '0', bbe: '12', ev_avg_mph: '', ev_p90_mph: '', la_avg_deg: '', hard_hit_pct: '', la_band_pct: '', run_speed_ft_s: '' },
         { player_id: 'p2' },
       ]),
     });
@@ -111,7 +111,7 @@ describe('readRoster: combining stints', () => {
     // hard_hit = (38*80 + 30*40) / 120 = 4240 / 120
     expect(b?.hardHitPct).toBeCloseTo(4240 / 120, 10);
     // sprint by PA = (27.1*120 + 28.0*60) / 180 = 4932 / 180 = 27.4
-    expect(b?.sprintFtS).toBeCloseTo(27.4, 10);
+    expect(b?.runSpeedFtS).toBeCloseTo(27.4, 10);
   });
   it('weights arm by innings and pop time by sb_against, falling back to innings when a stint lacks sb_against', async () => {
     const stint2 = { team: 'T2', G: '12', inn: '100.2', PO: '90', A: '7', E: '1', arm_mph: '83', pop_2b_s: '2.05', exchange_s: '0.80', sb_against: '20', cs_caught: '4' };

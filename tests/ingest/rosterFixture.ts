@@ -16,8 +16,8 @@ export const DEFAULTS = {
   batting: {
     player_id: 'p1', season: '2021', level: 'AA', team: 'T1', G: '30', PA: '120', AB: '105', H: '30', '2B': '6',
     '3B': '1', HR: '4', BB: '10', IBB: '1', HBP: '2', SF: '3', SO: '25', SB: '3', CS: '1', bbe: '80',
-    ev_avg_mph: '88.5', ev_p90_mph: '102.0', la_avg_deg: '12.5', hard_hit_pct: '38.0', sweet_spot_pct: '33.0',
-    sprint_ft_s: '27.1',
+    ev_avg_mph: '88.5', ev_p90_mph: '102.0', la_avg_deg: '12.5', hard_hit_pct: '38.0', la_band_pct: '33.0',
+    run_speed_ft_s: '27.1',
   },
   fielding: {
     player_id: 'p1', season: '2021', level: 'AA', team: 'T1', pos: 'C', G: '25', inn: '200.1', PO: '180', A: '15',

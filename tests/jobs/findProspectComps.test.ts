@@ -21,8 +21,8 @@ beforeAll(async () => {
   store = await openProfileStore(sim.storeDir);
   outcomes = store.outcomes();
   g = store.groups.get('IF') as StoredGroup;
-  const aa = store.levels.indexOf('AA');
-  // AA infielders in the last season: the pool holds complete and censored earlier seasons
+  const aa = store.levels.indexOf('High');
+  // High infielders in the last season: the pool holds complete and censored earlier seasons
   targets = rowsWhere(store, 'IF', (i) => g.level[i] === aa && g.season[i] === outcomes.lastSeason && !Number.isNaN(g.age[i] as number));
 });
 afterAll(() => sim.remove());
@@ -67,8 +67,8 @@ describe('findProspectComps(store, outcomes, target, options)', () => {
     expect(r.outlook.comps_used).toBe(r.comps.length);
     const again = summariseOutlook(r.comps.map((c) => ({ weight: c.likeness, outcome: c.outcome })), 'hitter');
     // likeness is rounded to 0.1 in the listing, so the shares agree to about 0.005
-    expect(Math.abs((again.reached_mlb ?? NaN) - (r.outlook.reached_mlb ?? NaN))).toBeLessThan(0.005);
-    expect(r.outlook.mlb_seasons.n).toBe(r.comps.length);
+    expect(Math.abs((again.reached_top_level ?? NaN) - (r.outlook.reached_top_level ?? NaN))).toBeLessThan(0.005);
+    expect(r.outlook.top_level_seasons.n).toBe(r.comps.length);
     expect('peak_ops_plus' in r.outlook).toBe(true);
   });
 
@@ -96,17 +96,17 @@ describe('findProspectComps(store, outcomes, target, options)', () => {
   });
 
   it('with --path 2 matches players who were at the target\u2019s level of each aligned season', () => {
-    const a = store.levels.indexOf('A+');
+    const a = store.levels.indexOf('Mid');
     const prev = new Map<number, number>();
     for (let i = 0; i < g.n; i++) if (g.level[i] === a) prev.set((g.player[i] as number) * 10000 + (g.season[i] as number), i);
     const jumped = targets.find((at) => prev.has((g.player[at.row] as number) * 10000 + (g.season[at.row] as number) - 1));
     expect(jumped).toBeDefined();
     const t = playerTarget(store, jumped as TargetRow);
     const r = findProspectComps(store, outcomes, t, opts({ path: 2 }));
-    expect(r.query.path.map((s) => s.level)).toEqual([t.level, 'A+']);
+    expect(r.query.path.map((s) => s.level)).toEqual([t.level, 'Mid']);
     expect(r.comps.length).toBeGreaterThan(0);
     for (const c of r.comps) {
-      expect(c.path?.map((s) => s.level)).toEqual([t.level, 'A+']);
+      expect(c.path?.map((s) => s.level)).toEqual([t.level, 'Mid']);
       expect(c.path?.map((s) => s.season)).toEqual([c.season, c.season - 1]);
     }
     const single = findProspectComps(store, outcomes, t, opts());

@@ -17,8 +17,8 @@ beforeAll(async () => {
   sim = await buildSimStore();
   store = await openProfileStore(sim.storeDir);
   g = store.groups.get('SP') as StoredGroup;
-  const mlb = store.levels.indexOf('MLB');
-  const rows = rowsWhere(store, 'SP', (i) => g.level[i] === mlb);
+  const top = store.levels.indexOf('Top');
+  const rows = rowsWhere(store, 'SP', (i) => g.level[i] === top);
   target = playerTarget(store, rows[Math.floor(rows.length / 2)] as (typeof rows)[number]);
 });
 afterAll(() => sim.remove());

@@ -19,7 +19,7 @@ beforeAll(async () => {
   sim = await buildSimStore({ seed: 77, firstSeason: 2010, lastSeason: 2022, targetPlayerSeasons: 4000 });
   store = await openProfileStore(sim.storeDir);
   g = store.groups.get('OF') as StoredGroup;
-  const rows = rowsWhere(store, 'OF', (i) => g.level[i] === store.levels.indexOf('AAA'));
+  const rows = rowsWhere(store, 'OF', (i) => g.level[i] === store.levels.indexOf('Elite'));
   target = playerTarget(store, rows[0] as (typeof rows)[number]);
   w = effectiveWeights(g, DEFAULT_COMPS_OPTIONS);
 });
@@ -49,7 +49,7 @@ describe('poolPercentile(store, g, targetZ, targetPlayer, candidatePlayer, candi
 
   it('follows the pool filters and is NaN for an empty pool', () => {
     const other = g.player.find((p) => p !== target.player) as number;
-    const narrow = poolPercentile(store, g, target.z, target.player, other, 1, w, { levels: ['AAA'] }, 0.5);
+    const narrow = poolPercentile(store, g, target.z, target.player, other, 1, w, { levels: ['Elite'] }, 0.5);
     const wide = poolPercentile(store, g, target.z, target.player, other, 1, w, {}, 0.5);
     expect(narrow.players).toBeLessThan(wide.players);
     expect(poolPercentile(store, g, target.z, target.player, other, 1, w, { seasonFrom: 3000 }, 0.5).percentile).toBeNaN();

@@ -35,9 +35,9 @@ describe('Outcomes.futureOf(player, kind, season, horizon, asOf)', () => {
   it('follows seasons season+1 .. season+horizon and counts the MLB seasons in them', () => {
     const o = outcomes.futureOf(h, 'hitter', 2010, 6);
     expect(o.window).toEqual([2011, 2016]);
-    expect(o.reached_mlb).toBe(true);
-    expect(o.first_mlb_season).toBe(2012);
-    expect(o.mlb_seasons).toBe(3);
+    expect(o.reached_top_level).toBe(true);
+    expect(o.first_top_level_season).toBe(2012);
+    expect(o.top_level_seasons).toBe(3);
   });
 
   it('takes the best OPS+ among seasons of at least 300 PA only', () => {
@@ -58,15 +58,15 @@ describe('Outcomes.futureOf(player, kind, season, horizon, asOf)', () => {
     const o = outcomes.futureOf(h, 'hitter', 2010, 6, 2013);
     expect(o.censored).toBe(true);
     expect(o.seasons_observed).toBe(3);
-    expect(o.mlb_seasons).toBe(2);
+    expect(o.top_level_seasons).toBe(2);
     expect(peakOf(o)).toBeCloseTo(opsOf(2013), 6);
     expect(outcomes.futureOf(h, 'hitter', 2010, 6).censored).toBe(false); // the data run to 2018
   });
 
   it('says no MLB and no peak for a player with no top-level line', () => {
     const o = outcomes.futureOf(h, 'pitcher', 2010, 6);
-    expect(o.reached_mlb).toBe(false);
-    expect(o.first_mlb_season).toBeNull();
+    expect(o.reached_top_level).toBe(false);
+    expect(o.first_top_level_season).toBeNull();
     expect(peakOf(o)).toBeNull();
   });
 

@@ -19,7 +19,7 @@ beforeAll(async () => {
   outcomes = store.outcomes();
   ev = evaluateOutlook(store, outcomes, { prospect: DEFAULT_PROSPECT_OPTIONS });
   const line = (k: string, e: OutlookEvaluation['hitter']): string =>
-    `${k}: ${e.targets} targets, Brier ${e.brier.comps.toFixed(4)} (base rate ${e.brier.baseline.toFixed(4)}), p10-p90 coverage ${e.peakCoverage.comps.toFixed(2)} of ${e.peakCoverage.n}, Spearman p50 ${e.peakSpearman.comps.toFixed(2)} (${e.peakSpearman.baseline.toFixed(2)}), MLB seasons ${e.seasonsSpearman.comps.toFixed(2)} (${e.seasonsSpearman.baseline.toFixed(2)})`;
+    `${k}: ${e.targets} targets, Brier ${e.brier.comps.toFixed(4)} (base rate ${e.brier.baseline.toFixed(4)}), p10-p90 coverage ${e.peakCoverage.comps.toFixed(2)} of ${e.peakCoverage.n}, Spearman p50 ${e.peakSpearman.comps.toFixed(2)} (${e.peakSpearman.baseline.toFixed(2)}), top-level seasons ${e.seasonsSpearman.comps.toFixed(2)} (${e.seasonsSpearman.baseline.toFixed(2)})`;
   console.log(`honesty check, small league\n${line('hitters', ev.hitter)}\n${line('pitchers', ev.pitcher)}`);
 });
 afterAll(() => sim.remove());
@@ -31,19 +31,19 @@ describe('evaluateOutlook(store, outcomes, options)', () => {
     expect(ev.withoutComps).toBeLessThan(0.05 * (ev.hitter.targets + ev.pitcher.targets));
   });
 
-  it('beats a single league-wide rate on the Brier score of reaching MLB', () => {
+  it('beats a single league-wide rate on the Brier score of reaching the top level', () => {
     for (const e of [ev.hitter, ev.pitcher]) {
       const climatology = e.reachedShare * (1 - e.reachedShare); // Brier of always forecasting the overall share
       expect(e.brier.comps).toBeLessThan(climatology);
     }
   });
 
-  it('orders the prospects: MLB seasons forecast and truth are clearly rank-correlated', () => {
+  it('orders the prospects: top-level seasons forecast and truth are clearly rank-correlated', () => {
     expect(ev.hitter.seasonsSpearman.comps).toBeGreaterThan(0.3);
     expect(ev.pitcher.seasonsSpearman.comps).toBeGreaterThan(0.3);
   });
 
-  it('gives p10 to p90 ranges that hold the true MLB seasons count most of the time', () => {
+  it('gives p10 to p90 ranges that hold the true top-level seasons count most of the time', () => {
     expect(ev.hitter.seasonsCoverage.comps).toBeGreaterThan(0.7);
     expect(ev.pitcher.seasonsCoverage.comps).toBeGreaterThan(0.7);
     expect(ev.hitter.peakCoverage.n).toBeGreaterThan(10);

@@ -8,16 +8,16 @@ import { compSchema, compsResultSchema } from '../cli/compsContract.ts';
 const quantiles = z.strictObject({ n: z.number().int().nonnegative(), p10: z.number().nullable(), p50: z.number().nullable(), p90: z.number().nullable() });
 const seasons = quantiles.extend({ mean: z.number().nullable() });
 const share = z.number().min(0).max(1).nullable();
-const figures = z.object({ reached_mlb: share, mlb_seasons: seasons, peak_ops_plus: quantiles.optional(), peak_fip_minus: quantiles.optional() });
+const figures = z.object({ reached_top_level: share, top_level_seasons: seasons, peak_ops_plus: quantiles.optional(), peak_fip_minus: quantiles.optional() });
 
 const outcome = z.object({
   kind: z.enum(['hitter', 'pitcher']),
   window: z.tuple([z.number().int(), z.number().int()]),
   seasons_observed: z.number().int().nonnegative(),
   censored: z.boolean(),
-  reached_mlb: z.boolean(),
-  first_mlb_season: z.number().int().nullable(),
-  mlb_seasons: z.number().int().nonnegative(),
+  reached_top_level: z.boolean(),
+  first_top_level_season: z.number().int().nullable(),
+  top_level_seasons: z.number().int().nonnegative(),
   peak_season: z.number().int().nullable(),
   peak_ops_plus: z.number().nullable().optional(),
   peak_fip_minus: z.number().nullable().optional(),

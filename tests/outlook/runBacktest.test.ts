@@ -42,8 +42,8 @@ describe('collectForecasts and runBacktest (rolling origin)', () => {
     expect(plantedId).not.toBe('');
     const p = store.playerById.get(plantedId) ?? -1;
     // the plant is real: seen from the end of the data, the player now reached the top level
-    expect(outcomes.futureOf(p, 'hitter', CUT - 2, 6).reached_mlb).toBe(false);
-    expect(planted.futureOf(p, 'hitter', CUT - 2, 6).reached_mlb).toBe(true);
+    expect(outcomes.futureOf(p, 'hitter', CUT - 2, 6).reached_top_level).toBe(false);
+    expect(planted.futureOf(p, 'hitter', CUT - 2, 6).reached_top_level).toBe(true);
     const options = { prospect: DEFAULT_PROSPECT_OPTIONS, groups: ['IF'] as const, perSeason: 40, seasons: [2009, CUT] as const };
     const before = collectForecasts(store, outcomes, options);
     const after = collectForecasts(store, planted, options);

@@ -3,14 +3,14 @@ import { summariseOutlook, peakSummaryOf } from '../../src/outlook/summariseOutl
 import type { HitterOutcome } from '../../src/outlook/CompOutcome.ts';
 import { weightedQuantiles } from '../../src/stats/quantile.ts';
 
-const outcome = (mlb: number, peak: number | null): HitterOutcome => ({
+const outcome = (top: number, peak: number | null): HitterOutcome => ({
   kind: 'hitter',
   window: [2011, 2016],
   seasons_observed: 6,
   censored: false,
-  reached_mlb: mlb > 0,
-  first_mlb_season: mlb > 0 ? 2013 : null,
-  mlb_seasons: mlb,
+  reached_top_level: top > 0,
+  first_top_level_season: top > 0 ? 2013 : null,
+  top_level_seasons: top,
   peak_season: peak === null ? null : 2014,
   peak_ops_plus: peak,
 });
@@ -25,8 +25,8 @@ describe('summariseOutlook(items, kind)', () => {
   ];
   const s = summariseOutlook(items, 'hitter');
 
-  it('weighs the share who reached MLB by likeness: (90 + 80 + 50) / 280', () => {
-    expect(s.reached_mlb).toBeCloseTo(220 / 280, 3);
+  it('weighs the share who reached the top level by likeness: (90 + 80 + 50) / 280', () => {
+    expect(s.reached_top_level).toBeCloseTo(220 / 280, 3);
   });
 
   it('draws the peak distribution from the qualifying comps only, with their weights', () => {
@@ -39,14 +39,14 @@ describe('summariseOutlook(items, kind)', () => {
     expect('peak_ops_plus' in s).toBe(true);
   });
 
-  it('counts MLB seasons over every comp, 0 for those who did not reach: mean (360 + 160 + 0 + 250) / 280', () => {
-    expect(s.mlb_seasons.n).toBe(4);
-    expect(s.mlb_seasons.mean).toBeCloseTo(770 / 280, 2);
+  it('counts top-level seasons over every comp, 0 for those who did not reach: mean (360 + 160 + 0 + 250) / 280', () => {
+    expect(s.top_level_seasons.n).toBe(4);
+    expect(s.top_level_seasons.mean).toBeCloseTo(770 / 280, 2);
   });
 
   it('gives nulls and zero counts without comps', () => {
     const empty = summariseOutlook([], 'pitcher');
-    expect(empty.reached_mlb).toBeNull();
+    expect(empty.reached_top_level).toBeNull();
     expect(peakSummaryOf(empty)).toEqual({ n: 0, p10: null, p50: null, p90: null });
     expect('peak_fip_minus' in empty).toBe(true);
   });

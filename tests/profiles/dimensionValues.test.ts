@@ -26,7 +26,7 @@ function cell(groupName: 'OF' | 'SP', playerId: string, dim: string): { raw: num
   const r = Array.from(g.player).findIndex((p) => store.players[p]?.playerId === playerId);
   expect(j, dim).toBeGreaterThanOrEqual(0);
   expect(r, playerId).toBeGreaterThanOrEqual(0);
-  const stratum = g.strata.get(dim)?.get(`2024|AA|${groupName}`);
+  const stratum = g.strata.get(dim)?.get(`2024|High|${groupName}`);
   return { raw: g.raw[r * g.d + j] ?? NaN, z: g.z[r * g.d + j] ?? NaN, mean: stratum?.mean ?? NaN, sd: stratum?.sd ?? NaN };
 }
 

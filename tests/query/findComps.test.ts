@@ -115,10 +115,10 @@ describe('findComps(store, target, options)', () => {
   it('keeps to the pool filters: levels, ages and bats', () => {
     const g = group();
     const target = playerTarget(s.store, { group: 'IF', row: sampleRows(g, 3)[1] as number });
-    const result = findComps(s.store, target, { ...DEFAULT_COMPS_OPTIONS, filter: { levels: ['AA', 'AAA'], ageMin: 22, ageMax: 25, bats: ['L'] } });
+    const result = findComps(s.store, target, { ...DEFAULT_COMPS_OPTIONS, filter: { levels: ['High', 'Elite'], ageMin: 22, ageMax: 25, bats: ['L'] } });
     expect(result.comps.length).toBeGreaterThan(0);
     for (const c of result.comps) {
-      expect(['AA', 'AAA']).toContain(c.level);
+      expect(['High', 'Elite']).toContain(c.level);
       expect(c.age).toBeGreaterThanOrEqual(22);
       expect(c.age).toBeLessThanOrEqual(25);
       const p = s.store.players[s.store.playerById.get(c.player_id) ?? -1];

@@ -90,7 +90,7 @@ describe('describeComp(q, scored, rank, settings)', () => {
     const comp = describeComp(q, scoreRow(q, row, null), 1, { space: null, attributions: false });
     expect(comp.player_id).toBe('h2');
     expect(comp.season).toBe(2024);
-    expect(comp.level).toBe('AA');
+    expect(comp.level).toBe('High');
     expect(comp.position).toBe('CF');
     expect(comp.distance).toBeCloseTo(Math.sqrt(d2), 4);
     expect(comp.coverage).toBeCloseTo(shared / wT, 3);
@@ -100,7 +100,7 @@ describe('describeComp(q, scored, rank, settings)', () => {
   it('echoes the query and the pool', () => {
     const q = prepareQuery(store, target, DEFAULT_COMPS_OPTIONS);
     const echo = echoQuery(q, 5, 'exact', 'input');
-    expect(echo).toMatchObject({ kind: 'player', player_id: 'h1', season: 2024, level: 'AA', group: 'OF', k: 5, method: 'exact', space: 'input' });
+    expect(echo).toMatchObject({ kind: 'player', player_id: 'h1', season: 2024, level: 'High', group: 'OF', k: 5, method: 'exact', space: 'input' });
     expect(echo.profile['obp']).toBeCloseTo(175 / 500, 3);
     expect(echoPool(q)).toMatchObject({ group_size: 3, eligible: 2, filters: {} });
   });

@@ -34,8 +34,8 @@ describe('ageRange(text)', () => {
 
 describe('weightOverrides(text)', () => {
   it('keys each multiplier by the name or label as typed, case folded', () => {
-    expect([...v.weightOverrides('obp=2, Sprint=0,iso=.5')]).toEqual([['obp', 2], ['sprint', 0], ['iso', 0.5]]);
-    expect([...v.weightOverrides('Hard-hit%=1.5')]).toEqual([['hard-hit%', 1.5]]);
+    expect([...v.weightOverrides('obp=2, Run speed=0,iso=.5')]).toEqual([['obp', 2], ['run speed', 0], ['iso', 0.5]]);
+    expect([...v.weightOverrides('Hard contact%=1.5')]).toEqual([['hard contact%', 1.5]]);
   });
   it('refuses a dimension given twice (the last would silently win)', () => {
     expect(() => v.weightOverrides('obp=2,obp=0')).toThrow(/obp is given more than once in "obp=2,obp=0"/);

@@ -44,7 +44,7 @@ describe('GET /api/comps answers what `kindred comps --format json` prints', () 
   const cases: [string, string[], string][] = [
     ['defaults', [], ''],
     ['season and k', ['--season', 'SEASON', '--k', '5'], 'season=SEASON&k=5'],
-    ['pool filters', ['--pool-level', 'AA,AAA,MLB', '--age', '21-', '--bats', 'L,R', '--throws', 'R'], 'pool-level=AA,AAA,MLB&age=21-&bats=L,R&throws=R'],
+    ['pool filters', ['--pool-level', 'High,Elite,Top', '--age', '21-', '--bats', 'L,R', '--throws', 'R'], 'pool-level=High,Elite,Top&age=21-&bats=L,R&throws=R'],
     ['seasons and positions of the pool', ['--pool-season', '2010-2020', '--pool-position', 'SS,2B,3B,1B,C'], 'pool-season=2010-2020&pool-position=SS,2B,3B,1B,C'],
     ['weights and preset', ['--preset', 'bat', '--weights', 'obp=2,k_pct=0.5', '--weighting', 'plain'], 'preset=bat&weights=obp%3D2%2Ck_pct%3D0.5&weighting=plain'],
     ['flags and coverage', ['--exact', '--all-seasons', '--min-coverage', '0.8', '--k', '12'], 'exact=true&all-seasons=1&min-coverage=0.8&k=12'],

@@ -58,9 +58,9 @@ describe('GET /api/prospect answers what `kindred prospect --format json` prints
     ['horizon, path, k and censored comps', ['--horizon', '4', '--path', '2', '--k', '8', '--include-censored'], 'horizon=4&path=2&k=8&include-censored=true'],
     ['pool filters', ['--bats', 'L,R', '--min-coverage', '0.7'], 'bats=L,R&min-coverage=0.7'],
   ] as [string, string[], string][])('with %s', async (_name, args, query) => {
-    const [id, season] = rowsAt('IF', 'AA', 19, 23)[20] ?? ['', 0];
-    const expected = await cli(['prospect', id, '--season', String(season), '--level', 'AA', ...args]);
-    const r = await get(`/api/prospect?player=${id}&season=${season}&level=AA${query ? `&${query}` : ''}`);
+    const [id, season] = rowsAt('IF', 'High', 19, 23)[20] ?? ['', 0];
+    const expected = await cli(['prospect', id, '--season', String(season), '--level', 'High', ...args]);
+    const r = await get(`/api/prospect?player=${id}&season=${season}&level=High${query ? `&${query}` : ''}`);
     expect(r.status).toBe(200);
     expect(json(r)).toEqual(expected);
   });
@@ -103,9 +103,9 @@ describe('GET /api/cheaper answers what `kindred cheaper --format json` prints',
     ['a salary limit in dollars', ['--max-salary', '2,000,000', '--k', '6'], 'max-salary=2%2C000%2C000&k=6'],
     ['a share of his salary', ['--max-share', '0.3'], 'max-share=0.3'],
   ] as [string, string[], string][])('with %s', async (_name, args, query) => {
-    const [id, season] = rowsAt('IF', 'MLB', 0, 99, true)[5] ?? ['', 0];
-    const expected = await cli(['cheaper', id, '--season', String(season), '--level', 'MLB', ...args]);
-    const r = await get(`/api/cheaper?player=${id}&season=${season}&level=MLB${query ? `&${query}` : ''}`);
+    const [id, season] = rowsAt('IF', 'Top', 0, 99, true)[5] ?? ['', 0];
+    const expected = await cli(['cheaper', id, '--season', String(season), '--level', 'Top', ...args]);
+    const r = await get(`/api/cheaper?player=${id}&season=${season}&level=Top${query ? `&${query}` : ''}`);
     expect(r.status).toBe(200);
     expect(json(r)).toEqual(expected);
   });
@@ -129,14 +129,14 @@ describe('GET /api/cheaper answers what `kindred cheaper --format json` prints',
 
 describe('GET /api/match answers what `kindred match --format json` prints', () => {
   it('for two players, with and without the candidate season', async () => {
-    const [[a, sa] = ['', 0], [b, sb] = ['', 0]] = rowsAt('SP', 'MLB');
+    const [[a, sa] = ['', 0], [b, sb] = ['', 0]] = rowsAt('SP', 'Top');
     expect(json(await get(`/api/match?player=${a}&season=${sa}&candidate=${b}`))).toEqual(await cli(['match', a, b, '--season', String(sa)]));
-    expect(json(await get(`/api/match?player=${a}&candidate=${b}&season-b=${sb}&level-b=MLB&k=5`))).toEqual(
-      await cli(['match', a, b, '--season-b', String(sb), '--level-b', 'MLB', '--k', '5']),
+    expect(json(await get(`/api/match?player=${a}&candidate=${b}&season-b=${sb}&level-b=Top&k=5`))).toEqual(
+      await cli(['match', a, b, '--season-b', String(sb), '--level-b', 'Top', '--k', '5']),
     );
   });
   it('for a want profile against a player', async () => {
-    const [b] = rowsAt('C', 'MLB')[0] ?? [''];
+    const [b] = rowsAt('C', 'Top')[0] ?? [''];
     expect(json(await get(`/api/match?want=pop_2b_s%3D1.95%2Cobp%3D55g&position=C&candidate=${b}`))).toEqual(
       await cli(['match', '--want', 'pop_2b_s=1.95,obp=55g', '--position', 'C', b]),
     );

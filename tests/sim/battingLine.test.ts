@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { battingLine } from '../../src/sim/battingLine.ts';
 import { BATTING_COLUMNS, columnAt } from '../../src/sim/fileSchemas.ts';
-import { LEVEL_MLB } from '../../src/sim/levelTable.ts';
+import { LEVEL_TOP } from '../../src/sim/levelTable.ts';
 import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { H_CONTACT, H_EYE, H_POWER, HITTER_TALENTS } from '../../src/sim/talentNames.ts';
 
@@ -16,7 +16,7 @@ function average(set: (t: Float64Array) => void, seed: number) {
   const sums = { iso: 0, ev: 0, hard: 0, k: 0, bb: 0 };
   const n = 300;
   for (let i = 0; i < n; i++) {
-    battingLine(rng, t, LEVEL_MLB, 600, 150, true, true, row);
+    battingLine(rng, t, LEVEL_TOP, 600, 150, true, true, row);
     const ab = row[col('AB')] ?? 0;
     const tb = (row[col('H')] ?? 0) + (row[col('2B')] ?? 0) + 2 * (row[col('3B')] ?? 0) + 3 * (row[col('HR')] ?? 0);
     sums.iso += (tb - (row[col('H')] ?? 0)) / ab;

@@ -12,8 +12,8 @@ describe('simLadder(minorLevels)', () => {
   });
 
   it('drops A+ for 4 minor levels and also Rk for 3, keeping each kept level its own constants', () => {
-    expect(simLadder(4).names).toEqual(['Rk', 'A', 'AA', 'AAA', 'MLB']);
-    expect(simLadder(3).names).toEqual(['A', 'AA', 'AAA', 'MLB']);
+    expect(simLadder(4).names).toEqual(['Entry', 'Low', 'High', 'Elite', 'Top']);
+    expect(simLadder(3).names).toEqual(['Low', 'High', 'Elite', 'Top']);
     expect(simLadder(3).bar).toEqual([LEVEL_BAR[1], LEVEL_BAR[3], LEVEL_BAR[4], LEVEL_BAR[5]]);
     expect(simLadder(3).top).toBe(3);
   });

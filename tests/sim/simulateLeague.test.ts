@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { cellText } from '../../src/sim/cellText.ts';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
-import { LEVEL_MLB, SIM_LEVELS } from '../../src/sim/levelTable.ts';
+import { LEVEL_TOP, SIM_LEVELS } from '../../src/sim/levelTable.ts';
 import { H_POWER, P_STUFF } from '../../src/sim/talentNames.ts';
 import { SMALL_OPTIONS, smallLeague } from './smallLeague.ts';
 import { UsageError } from '../../src/errors/KindredError.ts';
@@ -97,8 +97,8 @@ describe('simulateLeague(options)', () => {
     const medians = byLevel.map(median);
     expect(medians[0]).toBeGreaterThanOrEqual(18);
     expect(medians[0]).toBeLessThanOrEqual(21);
-    expect(medians[LEVEL_MLB]).toBeGreaterThanOrEqual(26);
-    expect(medians[LEVEL_MLB]).toBeLessThanOrEqual(31);
+    expect(medians[LEVEL_TOP]).toBeGreaterThanOrEqual(26);
+    expect(medians[LEVEL_TOP]).toBeLessThanOrEqual(31);
     for (let i = 1; i < medians.length; i++) expect(medians[i] ?? 0).toBeGreaterThanOrEqual(medians[i - 1] ?? 0);
   });
 
@@ -115,7 +115,7 @@ describe('simulateLeague(options)', () => {
       const entry = league.players.entrySeason[i] ?? 0;
       if (entry < 2003 || entry > 2012) continue; // careers that started and mostly ended in the window
       entrants++;
-      if (league.players.highestLevel[i] === LEVEL_MLB) reached++;
+      if (league.players.highestLevel[i] === LEVEL_TOP) reached++;
     }
     expect(reached / entrants).toBeGreaterThan(0.05);
     expect(reached / entrants).toBeLessThan(0.3);
@@ -130,15 +130,15 @@ describe('simulateLeague(options)', () => {
       }
       return s / n;
     };
-    expect(mean(LEVEL_MLB, H_POWER, 'hitter')).toBeGreaterThan(mean(0, H_POWER, 'hitter') + 0.5);
-    expect(mean(LEVEL_MLB, P_STUFF, 'pitcher')).toBeGreaterThan(mean(0, P_STUFF, 'pitcher') + 0.5);
+    expect(mean(LEVEL_TOP, H_POWER, 'hitter')).toBeGreaterThan(mean(0, H_POWER, 'hitter') + 0.5);
+    expect(mean(LEVEL_TOP, P_STUFF, 'pitcher')).toBeGreaterThan(mean(0, P_STUFF, 'pitcher') + 0.5);
   });
 
   it('gives players who reach the top level a higher true ceiling (peakValue) than those who do not', () => {
     let topSum = 0, topN = 0, restSum = 0, restN = 0;
     for (let i = 0; i < league.players.count; i++) {
       const v = league.players.peakValue[i] ?? 0;
-      if (league.players.highestLevel[i] === LEVEL_MLB) { topSum += v; topN++; } else { restSum += v; restN++; }
+      if (league.players.highestLevel[i] === LEVEL_TOP) { topSum += v; topN++; } else { restSum += v; restN++; }
     }
     expect(topSum / topN).toBeGreaterThan(restSum / restN + 0.8);
   });
@@ -238,7 +238,7 @@ describe('simulateLeague(options) with league parameters varied', () => {
 
   it('uses the shorter ladder for 3 or 4 minor levels, in levels and in every stat row', () => {
     const short = simulateLeague({ ...base, minorLevels: 3 });
-    expect(short.levels).toEqual(['A', 'AA', 'AAA', 'MLB']);
+    expect(short.levels).toEqual(['Low', 'High', 'Elite', 'Top']);
     let maxLevel = 0;
     for (let r = 0; r < short.batting.length; r++) maxLevel = Math.max(maxLevel, short.batting.get(r, short.batting.columnIndex('level')));
     expect(maxLevel).toBe(3);

@@ -7,8 +7,8 @@ const league = smallLeague();
 let dir = '';
 let files: Record<string, number> = {};
 const tables: Record<string, { header: string[]; rows: Record<string, string>[]; text: string }> = {};
-const LEVELS = ['Rk', 'A', 'A+', 'AA', 'AAA', 'MLB'];
-const TRACKED = new Set(['AA', 'AAA', 'MLB']);
+const LEVELS = ['Entry', 'Low', 'Mid', 'High', 'Elite', 'Top'];
+const TRACKED = new Set(['High', 'Elite', 'Top']);
 const last = league.options.lastSeason;
 
 beforeAll(async () => {
@@ -45,7 +45,7 @@ describe('writeLeagueCsv(league, dir)', () => {
     expect(rowsOf('levels.csv').map((r) => r['level'])).toEqual(LEVELS);
     expect(tables['players.csv']?.header).toEqual(['player_id', 'name', 'birth_date', 'bats', 'throws']);
     expect(tables['batting.csv']?.header.join(',')).toBe(
-      'player_id,season,level,team,G,PA,AB,H,2B,3B,HR,BB,IBB,HBP,SF,SO,SB,CS,bbe,ev_avg_mph,ev_p90_mph,la_avg_deg,hard_hit_pct,sweet_spot_pct,sprint_ft_s');
+      'player_id,season,level,team,G,PA,AB,H,2B,3B,HR,BB,IBB,HBP,SF,SO,SB,CS,bbe,ev_avg_mph,ev_p90_mph,la_avg_deg,hard_hit_pct,la_band_pct,run_speed_ft_s');
     expect(tables['fielding.csv']?.header.join(',')).toBe(
       'player_id,season,level,team,pos,G,inn,PO,A,E,arm_mph,pop_2b_s,exchange_s,sb_against,cs_caught');
     expect(tables['pitching.csv']?.header.join(',')).toBe(
@@ -86,13 +86,13 @@ describe('writeLeagueCsv(league, dir)', () => {
       count(r, 'G'); count(r, 'SB'); count(r, 'CS');
       if (r['bbe'] !== '') expect(count(r, 'bbe')).toBeLessThanOrEqual((AB ?? 0) - (SO ?? 0));
       if (r['ev_avg_mph'] !== '') expect(Number(r['ev_p90_mph'])).toBeGreaterThan(Number(r['ev_avg_mph']));
-      for (const pct of ['hard_hit_pct', 'sweet_spot_pct']) {
+      for (const pct of ['hard_hit_pct', 'la_band_pct']) {
         if (r[pct] !== '') {
           expect(Number(r[pct])).toBeGreaterThanOrEqual(0);
           expect(Number(r[pct])).toBeLessThanOrEqual(100);
         }
       }
-      for (const m of ['ev_avg_mph', 'ev_p90_mph', 'la_avg_deg', 'sprint_ft_s'] as const) {
+      for (const m of ['ev_avg_mph', 'ev_p90_mph', 'la_avg_deg', 'run_speed_ft_s'] as const) {
         if (r[m] === '') continue;
         expect(Number(r[m])).toBeGreaterThanOrEqual(plausibleRange('batting.csv', m).min);
         expect(Number(r[m])).toBeLessThanOrEqual(plausibleRange('batting.csv', m).max);
@@ -150,12 +150,12 @@ describe('writeLeagueCsv(league, dir)', () => {
     expect(relievers).toBeGreaterThan(100);
   });
 
-  it('leaves measurements missing (empty, never 0) before their first season and below AA, and fills them later', () => {
+  it('leaves measurements missing (empty, never 0) before their first season and below High, and fills them later', () => {
     const from = league.options.measuredFrom;
     const checks: [string, string, number, boolean][] = [
       ['batting.csv', 'ev_avg_mph', from.battedBall, true],
       ['batting.csv', 'bbe', from.battedBall, true],
-      ['batting.csv', 'sprint_ft_s', from.sprint, true],
+      ['batting.csv', 'run_speed_ft_s', from.sprint, true],
       ['fielding.csv', 'arm_mph', from.arm, true],
       ['fielding.csv', 'pop_2b_s', from.catcherTiming, true],
       ['pitching.csv', 'fb_mph', from.pitchTracking, true],
@@ -198,7 +198,7 @@ describe('writeLeagueCsv(league, dir)', () => {
     const hitters = new Set(rowsOf('batting.csv').map((r) => r['player_id']));
     expect([...hitters].filter((h) => !fielded.has(h)).length).toBeGreaterThan(5);
 
-    const topSeasons = new Set(rowsOf('batting.csv').concat(rowsOf('pitching.csv')).filter((r) => r['level'] === 'MLB').map((r) => `${r['player_id']}|${r['season']}`));
+    const topSeasons = new Set(rowsOf('batting.csv').concat(rowsOf('pitching.csv')).filter((r) => r['level'] === 'Top').map((r) => `${r['player_id']}|${r['season']}`));
     const salaries = rowsOf('contracts.csv').map((r) => {
       expect(topSeasons.has(`${r['player_id']}|${r['season']}`)).toBe(true);
       return count(r, 'salary_usd');

@@ -29,12 +29,12 @@ describe('outcomes.json through openProfileStore(dir).outcomes()', () => {
     const outcomes = store.outcomes();
     const file = computeOutcomes(await readRoster(sim.rosterDir));
     expect(outcomes.lastSeason).toBe(file.last_season);
-    expect(outcomes.topLevel).toBe('MLB');
+    expect(outcomes.topLevel).toBe('Top');
     expect(outcomes.league.size).toBe(file.league.length);
     const [id, season] = file.batting[0] ?? ['', 0];
     const o = outcomes.futureOf(store.playerById.get(id) as number, 'hitter', season - 1, 1);
-    expect(o.reached_mlb).toBe(true);
-    expect(o.first_mlb_season).toBe(season);
+    expect(o.reached_top_level).toBe(true);
+    expect(o.first_top_level_season).toBe(season);
   });
 
   it('asks for a rebuild when the store has no outcomes.json', async () => {
@@ -50,6 +50,6 @@ describe('outcomes.json through openProfileStore(dir).outcomes()', () => {
   it('refuses another format or version, and content of the wrong shape', () => {
     expect(() => decodeOutcomesFile(JSON.stringify({ format: 'kindred-outcomes', version: 99 }), 'x')).toThrow(StoreError);
     expect(() => decodeOutcomesFile('{', 'x')).toThrow(/not valid JSON/);
-    expect(() => decodeOutcomesFile(JSON.stringify({ format: 'kindred-outcomes', version: 1, top_level: 'MLB' }), 'x')).toThrow(/unexpected content/);
+    expect(() => decodeOutcomesFile(JSON.stringify({ format: 'kindred-outcomes', version: 1, top_level: 'Top' }), 'x')).toThrow(/unexpected content/);
   });
 });

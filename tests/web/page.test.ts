@@ -149,14 +149,14 @@ describe('the comps view', () => {
 
   it('applies the filters and k, and exports the table as CSV and the answer as JSON', async () => {
     await page.fill('#opt-k', '5');
-    await page.check('input[name="pool-level"][value="AAA"]');
-    await page.check('input[name="pool-level"][value="MLB"]');
+    await page.check('input[name="pool-level"][value="Elite"]');
+    await page.check('input[name="pool-level"][value="Top"]');
     await page.fill('#opt-age-from', '22');
     await page.fill('#opt-age-to', '30');
     await page.click('#run');
     await page.waitForFunction(() => document.querySelectorAll('#comps-table tbody tr').length === 5);
     const levels = await page.locator('#comps-table tbody tr td:nth-child(4)').allTextContents();
-    for (const l of levels) expect(['AAA', 'MLB']).toContain(l);
+    for (const l of levels) expect(['Elite', 'Top']).toContain(l);
     const ages = (await page.locator('#comps-table tbody tr td:nth-child(6)').allTextContents()).map(Number);
     for (const a of ages) expect(a >= 22 && a <= 30).toBe(true);
 
@@ -170,7 +170,7 @@ describe('the comps view', () => {
     const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
     const exported = JSON.parse(await readFile(await jsonDownload.path(), 'utf8')) as CompsResult;
     expect(exported.comps.length).toBe(5);
-    expect(exported.pool.filters).toEqual({ levels: ['AAA', 'MLB'], age_min: 22, age_max: 30 });
+    expect(exported.pool.filters).toEqual({ levels: ['Elite', 'Top'], age_min: 22, age_max: 30 });
     expect(lines.slice(1).map((l) => l.split(',')[1])).toEqual(exported.comps.map((c) => c.player_id));
   });
 
@@ -210,7 +210,7 @@ describe('the build-a-target view', () => {
     await page.click('#run');
     await page.waitForSelector('#comps-table tbody tr');
     await page.waitForSelector('#map-chart svg');
-    const expected = await api(`/api/comps?want=${encodeURIComponent('k_pct=40g,obp=65g,iso=.180')}&position=SS&pool-level=AAA,MLB&age=22-30`);
+    const expected = await api(`/api/comps?want=${encodeURIComponent('k_pct=40g,obp=65g,iso=.180')}&position=SS&pool-level=Elite,Top&age=22-30`);
     const names = await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents();
     expect(names).toEqual(expected.comps.map((c) => c.name));
     expect(await page.textContent('#summary')).toContain('hand-built SS profile');
@@ -223,7 +223,7 @@ describe('the prospect view', () => {
   it('shows the comps at his level and age, what became of them, and the outcome chart', async () => {
     await openView('prospect');
     const g = store.groups.get('IF');
-    const aa = store.levels.indexOf('AA');
+    const aa = store.levels.indexOf('High');
     const who = uniquePlayer('IF', (i) => g?.level[i] === aa && (g?.age[i] ?? 0) >= 19 && (g?.age[i] ?? 99) <= 22 && (g?.season[i] ?? 0) >= 2018);
     await pick('player', who);
     expect(await page.inputValue('#opt-k')).toBe('25');
@@ -242,7 +242,7 @@ describe('the prospect view', () => {
       return !censored && typeof o === 'object' && o !== null && (('peak_ops_plus' in o && o.peak_ops_plus !== null) || ('peak_fip_minus' in o && o.peak_fip_minus !== null));
     }).length;
     expect(await page.locator('#extra-chart svg .mark-symbol.role-mark path').count()).toBe(peaks);
-    expect(await page.locator('#comps-table thead th').allTextContents()).toContain('reached MLB');
+    expect(await page.locator('#comps-table thead th').allTextContents()).toContain('reached top level');
     await page.screenshot({ path: join(ARTIFACTS, 'prospect.png'), fullPage: true });
   });
 });
@@ -251,8 +251,8 @@ describe('the cheaper comps view', () => {
   it('lists comps under a salary limit with the value frontier chart', async () => {
     await openView('cheaper');
     const g = store.groups.get('IF');
-    const mlb = store.levels.indexOf('MLB');
-    const who = uniquePlayer('IF', (i) => g?.level[i] === mlb && (store.salaries.get(g.player[i] as number)?.get(g.season[i] as number) ?? 0) > 3e6);
+    const top = store.levels.indexOf('Top');
+    const who = uniquePlayer('IF', (i) => g?.level[i] === top && (store.salaries.get(g.player[i] as number)?.get(g.season[i] as number) ?? 0) > 3e6);
     await pick('player', who);
     await page.fill('#opt-max-salary', '2,000,000');
     await page.click('#run');
@@ -274,9 +274,9 @@ describe('the one-to-one view', () => {
   it('compares a candidate with a target: percentile, grades and the closest in the pool', async () => {
     await openView('match');
     const g = store.groups.get('SP');
-    const mlb = store.levels.indexOf('MLB');
-    const a = uniquePlayer('SP', (i) => g?.level[i] === mlb);
-    const b = uniquePlayer('SP', (i) => g?.level[i] === mlb && store.players[g.player[i] as number]?.playerId !== a.id, 3);
+    const top = store.levels.indexOf('Top');
+    const a = uniquePlayer('SP', (i) => g?.level[i] === top);
+    const b = uniquePlayer('SP', (i) => g?.level[i] === top && store.players[g.player[i] as number]?.playerId !== a.id, 3);
     await pick('player', a);
     await pick('other', b);
     await page.click('#run');

@@ -61,7 +61,7 @@ export function demoCommand(io: CliIo): Command {
           'Try next:',
           `  npx kindred comps ${id} --format json`,
           `  npx kindred comps --want "pop_2b_s=1.90,obp=.340" --position C`,
-          `  npx kindred comps ${id} --pool-level MLB --age 25-30 --preset glove`,
+          `  npx kindred comps ${id} --pool-level Top --age 25-30 --preset glove`,
           '  npx kindred dims --position C',
           '',
         ].join('\n'),

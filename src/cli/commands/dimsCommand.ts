@@ -64,7 +64,7 @@ export function dimsCommand(io: CliIo): Command {
     for (const [g, list] of Object.entries(dims)) {
       const t = new Table({
         head: ['Dimension', 'Label', 'Unit', 'Better', 'k table', 'k fitted', 'Meaning'],
-        colWidths: [15, 12, 17, 8, 9, 10, 21],
+        colWidths: [16, 15, 14, 8, 9, 10, 20],
         wordWrap: true,
         style: { head: [], border: [] },
       });
