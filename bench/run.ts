@@ -12,6 +12,7 @@ import { CHECK_ENV, MISSED_AIM_EXIT } from './lib/aim.ts';
 const BENCHES: readonly { name: string; file: string; args: readonly string[]; what: string }[] = [
   { name: 'core', file: 'core.bench.ts', args: ['100000', '1000000'], what: 'build, load, comps latency and recall at 100k and 1M player-seasons' },
   { name: 'quality', file: 'compsQuality.bench.ts', args: ['30000'], what: 'comps quality: plain z-scores against the default weights' },
+  { name: 'quality', file: 'poolQuality.bench.ts', args: ['30000', '4', '30'], what: 'comps quality by pool: the whole group, his level, the default pool rules (position, levels within one, half his playing time), with adjacent positions' },
   { name: 'quality', file: 'shrinkageQuality.bench.ts', args: ['30000', '120'], what: 'comps quality by case (top-level hitters 400+ PA, SP 500+ BF, RP 150+ BF): fixed-table against fitted shrinkage' },
   { name: 'index', file: 'index.bench.ts', args: [], what: 'HNSW against brute force on random vectors' },
   { name: 'embed', file: 'embed.bench.ts', args: [], what: 'autoencoder training time at 100,000 rows' },

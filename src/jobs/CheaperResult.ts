@@ -3,9 +3,13 @@ import type { Comp, PoolEcho, QueryEcho } from '../query/CompsResult.ts';
 
 export interface CheaperComp extends Comp {
   readonly salary_usd: number;
-  /** Likeness per million USD of salary. */
+  /** Likeness per million USD of salary (rewards the minimum salary alone: read value_score instead). */
   readonly likeness_per_million: number;
-  /** On the value frontier: no listed comp ranked above him (more alike) is paid as little or less. */
+  /** 0 to 100: likeness beyond chance times the share of the reference salary saved (src/jobs/valueScore.ts); null without a salary. */
+  readonly value_score: number | null;
+  /** Likeness above the unrelated floor (pool.salary.likeness_floor); only these can be on the frontier. */
+  readonly above_likeness_floor: boolean;
+  /** On the value frontier: above the likeness floor, and no listed comp above the floor ranked above him (more alike) is paid as little or less. */
   readonly frontier: boolean;
 }
 
@@ -25,6 +29,10 @@ export interface CheaperPoolEcho extends PoolEcho {
     readonly without_salary: number;
     /** Distinct players among those without a salary. */
     readonly without_salary_players: number;
+    /** Comps at or below this likeness (two unrelated players, 100 / e) are never on the frontier. */
+    readonly likeness_floor: number;
+    /** The salary the value score measures savings against: the target's, else the limit. */
+    readonly value_reference_usd: number;
   };
 }
 

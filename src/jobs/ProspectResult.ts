@@ -43,12 +43,18 @@ export interface ProspectPoolEcho extends PoolEcho {
   readonly complete_window: number;
   /** Eligible player-seasons whose follow-up is incomplete. */
   readonly censored: number;
+  /** Comps at or below this likeness (two unrelated players, 100 / e) are left out. */
+  readonly likeness_floor?: number;
+  /** Pool player-seasons left out for it. */
+  readonly below_likeness_floor?: number;
 }
 
 export interface ProspectResult {
   readonly query: ProspectQueryEcho;
   readonly pool: ProspectPoolEcho;
   readonly comps: readonly ProspectComp[];
+  /** Cautions about the target, e.g. a player already established at the top level (empty when none). */
+  readonly warnings?: readonly string[];
   readonly outlook: Outlook & {
     /** Present when the store holds a backtest matching these settings (kindred build); else null with `calibration_note`. */
     readonly calibrated?: CalibratedOutlook | null;

@@ -5,7 +5,9 @@ import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { storedGroup } from '../query/storedGroup.ts';
 import type { Target } from '../query/Target.ts';
 import { valueAt } from '../query/valueAt.ts';
-import { round } from '../stats/round.ts';
+import { round, roundOrNull } from '../stats/round.ts';
+import { UNRELATED_LIKENESS } from '../query/likeness.ts';
+import { valueScore } from './valueScore.ts';
 import { likenessPerMillion } from './likenessPerMillion.ts';
 import type { CheaperComp, CheaperResult } from './CheaperResult.ts';
 import { valueFrontier } from './valueFrontier.ts';
@@ -35,9 +37,12 @@ function rowSalary(store: ProfileStore, g: StoredGroup, row: number): number | u
  * Comps who do what the target does for less: the pool is the usual one restricted to player-seasons
  * with a known salary (contracts.csv, one salary per player and season, whatever the level) at or under
  * the limit. Player-seasons without a salary are left out and counted, as are those over the limit.
- * Each comp carries its salary, its likeness per million USD and whether it is on the value frontier
- * among the listed comps (valueFrontier, with the comps' rank as the measure of likeness: no comp ranked
- * above him is paid as little or less).
+ * Each comp carries its salary, its value score (valueScore: likeness beyond chance times the share of
+ * the target's salary saved), its likeness per million USD (kept for old readers; it rewards the
+ * minimum salary) and whether it is on the value frontier among the listed comps above the likeness
+ * floor (UNRELATED_LIKENESS; valueFrontier, with the comps' rank as the measure of likeness: no comp
+ * ranked above him is paid as little or less). The default pool (CHEAPER_REACH, set by the request
+ * layer) is his level and his season with the two before it.
  */
 export function findCheaperComps(store: ProfileStore, target: Target, options: CheaperOptions): CheaperResult {
   const g = storedGroup(store, target.group);
@@ -53,14 +58,21 @@ export function findCheaperComps(store: ProfileStore, target: Target, options: C
 
   // "More alike" is the comps' own order (exact distance, whichever space ranked them): the rounded
   // likeness would tie comps that the ranking tells apart.
-  const order = found.result.comps.map((c) => -c.rank);
+  // The frontier is drawn among the comps above the likeness floor only: a comp no more alike than
+  // chance is no alternative, however cheap.
   const salaries = found.rows.map((row) => rowSalary(store, g, row) ?? NaN);
-  const frontier = valueFrontier(order, salaries);
+  const above = found.result.comps.map((c) => c.likeness > UNRELATED_LIKENESS);
+  const kept = found.result.comps.flatMap((c, i) => (above[i] ? [i] : []));
+  const onFrontier = valueFrontier(kept.map((i) => -(found.result.comps[i]?.rank ?? 0)), kept.map((i) => salaries[i] ?? NaN));
+  const frontier = new Set(kept.filter((_, j) => onFrontier[j] === true));
+  const referenceUsd = targetSalary ?? limitUsd;
   const comps: CheaperComp[] = found.result.comps.map((c, i) => ({
     ...c,
     salary_usd: salaries[i] ?? NaN,
     likeness_per_million: round(likenessPerMillion(c.likeness, salaries[i] ?? NaN), 2),
-    frontier: frontier[i] === true,
+    value_score: roundOrNull(valueScore(c.likeness, salaries[i] ?? NaN, referenceUsd), 1),
+    above_likeness_floor: above[i] === true,
+    frontier: frontier.has(i),
   }));
   return {
     query: found.result.query,
@@ -73,6 +85,8 @@ export function findCheaperComps(store: ProfileStore, target: Target, options: C
         target_salary_usd: targetSalary ?? null,
         under_limit: found.result.pool.eligible,
         ...counts,
+        likeness_floor: round(UNRELATED_LIKENESS, 1),
+        value_reference_usd: Math.round(referenceUsd),
       },
     },
     comps,

@@ -4,7 +4,7 @@ import { isPitcherGroup } from '../profiles/positionGroup.ts';
 import { describeComp } from '../query/describeComp.ts';
 import { echoPool, echoQuery } from '../query/echoQuery.ts';
 import { DEFAULT_COMPS_OPTIONS, type CompsOptions } from '../query/findComps.ts';
-import { likeness } from '../query/likeness.ts';
+import { likeness, UNRELATED_LIKENESS } from '../query/likeness.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
 import { prepareQuery, type PreparedQuery } from '../query/prepareQuery.ts';
 import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
@@ -266,7 +266,11 @@ export function findProspectComps(store: ProfileStore, outcomes: Outcomes, targe
   const steps = targetSteps(store, g, target, season, options.path);
   const pool = prospectPool(g, steps, season, age, options.comps.filter, options);
   const q = prepareQuery(store, target, { ...options.comps, filter: pool.filter });
-  const { scored, censoredRows } = scoreProspects(q, pool, steps, horizon, asOf);
+  const all = scoreProspects(q, pool, steps, horizon, asOf);
+  const { censoredRows } = all;
+  // a comp no more alike than two unrelated players tells nothing about the target: left out (counted)
+  const scored = all.scored.filter((s) => likeness(Math.sqrt(s.d2), s.weight) > UNRELATED_LIKENESS);
+  const belowFloor = all.scored.length - scored.length;
   const { used, left } = chooseProspects(g, scored, options.comps);
   const listed = [...used, ...(options.includeCensored ? left : [])].sort(closerFirst(g));
 
@@ -290,8 +294,9 @@ export function findProspectComps(store: ProfileStore, outcomes: Outcomes, targe
         return { season: st.season, level: store.levels[st.level] ?? '', age: Number.isNaN(a) ? null : a };
       }),
     },
-    pool: prospectPoolEcho(q, pool, target, season, asOf, horizon, censoredRows),
+    pool: { ...prospectPoolEcho(q, pool, target, season, asOf, horizon, censoredRows), likeness_floor: round(UNRELATED_LIKENESS, 1), below_likeness_floor: belowFloor },
     comps,
+    warnings: establishedWarning(store, g, target, season),
     outlook: {
       horizon_seasons: horizon,
       as_of_season: asOf,
@@ -302,6 +307,30 @@ export function findProspectComps(store: ProfileStore, outcomes: Outcomes, targe
       baseline,
     },
   };
+}
+
+/** Top-level seasons (the target's included) from which a player counts as established there (project choice). */
+export const ESTABLISHED_TOP_SEASONS = 2;
+
+/**
+ * The warning for a target already established at the top level (at the roster's highest level in his
+ * season and in at least ESTABLISHED_TOP_SEASONS of his seasons up to it): his comps are still
+ * earlier players at his level and age, but "reached the top level" and the outlook answer a question
+ * that is settled for him. A warning rather than a refusal: the comps' next seasons (how long such
+ * players stayed, how they peaked) still say something, and a batch over a whole roster should not stop
+ * at its regulars.
+ */
+function establishedWarning(store: ProfileStore, g: StoredGroup, target: Target, season: number): string[] {
+  const top = store.levels.length - 1;
+  if (target.level !== store.levels[top]) return [];
+  const seasons = new Set<number>();
+  for (let i = 0; i < g.n; i++) if (g.player[i] === target.player && g.level[i] === top && valueAt(g.season, i) <= season) seasons.add(valueAt(g.season, i));
+  if (seasons.size < ESTABLISHED_TOP_SEASONS) return [];
+  const p = store.players[target.player];
+  return [
+    `${p?.name ?? ''} (${p?.playerId ?? ''}) is established at the top level (${store.levels[top] ?? ''}, ${seasons.size} seasons to ${season}): ` +
+      'the outlook describes earlier players at his level and age, not whether he will get there.',
+  ];
 }
 
 /** The pool echo with the prospect rules and its censoring counts. */

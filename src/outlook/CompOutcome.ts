@@ -12,6 +12,7 @@ interface OutcomeBase {
   readonly censored: boolean;
   /** At least one top-level line (PA or BF) in the window's observed seasons. */
   readonly reached_top_level: boolean;
+  /** His first season with a top-level line, up to the last season seen; may precede the window (he was already there). */
   readonly first_top_level_season: number | null;
   /** Seasons in the window with a top-level line. */
   readonly top_level_seasons: number;

@@ -86,9 +86,11 @@ export class Outcomes {
     let peak = NaN;
     let peakSeason: number | null = null;
     for (const s of list) {
+      // his first top-level season is his first ever (up to what is seen), even before the window: a
+      // comp already at the top level in his comp season did not arrive the season after it
+      if (first === null && s.appeared && s.season <= seen) first = s.season;
       if (s.season < from || s.season > seen || !s.appeared) continue;
       seasons++;
-      if (first === null) first = s.season;
       if (s.sample >= minSample && !Number.isNaN(s.value) && (Number.isNaN(peak) || better(s.value, peak))) {
         peak = s.value;
         peakSeason = s.season;

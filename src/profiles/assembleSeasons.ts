@@ -21,6 +21,8 @@ export interface SeasonMeta {
   readonly age: number | null;
   /** Plate appearances (hitters) or batters faced (pitchers). */
   readonly sample: number;
+  /** Outs recorded (innings pitched in thirds) for a pitcher season; null for a hitter season. */
+  readonly outs: number | null;
   readonly teams: readonly string[];
 }
 
@@ -82,6 +84,7 @@ export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAU
         position: primary?.pos ?? 'DH',
         age: ageOf(b.playerId, b.season),
         sample: b.PA,
+        outs: null,
         teams: b.teams,
       },
       line: { batting: b, fielding: primary },
@@ -103,6 +106,7 @@ export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAU
         position: 2 * p.GS >= p.G ? 'SP' : 'RP',
         age: ageOf(p.playerId, p.season),
         sample: p.BF,
+        outs: p.outs,
         teams: p.teams,
       },
       line: p,

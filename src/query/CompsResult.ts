@@ -35,6 +35,8 @@ export interface Comp {
   /** Playing time of the comp's season: plate appearances (hitters) or batters faced (pitchers). */
   readonly sample: number;
   readonly sample_unit: 'PA' | 'BF';
+  /** Innings pitched in the comp's season, in the trade's thirds notation ("123.1" is 123 1/3); null for hitters. */
+  readonly ip: string | null;
   /** 0 to 100, 100 for an identical profile; 100 * exp(-distance^2 / (2 * W)), W the total weight in play. */
   readonly likeness: number;
   readonly distance: number;
@@ -78,6 +80,19 @@ export interface PoolEcho {
   readonly preset: string;
   /** Share of the total weight each skill family holds (sums to 1), e.g. `{ "discipline": 0.2, ... }`. */
   readonly family_shares: Readonly<Record<string, number>>;
+  /**
+   * The playing-time floor (also `filters.min_sample`) and what it was scaled to: `share` of the target's
+   * PA or BF (of the group's median season for a hand-built profile); null without a floor.
+   */
+  readonly sample_floor: {
+    readonly unit: 'PA' | 'BF';
+    readonly min: number;
+    readonly share: number;
+    readonly target_sample: number;
+    readonly target_sample_from: 'target' | 'group median';
+  } | null;
+  /** The pool in words, e.g. "SS at AA, AAA, top level; seasons of 250 PA or more (half the target's 500)". */
+  readonly summary: string;
 }
 
 export interface CompsResult {

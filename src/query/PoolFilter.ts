@@ -10,6 +10,8 @@ export interface PoolFilter {
   readonly bats?: readonly Bats[];
   readonly throws?: readonly Throws[];
   readonly positions?: readonly Position[];
+  /** Least playing time of a comp season: PA for hitters, BF for pitchers (the group's `sample`). */
+  readonly minSample?: number;
   /**
    * Any further restriction, row by row (earlier seasons only, a known salary under a limit...).
    * Receives the row index in the target's position group. Not echoed in JSON: callers describe it.

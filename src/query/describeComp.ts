@@ -9,6 +9,8 @@ import type { QuerySpace } from './QuerySpace.ts';
 import type { ScoredRow } from './scoreRow.ts';
 import type { Comp } from './CompsResult.ts';
 import { valueAt } from './valueAt.ts';
+import { formatThirds } from '../text/formatThirds.ts';
+import type { StoredGroup } from '../store/ProfileStore.ts';
 
 export interface DescribeSettings {
   /** The learned space the row was ranked in (null: the input space). */
@@ -46,6 +48,7 @@ export function describeComp(q: PreparedQuery, s: ScoredRow, rank: number, setti
     age: Number.isNaN(age) ? null : age,
     sample: valueAt(g.sample, s.row),
     sample_unit: g.group === 'SP' || g.group === 'RP' ? 'BF' : 'PA',
+    ip: inningsOf(g, s.row),
     likeness: round(likeness(distance, settings.likenessWeight ?? (emb ? emb.pairScale : q.targetWeight)), 1),
     distance: round(distance, 4),
     coverage: round(s.coverage, 3),
@@ -61,4 +64,10 @@ export function describeComp(q: PreparedQuery, s: ScoredRow, rank: number, setti
     attribution_error: attribution.standardError.reduce((a, b) => Math.max(a, b), 0),
   };
   return attributed;
+}
+
+/** A row's innings pitched in thirds notation, or null for a hitter row. */
+export function inningsOf(g: StoredGroup, row: number): string | null {
+  const outs = g.outs[row] ?? NaN;
+  return Number.isNaN(outs) ? null : formatThirds(outs);
 }

@@ -3,6 +3,7 @@ import { familyTotals } from '../profiles/familyWeights.ts';
 import type { PreparedQuery } from './prepareQuery.ts';
 import { round } from '../stats/round.ts';
 import type { PoolEcho, QueryEcho } from './CompsResult.ts';
+import { describePool } from './describePool.ts';
 
 /** The query as the JSON echoes it: the target, its profile in natural units, k, method and space. */
 export function echoQuery(q: PreparedQuery, k: number, method: QueryEcho['method'], space: QueryEcho['space']): QueryEcho {
@@ -38,6 +39,8 @@ export function echoPool(q: PreparedQuery): PoolEcho {
     weights: Object.fromEntries(q.group.dims.map((d, j) => [d.name, round(q.weights[j] ?? NaN, 4)])),
     preset: q.preset,
     family_shares: Object.fromEntries([...familyTotals(q.group.dims.map((d) => d.family), q.weights)].map(([f, s]) => [f, round(s, 3)])),
+    sample_floor: q.sampleFloor,
+    summary: describePool(q.filter, q.sampleFloor, q.group.group),
   };
 }
 
@@ -51,5 +54,6 @@ function filterEcho(f: PoolFilter): Record<string, string | number | readonly st
   if (f.bats) out.bats = f.bats;
   if (f.throws) out.throws = f.throws;
   if (f.positions) out.positions = f.positions;
+  if (f.minSample !== undefined) out.min_sample = f.minSample;
   return out;
 }

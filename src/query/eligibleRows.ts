@@ -42,6 +42,7 @@ export function eligibleRows(
     if (filter.ageMin !== undefined && !(age >= filter.ageMin)) continue;
     if (filter.ageMax !== undefined && !(age <= filter.ageMax)) continue;
     if (posSet && !posSet.has(g.position[i] ?? 'DH')) continue;
+    if (filter.minSample !== undefined && !((g.sample[i] ?? 0) >= filter.minSample)) continue;
     if (batsSet || throwsSet) {
       const pl = store.players[p];
       if (batsSet && !(pl?.bats && batsSet.has(pl.bats))) continue;
@@ -64,6 +65,7 @@ function isEmptyFilter(f: PoolFilter): boolean {
     f.bats === undefined &&
     f.throws === undefined &&
     f.positions === undefined &&
+    f.minSample === undefined &&
     f.include === undefined
   );
 }

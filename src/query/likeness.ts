@@ -8,6 +8,12 @@
  * likeness(0, 5); // => 100
  * likeness(Math.sqrt(10), 5); // => 36.79 (100 / e)
  */
+/**
+ * The likeness of two unrelated players, 100 / e (about 36.8; see likeness): a comp at or below it
+ * resembles the target no more than a player drawn at random does.
+ */
+export const UNRELATED_LIKENESS = 100 / Math.E;
+
 export function likeness(distance: number, totalWeight: number): number {
   if (!(totalWeight > 0) || !Number.isFinite(distance)) return 0;
   return 100 * Math.exp(-(distance * distance) / (2 * totalWeight));

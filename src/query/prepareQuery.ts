@@ -2,6 +2,7 @@ import { QueryError } from '../errors/KindredError.ts';
 import { eligibleRows } from './eligibleRows.ts';
 import { targetWeight } from './missingAwareDistance.ts';
 import type { PoolFilter } from './PoolFilter.ts';
+import type { SampleFloor } from './poolDefaults.ts';
 import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { storedGroup } from './storedGroup.ts';
 import type { Target } from './Target.ts';
@@ -14,6 +15,8 @@ export interface QuerySettings {
   readonly weightOverrides: ReadonlyMap<string, number>;
   /** `redundancy` (default) weighs down dimensions that repeat a skill; `plain` gives every dimension 1. */
   readonly weighting: 'redundancy' | 'plain';
+  /** How the filter's playing-time floor was scaled (poolRules), for the echo; absent without a floor from the rules. */
+  readonly sampleFloor?: SampleFloor;
 }
 
 /** A query made ready: its group, the weights in play, the target's weight and the pool. */
@@ -34,6 +37,7 @@ export interface PreparedQuery {
   readonly eligible: number;
   /** The weighting the store's indexes were built with (redundancy, balanced, no overrides). */
   readonly defaultMetric: boolean;
+  readonly sampleFloor: SampleFloor | null;
 }
 
 /**
@@ -61,5 +65,8 @@ export function prepareQuery(store: ProfileStore, target: Target, settings: Quer
     throw new QueryError('kindred.query.badTarget', 'the target has no value on any weighted dimension', { group: target.group });
   }
   const defaultMetric = settings.weighting === 'redundancy' && settings.preset === 'balanced' && settings.weightOverrides.size === 0;
-  return { store, group, target, filter: settings.filter, weights, preset: settings.preset, targetWeight: wT, mask, eligible: count, defaultMetric };
+  return {
+    store, group, target, filter: settings.filter, weights, preset: settings.preset, targetWeight: wT, mask, eligible: count, defaultMetric,
+    sampleFloor: settings.sampleFloor ?? null,
+  };
 }

@@ -2,6 +2,7 @@ import Table from 'cli-table3';
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { CompsResult } from '../query/CompsResult.ts';
 import { formatValue } from './formatValue.ts';
+import { playingTimeCells, playingTimeHeads } from './playingTime.ts';
 
 const PLAIN = {
   top: '', 'top-mid': '', 'top-left': '', 'top-right': '',
@@ -15,7 +16,7 @@ export function describeTarget(result: CompsResult): string {
   const q = result.query;
   const who = q.kind === 'player' ? `${q.name} (${q.player_id}), ${q.season} ${q.level} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
   const pool = `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} player-seasons in the pool`;
-  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space\n${describeShares(result)}`;
+  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space\nPool: ${result.pool.summary}\n${describeShares(result)}`;
 }
 
 /** The weight of each skill family in one line, e.g. `Weights (balanced): discipline 20%, contact 15%, ...`. */
@@ -34,12 +35,13 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     lines.push('No comps: the pool is empty after the filters, or no player shares enough of the profile (see --min-coverage).');
     return lines.join('\n') + '\n';
   }
+  const time = playingTimeHeads(result.comps[0]?.sample_unit ?? 'PA');
   const list = new Table({
-    head: ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', result.comps[0]?.sample_unit ?? 'PA', 'Like', 'Cov', 'Alike / apart'],
+    head: ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', ...time, 'Like', 'Cov', 'Alike / apart'],
     chars: PLAIN,
     style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
-    colAligns: ['right', 'left', 'left', 'left', 'left', 'right', 'right', 'right', 'right', 'left'],
-    colWidths: [3, 20, 7, 6, 4, 4, 5, 5, 5, 31],
+    colAligns: ['right', 'left', 'left', 'left', 'left', 'right', ...time.map(() => 'right' as const), 'right', 'right', 'left'],
+    colWidths: [3, 20, 7, 6, 4, 4, ...time.map(() => 6), 5, 5, time.length > 1 ? 24 : 30],
     wordWrap: true,
   });
   const byName = new Map(dims.map((d) => [d.name, d]));
@@ -52,7 +54,7 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
       c.level,
       c.position,
       c.age === null ? '-' : String(c.age),
-      String(c.sample),
+      ...playingTimeCells(c),
       c.likeness.toFixed(0),
       `${Math.round(c.coverage * 100)}%`,
       `= ${labels(c.alike)}\n\u2260 ${labels(c.apart)}`,

@@ -9,7 +9,8 @@ export function matchTable(result: MatchResult, dims: readonly DimensionInfo[]):
   const c = result.candidate;
   const lines: string[] = [];
   const target = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''} ${q.position}` : `hand-built ${q.position} profile`;
-  lines.push(`${c.name} (${c.player_id}), ${c.season} ${c.level} ${c.position}${c.age !== null ? `, age ${c.age}` : ''}`);
+  const time = c.ip === null ? `${c.sample} ${c.sample_unit}` : `${c.sample} ${c.sample_unit}, ${c.ip} IP`;
+  lines.push(`${c.name} (${c.player_id}), ${c.season} ${c.level} ${c.position}${c.age !== null ? `, age ${c.age}` : ''}; ${time}`);
   lines.push(`against ${target}`);
   lines.push('');
   lines.push(`Likeness ${c.likeness.toFixed(0)} (100 identical, about 37 unrelated); ${Math.round(c.coverage * 100)}% of the target profile compared`);

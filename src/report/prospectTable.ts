@@ -2,6 +2,7 @@ import type { ProspectResult } from '../jobs/ProspectResult.ts';
 import type { QuantileSummary } from '../outlook/Outlook.ts';
 import { peakSummaryOf } from '../outlook/summariseOutlook.ts';
 import { plainTable } from './plainTable.ts';
+import { playingTimeCells, playingTimeHeads } from './playingTime.ts';
 
 const pct = (x: number | null): string => (x === null ? '-' : `${Math.round(x * 100)}%`);
 const num = (x: number | null, digits = 0): string => (x === null ? '-' : x.toFixed(digits));
@@ -39,19 +40,22 @@ export function prospectTable(result: ProspectResult): string {
   const peakLabel = hitter ? 'Peak OPS+' : 'Best FIP-';
   const lines: string[] = [];
   lines.push(`Prospect comps for ${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}`);
+  for (const w of result.warnings ?? []) lines.push(`Note: ${w}`);
   if (q.path_seasons > 1) lines.push(`Path matched: ${q.path.map((s) => `${s.season} ${s.level}${s.age !== null ? ` (${s.age})` : ''}`).reverse().join(' -> ')}`);
   lines.push(
     `Pool: ${result.pool.eligible.toLocaleString('en-US')} ${q.group} player-seasons at ${r.level}, ages ${r.age_min}-${r.age_max}, before ${r.seasons_before}` +
       ` (${result.pool.complete_window.toLocaleString('en-US')} with ${o.horizon_seasons} seasons of follow-up, ${result.pool.censored.toLocaleString('en-US')} censored)`,
   );
+  lines.push(`Pool rules: ${result.pool.summary}`);
   lines.push('');
   if (result.comps.length === 0) {
     lines.push('No comps: nobody earlier at this level and age shares enough of the profile (see --min-coverage, --path).');
   } else {
+    const time = playingTimeHeads(result.comps[0]?.sample_unit ?? 'PA');
     const t = plainTable(
-      ['#', 'Player', 'Season', 'Lvl', 'Age', 'Like', 'First top', 'Top yrs', peakLabel],
-      ['right', 'left', 'left', 'left', 'right', 'right', 'right', 'right', 'right'],
-      [4, 33, 7, 6, 4, 5, 10, 8, 10],
+      ['#', 'Player', 'Season', 'Lvl', 'Age', ...time, 'Like', 'Cov', 'First top', 'Top yrs', peakLabel],
+      ['right', 'left', 'left', 'left', 'right', ...time.map(() => 'right' as const), 'right', 'right', 'right', 'right', 'right'],
+      [4, time.length > 1 ? 16 : 22, 7, 6, 4, ...time.map(() => 6), 5, 5, 10, 8, 10],
     );
     for (const c of result.comps) {
       const peak = c.outcome.kind === 'hitter' ? c.outcome.peak_ops_plus : c.outcome.peak_fip_minus;
@@ -61,7 +65,9 @@ export function prospectTable(result: ProspectResult): string {
         String(c.season),
         c.level,
         c.age === null ? '-' : String(c.age),
+        ...playingTimeCells(c),
         c.likeness.toFixed(0),
+        `${Math.round(c.coverage * 100)}%`,
         c.outcome.first_top_level_season === null ? '-' : String(c.outcome.first_top_level_season),
         String(c.outcome.top_level_seasons),
         num(peak),

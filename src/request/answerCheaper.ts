@@ -4,9 +4,10 @@ import type { CheaperResult } from '../jobs/CheaperResult.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
+import type { Target } from '../query/Target.ts';
 import { targetFrom } from './targetFrom.ts';
 
-export function cheaperOptionsFrom(req: JobRequest, store: ProfileStore): CheaperOptions {
+export function cheaperOptionsFrom(req: JobRequest, store: ProfileStore, target: Target): CheaperOptions {
   const maxSalary = req.get('maxSalary');
   const maxShare = req.get('maxShare');
   if (maxSalary !== undefined && maxShare !== undefined) {
@@ -14,11 +15,11 @@ export function cheaperOptionsFrom(req: JobRequest, store: ProfileStore): Cheape
   }
   const limit: SalaryLimit =
     maxSalary !== undefined ? { kind: 'max-salary', usd: maxSalary } : maxShare !== undefined ? { kind: 'max-share', share: maxShare } : DEFAULT_SALARY_LIMIT;
-  return { comps: compsOptionsFrom(req, store), limit };
+  return { comps: compsOptionsFrom(req, store, target), limit };
 }
 
 /** The cheaper job: comps with a known salary under the limit, the value frontier marked. */
 export function answerCheaper(store: ProfileStore, req: JobRequest): CheaperResult {
-  const options = cheaperOptionsFrom(req, store);
-  return findCheaperComps(store, targetFrom(store, req), options);
+  const target = targetFrom(store, req);
+  return findCheaperComps(store, target, cheaperOptionsFrom(req, store, target));
 }

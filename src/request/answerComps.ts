@@ -7,6 +7,6 @@ import { targetFrom } from './targetFrom.ts';
 
 /** The comps job: ranked comps for the request's target in its pool. */
 export function answerComps(store: ProfileStore, req: JobRequest): CompsResult {
-  const options = compsOptionsFrom(req, store);
-  return findComps(store, targetFrom(store, req), options);
+  const target = targetFrom(store, req);
+  return findComps(store, target, compsOptionsFrom(req, store, target));
 }

@@ -5,22 +5,23 @@ import type { ProfileStore } from '../store/ProfileStore.ts';
 import { resolvePlayer } from '../query/resolvePlayer.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
+import type { Target } from '../query/Target.ts';
 import { targetFrom } from './targetFrom.ts';
 
 /** The match options of a request: the pool and weighting, and the candidate's season and level if given. */
-export function matchOptionsFrom(req: JobRequest, store: ProfileStore): MatchOptions {
+export function matchOptionsFrom(req: JobRequest, store: ProfileStore, target: Target): MatchOptions {
   const season = req.get('seasonB');
   const level = req.get('levelB');
   if (level !== undefined && !store.levels.includes(level)) {
     throw new ParameterError('level-b', `unknown level "${level}"; the store's levels: ${store.levels.join(', ')}`, { context: { value: level } });
   }
-  return { comps: compsOptionsFrom(req, store), candidate: { ...(season !== undefined ? { season } : {}), ...(level !== undefined ? { level } : {}) } };
+  return { comps: compsOptionsFrom(req, store, target), candidate: { ...(season !== undefined ? { season } : {}), ...(level !== undefined ? { level } : {}) } };
 }
 
 /** The match job: one candidate against the target, likeness, percentile in the pool and every dimension. */
 export function answerMatch(store: ProfileStore, req: JobRequest): MatchResult {
-  const options = matchOptionsFrom(req, store);
   const target = targetFrom(store, req);
+  const options = matchOptionsFrom(req, store, target);
   const candidate = req.get('candidate');
   if (candidate === undefined) {
     throw new ParameterError('candidate', 'name the candidate to compare with the target (an id or a name)', { code: 'kindred.usage.missingArgument', prefixed: false });

@@ -4,12 +4,13 @@ import type { ProspectResult } from '../jobs/ProspectResult.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
+import type { Target } from '../query/Target.ts';
 import { targetFrom } from './targetFrom.ts';
 import { calibrateOutlook } from '../outlook/calibrateOutlook.ts';
 import type { BacktestFile } from '../outlook/backtestFile.ts';
 
-export function prospectOptionsFrom(req: JobRequest, store: ProfileStore): ProspectOptions {
-  return { comps: compsOptionsFrom(req, store), horizon: req.need('horizon'), path: req.need('path'), includeCensored: req.need('includeCensored') };
+export function prospectOptionsFrom(req: JobRequest, store: ProfileStore, target: Target): ProspectOptions {
+  return { comps: compsOptionsFrom(req, store, target), horizon: req.need('horizon'), path: req.need('path'), includeCensored: req.need('includeCensored') };
 }
 
 /** What a prospect answer is calibrated with: the store's backtest, or why there is none. */
@@ -20,7 +21,7 @@ export type StoredBacktest = { readonly file: BacktestFile | null; readonly reas
  * calibrated on the roster's own history when the store holds a matching backtest (calibrateOutlook).
  */
 export function answerProspect(store: ProfileStore, outcomes: Outcomes, req: JobRequest, backtest: StoredBacktest): ProspectResult {
-  const options = prospectOptionsFrom(req, store);
   const target = targetFrom(store, req);
+  const options = prospectOptionsFrom(req, store, target);
   return calibrateOutlook(store, outcomes, target, findProspectComps(store, outcomes, target, options), options, backtest);
 }

@@ -24,6 +24,8 @@ export interface StoreInfo {
   readonly seasons: { readonly from: number | null; readonly to: number | null };
   readonly groups: Readonly<Partial<Record<PositionGroup, { readonly n: number; readonly dims: readonly string[] }>>>;
   readonly presets: readonly string[];
+  /** Each job's least coverage by default (the request table's defaults), so that the page shows, and sends, what the server would use. */
+  readonly min_coverage: Readonly<Record<'comps' | 'prospect' | 'cheaper' | 'match', number>>;
 }
 
 export interface PlayerSeason {

@@ -4,34 +4,59 @@ import { dimensionSuggestions, findDimension, suggestionHint, type NamedDimensio
 import type { PoolFilter } from '../query/PoolFilter.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { JobRequest } from './JobRequest.ts';
+import { poolRules, type PoolRules } from '../query/poolDefaults.ts';
+import { storedGroup } from '../query/storedGroup.ts';
+import type { Target } from '../query/Target.ts';
+import { checkPoolNotEmpty } from './checkPoolNotEmpty.ts';
 
 /**
- * The pool filter and weighting of a comps-like request, checked against the store: pool levels must
- * be the store's, weights must name dimensions (by name or label; a dimension given twice, say by
- * both, is refused), and k is capped at the largest position group (no pool holds more comps).
+ * The pool filter and weighting of a comps-like request for one target, checked against the store:
+ * pool levels must be the store's, weights must name dimensions (by name or label; a dimension given
+ * twice, say by both, is refused), and k is capped at the largest position group (no pool holds more
+ * comps). Except for prospect comps (whose pool findProspectComps sets), the pool starts from the target's default rules (poolRules: his position, levels within
+ * {level-span} of his, at least {sample-floor} of his playing time, with {recent} his latest seasons);
+ * an explicit {pool-position}, {pool-level} or {pool-season} replaces the rule of its kind. A pool that
+ * the filters leave empty is a usage error naming the filter that emptied it (checkPoolNotEmpty).
  */
-export function compsOptionsFrom(req: JobRequest, store: ProfileStore): CompsOptions {
-  for (const level of req.get('poolLevel') ?? []) {
-    if (!store.levels.includes(level)) {
-      throw new ParameterError('pool-level', `unknown level "${level}"; the store's levels: ${store.levels.join(', ')}`, { context: { value: level } });
-    }
-  }
+export function compsOptionsFrom(req: JobRequest, store: ProfileStore, target: Target): CompsOptions {
+  checkAgainstStore(req, store);
   const poolSeason = req.get('poolSeason');
   const age = req.get('age');
   const bats = req.get('bats');
   const throws = req.get('throws');
   const positions = req.get('poolPosition');
   const poolLevel = req.get('poolLevel');
+  const g = storedGroup(store, target.group);
+  // prospect comps keep their own pool (his level, his age, earlier seasons: findProspectComps), the
+  // one the store's backtest calibrated the outlook on
+  const rules: PoolRules =
+    req.job === 'prospect'
+      ? {}
+      : poolRules(store, g, target, {
+          adjacent: req.need('adjacent'),
+          levelSpan: req.get('levelSpan') ?? Infinity,
+          sampleShare: req.need('sampleFloor'),
+          recentSeasons: req.get('recent') ?? Infinity,
+        });
+  const seasons = poolSeason ? { from: poolSeason.from, to: poolSeason.to } : { from: rules.seasonFrom, to: rules.seasonTo };
+  const levels = poolLevel ?? rules.levels;
+  const pos = positions ?? rules.positions;
   const filter: PoolFilter = {
-    ...(poolLevel ? { levels: poolLevel } : {}),
-    ...(poolSeason?.from !== undefined ? { seasonFrom: poolSeason.from } : {}),
-    ...(poolSeason?.to !== undefined ? { seasonTo: poolSeason.to } : {}),
+    ...(levels ? { levels } : {}),
+    ...(seasons.from !== undefined ? { seasonFrom: seasons.from } : {}),
+    ...(seasons.to !== undefined ? { seasonTo: seasons.to } : {}),
     ...(age?.min !== undefined ? { ageMin: age.min } : {}),
     ...(age?.max !== undefined ? { ageMax: age.max } : {}),
     ...(bats ? { bats } : {}),
     ...(throws ? { throws } : {}),
-    ...(positions ? { positions } : {}),
+    ...(pos ? { positions: pos } : {}),
+    ...(rules.minSample !== undefined ? { minSample: rules.minSample } : {}),
   };
+  checkPoolNotEmpty(store, g, target, filter, {
+    levels: poolLevel ? 'pool-level' : 'level-span',
+    seasons: poolSeason ? 'pool-season' : 'recent',
+    positions: positions ? 'pool-position' : 'adjacent',
+  });
   let largest = 1;
   for (const g of store.groups.values()) largest = Math.max(largest, g.n);
   return {
@@ -43,7 +68,21 @@ export function compsOptionsFrom(req: JobRequest, store: ProfileStore): CompsOpt
     weightOverrides: weightsByName(store, req.get('weights') ?? new Map()),
     weighting: req.need('weighting'),
     minCoverage: req.need('minCoverage'),
+    ...(rules.sampleFloor ? { sampleFloor: rules.sampleFloor } : {}),
   };
+}
+
+/**
+ * The request's pool levels and weights checked against the store (what needs no target), so that a
+ * misspelt option is named before the target is looked up.
+ */
+export function checkAgainstStore(req: JobRequest, store: ProfileStore): void {
+  for (const level of req.get('poolLevel') ?? []) {
+    if (!store.levels.includes(level)) {
+      throw new ParameterError('pool-level', `unknown level "${level}"; the store's levels: ${store.levels.join(', ')}`, { context: { value: level } });
+    }
+  }
+  weightsByName(store, req.get('weights') ?? new Map());
 }
 
 /** Weights keyed by what was typed (a name or a label) turned into weights by dimension name. */

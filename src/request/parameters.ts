@@ -1,6 +1,7 @@
 import type { Bats, Position, Throws } from '../ingest/Roster.ts';
 import { DEFAULT_PROSPECT_OPTIONS } from '../jobs/findProspectComps.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../query/findComps.ts';
+import { CHEAPER_REACH, DEFAULT_REACH } from '../query/poolDefaults.ts';
 import { isWeightPreset, WEIGHT_PRESETS, type WeightPreset } from '../query/weightPresets.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
 import { BadValue } from './BadValue.ts';
@@ -31,6 +32,10 @@ export interface RequestValues {
   bats: Bats[];
   throws: Throws[];
   poolPosition: Position[];
+  adjacent: boolean;
+  levelSpan: number;
+  sampleFloor: number;
+  recent: number;
   k: number;
   preset: WeightPreset;
   weights: Map<string, number>;
@@ -116,7 +121,7 @@ export const PARAMETERS: { readonly [K in ParameterKey]: Parameter<RequestValues
     name: 'batch', value: 'file', help: 'CSV of targets (player_id, season, level): one JSON line per target (CSV rows with {format} csv)', parse: v.text, jobs: TARGET_JOBS, only: 'cli',
     helpFor: { match: 'CSV of candidates (player_id, season, level) against the one target: one JSON line each (CSV rows with {format} csv)' },
   },
-  seasonB: { name: 'season-b', value: 'year', help: 'the candidate season (default: his closest to the target season)', parse: v.season, jobs: ['match'] },
+  seasonB: { name: 'season-b', value: 'year', help: 'the candidate season (default: his season most alike the target)', parse: v.season, jobs: ['match'] },
   levelB: { name: 'level-b', value: 'level', help: 'the candidate level (default: his highest that season)', parse: v.text, jobs: ['match'] },
   horizon: { name: 'horizon', value: 'n', help: 'seasons of follow-up after each comp season', parse: v.positiveInt, default: DEFAULT_PROSPECT_OPTIONS.horizon, jobs: ['prospect'] },
   path: { name: 'path', help: 'match his last N seasons, each aligned by age, at the same levels', value: 'n', parse: v.positiveInt, default: DEFAULT_PROSPECT_OPTIONS.path, jobs: ['prospect'] },
@@ -130,7 +135,22 @@ export const PARAMETERS: { readonly [K in ParameterKey]: Parameter<RequestValues
   age: { name: 'age', value: 'range', help: 'comps only at these ages (June 30), e.g. 21-24', parse: v.ageRange, jobs: TARGET_JOBS },
   bats: { name: 'bats', value: 'hands', help: 'comps only batting L, R or S (comma list)', parse: v.bats, jobs: TARGET_JOBS },
   throws: { name: 'throws', value: 'hands', help: 'comps only throwing L or R (comma list)', parse: v.throws, jobs: TARGET_JOBS },
-  poolPosition: { name: 'pool-position', value: 'positions', help: 'comps only at these positions, e.g. SS,2B', parse: v.positions, jobs: TARGET_JOBS },
+  poolPosition: { name: 'pool-position', value: 'positions', help: 'comps only at these positions, e.g. SS,2B (default: the target\u2019s own)', parse: v.positions, jobs: TARGET_JOBS },
+  adjacent: {
+    name: 'adjacent', help: 'also comps at the positions next to the target\u2019s (SS: 2B and 3B; see docs/jobs.md)', parse: v.flag, default: DEFAULT_REACH.adjacent, jobs: ['comps', 'cheaper', 'match'],
+  },
+  levelSpan: {
+    name: 'level-span', value: 'n', help: 'comps from levels within n of the target\u2019s (0: his own; all: any level); {pool-level} replaces it', parse: v.reach,
+    default: DEFAULT_REACH.levelSpan, defaultFor: { cheaper: CHEAPER_REACH.levelSpan }, jobs: ['comps', 'cheaper', 'match'],
+  },
+  sampleFloor: {
+    name: 'sample-floor', value: 'share', help: 'least playing time of a comp (PA or BF) as a share of the target\u2019s (0: none)', parse: v.fraction,
+    default: DEFAULT_REACH.sampleShare, jobs: ['comps', 'cheaper', 'match'],
+  },
+  recent: {
+    name: 'recent', value: 'n', help: 'comps only from the target\u2019s season and the n - 1 before it (all: any season); {pool-season} replaces it', parse: v.reach,
+    defaultFor: { cheaper: CHEAPER_REACH.recentSeasons }, jobs: ['comps', 'cheaper', 'match'],
+  },
   k: {
     name: 'k', value: 'n', help: `number of comps (at most ${v.MAX_K})`, parse: v.wholeUpTo(v.MAX_K), default: DEFAULT_COMPS_OPTIONS.k,
     defaultFor: { prospect: DEFAULT_PROSPECT_OPTIONS.comps.k }, jobs: TARGET_JOBS,

@@ -7,9 +7,11 @@ import { selectTargetRow } from '../query/selectTargetRow.ts';
 import type { Target } from '../query/Target.ts';
 import { POSITIONS } from '../profiles/positionGroup.ts';
 import type { JobRequest } from './JobRequest.ts';
+import { checkAgainstStore } from './compsOptionsFrom.ts';
 
 /** The target of a request: a player (id or name, with season, level and position) or a want profile. */
 export function targetFrom(store: ProfileStore, req: JobRequest): Target {
+  checkAgainstStore(req, store);
   const want = req.get('want');
   const player = req.get('player');
   const season = req.get('season');

@@ -88,6 +88,15 @@ export function throws(value: string): Throws[] {
   });
 }
 
+/** A whole number of 0 or more, or `all` (Infinity): how far a pool reaches. */
+export function reach(value: string): number {
+  const t = value.trim().toLowerCase();
+  if (t === 'all') return Infinity;
+  const n = Number(t);
+  if (!/^\d+$/.test(t) || !Number.isSafeInteger(n)) throw new BadValue(`expected a whole number of 0 or more, or all, got "${value}"`);
+  return n;
+}
+
 export function fraction(value: string): number {
   const n = Number(value);
   if (value.trim() === '' || !Number.isFinite(n) || n < 0 || n > 1) throw new BadValue(`expected a number from 0 to 1, got "${value}"`);

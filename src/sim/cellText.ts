@@ -7,7 +7,7 @@
  * cellText(league, league.pitching, 0, league.pitching.columnIndex('IP')); // => e.g. "112.1"
  */
 import type { ColumnTable } from './ColumnTable.ts';
-import { formatThirds } from './formatThirds.ts';
+import { formatThirds } from '../text/formatThirds.ts';
 import { SIM_POSITIONS } from './simPositions.ts';
 import type { SimLeague } from './simTypes.ts';
 

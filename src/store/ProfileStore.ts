@@ -42,6 +42,8 @@ export interface StoredGroup {
   /** NaN without a birth date. */
   readonly age: Float64Array;
   readonly sample: Int32Array;
+  /** Outs recorded (innings pitched in thirds) per row; NaN for hitter rows. */
+  readonly outs: Float64Array;
   readonly teams: readonly string[];
   readonly raw: Float32Array;
   readonly z: Float32Array;

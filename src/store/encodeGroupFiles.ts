@@ -49,6 +49,7 @@ export function encodeGroupFiles(
       position: g.meta.map((m) => m.position),
       age: g.meta.map((m) => m.age),
       sample: g.meta.map((m) => m.sample),
+      outs: g.meta.map((m) => m.outs),
       teams: g.meta.map((m) => m.teams.join('/')),
     },
     strata,

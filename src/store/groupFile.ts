@@ -37,6 +37,8 @@ export const groupFileSchema = z.strictObject({
     position: z.array(z.enum(['C', '1B', '2B', '3B', 'SS', 'LF', 'CF', 'RF', 'DH', 'SP', 'RP'])),
     age: z.array(z.number().int().nullable()),
     sample: z.array(z.number().int().nonnegative()),
+    /** Outs recorded (innings pitched in thirds) per pitcher row; null for hitter rows. */
+    outs: z.array(z.number().int().nonnegative().nullable()),
     teams: z.array(z.string()),
   }),
   /** Per dimension: [stratum key, mean, sd, n, first season, last season]. */

@@ -35,7 +35,7 @@ export async function readGroup(
   if (badLevel >= 0) throw bad(`row ${badLevel} names level ${gf.rows.level[badLevel]} (the store has ${refs.levels})`);
   const raw = bytesToFloat32(await store.readBytes(names.raw));
   const z = bytesToFloat32(await store.readBytes(names.z));
-  const lengths = [gf.rows.player, gf.rows.season, gf.rows.level, gf.rows.position, gf.rows.age, gf.rows.sample, gf.rows.teams].map((a) => a.length);
+  const lengths = [gf.rows.player, gf.rows.season, gf.rows.level, gf.rows.position, gf.rows.age, gf.rows.sample, gf.rows.outs, gf.rows.teams].map((a) => a.length);
   if (raw.length !== gf.n * d || z.length !== gf.n * d || lengths.some((l) => l !== gf.n) || gf.redundancy.length !== d || gf.reliability.length !== d) {
     throw bad(`sizes do not match (${gf.n} rows x ${d} dimensions)`);
   }
@@ -81,6 +81,7 @@ export async function readGroup(
     position: gf.rows.position,
     age: Float64Array.from(gf.rows.age, (a) => (a === null ? NaN : a)),
     sample: Int32Array.from(gf.rows.sample),
+    outs: Float64Array.from(gf.rows.outs, (o) => (o === null ? NaN : o)),
     teams: gf.rows.teams,
     raw,
     z,

@@ -3,10 +3,10 @@ import { h } from './dom.ts';
 
 export interface FiltersForm {
   readonly element: HTMLElement;
-  /** The pool, weighting and k as API parameters (k always; the others when they differ from the defaults). */
+  /** The pool, weighting, k and min coverage as API parameters: every value the form shows is sent (filters left empty are not). */
   params(): URLSearchParams;
-  /** Sets the number of comps (each job has its own default). */
-  setK(k: number): void;
+  /** Sets the number of comps and the least coverage shown (each job has its own defaults). */
+  setDefaults(k: number, minCoverage: number): void;
 }
 
 const checkboxes = (name: string, values: readonly string[]): HTMLElement =>
@@ -69,14 +69,15 @@ export function filtersForm(info: StoreInfo): FiltersForm {
       set('bats', checked('bats').join(','));
       set('throws', checked('throws').join(','));
       set('k', k.value.trim());
-      if (preset.value !== 'balanced') set('preset', preset.value);
+      set('preset', preset.value);
       set('weights', weights.value.trim());
-      if (coverage.value.trim() !== '0.5') set('min-coverage', coverage.value.trim());
+      set('min-coverage', coverage.value.trim());
       if (allSeasons.checked) p.set('all-seasons', 'true');
       return p;
     },
-    setK(value: number): void {
+    setDefaults(value: number, minCoverage: number): void {
       k.value = String(value);
+      coverage.value = String(minCoverage);
     },
   };
 }

@@ -64,10 +64,10 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
   let current: { result: CompsResult; extra: readonly ExtraColumn[]; raw: unknown } | null = null;
 
   const header = (extra: readonly ExtraColumn[]): string[] => [
-    'rank', 'player_id', 'name', 'season', 'level', 'position', 'age', 'sample', 'sample_unit', 'likeness', 'distance', 'coverage', ...extra.map((c) => c.title), 'alike', 'apart',
+    'rank', 'player_id', 'name', 'season', 'level', 'position', 'age', 'sample', 'sample_unit', 'ip', 'likeness', 'distance', 'coverage', ...extra.map((c) => c.title), 'alike', 'apart',
   ];
   const cells = (c: Comp, i: number, extra: readonly ExtraColumn[]): (string | number | null)[] => [
-    c.rank, c.player_id, c.name, c.season, c.level, c.position, c.age, c.sample, c.sample_unit, c.likeness, c.distance, c.coverage, ...extra.map((x) => x.value(c, i)), c.alike.join(' '), c.apart.join(' '),
+    c.rank, c.player_id, c.name, c.season, c.level, c.position, c.age, c.sample, c.sample_unit, c.ip, c.likeness, c.distance, c.coverage, ...extra.map((x) => x.value(c, i)), c.alike.join(' '), c.apart.join(' '),
   ];
 
   csvButton.addEventListener('click', () => {
@@ -114,9 +114,11 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
       summary.replaceChildren(
         options.headline !== undefined ? h('p', {}, h('strong', {}, options.headline)) : h('p', {}, h('strong', {}, `${result.comps.length} comps`), ` for ${who}`),
         h('p', { class: 'meta' }, `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} player-seasons in the pool · searched ${q.method === 'hnsw' ? 'with the index' : 'exactly'}`),
+        h('p', { class: 'meta', id: 'pool-rules' }, `Pool: ${result.pool.summary}`),
         ...(options.note ? [h('p', { class: 'note', id: 'result-note' }, options.note)] : []),
       );
-      const head = h('tr', {}, ...['#', 'Name', 'Season', 'Level', 'Pos', 'Age', result.comps[0]?.sample_unit ?? 'PA', 'Likeness', 'Coverage', ...extra.map((c) => c.title), 'Alike', 'Apart'].map((t) => h('th', { scope: 'col' }, t)));
+      const pitchers = result.comps[0]?.sample_unit === 'BF';
+      const head = h('tr', {}, ...['#', 'Name', 'Season', 'Level', 'Pos', 'Age', ...(pitchers ? ['BF', 'IP'] : ['PA']), 'Likeness', 'Coverage', ...extra.map((c) => c.title), 'Alike', 'Apart'].map((t) => h('th', { scope: 'col' }, t)));
       const label = (name: string): string => dims.find((d) => d.name === name)?.label ?? name;
       const body = result.comps.map((c, i) => {
         const bar = h('span', { class: 'bar' });
@@ -131,6 +133,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
           h('td', {}, c.position),
           h('td', { class: 'num' }, c.age === null ? '—' : String(c.age)),
           h('td', { class: 'num' }, String(c.sample)),
+          ...(pitchers ? [h('td', { class: 'num' }, c.ip ?? '—')] : []),
           h('td', { class: 'num likeness' }, h('span', { class: 'bar-track' }, bar), fmt(c.likeness, 1)),
           h('td', { class: 'num' }, `${Math.round(c.coverage * 100)}%`),
           ...extra.map((x) => {

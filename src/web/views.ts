@@ -32,6 +32,8 @@ export interface ViewDef {
   readonly usesFilters: boolean;
   /** The number of comps the job starts with (the CLI's default for it). */
   readonly defaultK: number;
+  /** The least coverage the form shows (and so sends) for this job: the server's default for it. */
+  readonly minCoverageOf: (info: StoreInfo) => number;
   sections(ctx: ViewContext): HTMLElement[];
   run(ctx: ViewContext): Promise<void>;
 }
@@ -67,6 +69,7 @@ const compsView: ViewDef = {
   idle: 'Choose a player and a season, then Find comps.',
   usesFilters: true,
   defaultK: 10,
+  minCoverageOf: (info) => info.min_coverage.comps,
   sections: (ctx) => [ctx.first.element],
   async run(ctx) {
     needPlayer(ctx.first);
@@ -83,6 +86,7 @@ const targetView: ViewDef = {
   idle: 'Tick a few dimensions and set their grades, then run.',
   usesFilters: true,
   defaultK: 10,
+  minCoverageOf: (info) => info.min_coverage.comps,
   sections: (ctx) => [ctx.builder.element],
   async run(ctx) {
     const want = ctx.builder.want();
@@ -122,6 +126,7 @@ const prospectView: ViewDef = {
   idle: 'Choose a prospect and a season, then Show the outlook.',
   usesFilters: true,
   defaultK: 25,
+  minCoverageOf: (info) => info.min_coverage.prospect,
   sections: (ctx) => [ctx.first.element, outlookBox],
   async run(ctx) {
     needPlayer(ctx.first);
@@ -138,7 +143,8 @@ const prospectView: ViewDef = {
     const calibrated = c && bt
       ? ` Calibrated on this roster's history: ${pct(c.reached_top_level)}. On this roster, outlooks replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''} scored a Brier skill of ${bt.skill_vs_level_age.value ?? 'n/a'} against the level-and-age base rate, and their p10-p90 held the realised peak ${pct(bt.peak_coverage.value)} of the time (nominal 80%).`
       : ` No calibrated outlook: ${o.calibration_note ?? 'no backtest stored'}.`;
-    const note = `Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_top_level)} reached the top level, against a base rate of ${pct(o.baseline.reached_top_level)} for ${o.baseline.player_seasons} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
+    const warned = (result.warnings ?? []).map((w) => `${w} `).join('');
+    const note = `${warned}Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_top_level)} reached the top level, against a base rate of ${pct(o.baseline.reached_top_level)} for ${o.baseline.player_seasons} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
       note,
       extra: [
@@ -167,6 +173,7 @@ const cheaperView: ViewDef = {
   idle: 'Choose a player and a salary limit, then Find cheaper comps.',
   usesFilters: true,
   defaultK: 10,
+  minCoverageOf: (info) => info.min_coverage.cheaper,
   sections: (ctx) => [ctx.first.element, salaryBox],
   async run(ctx) {
     needPlayer(ctx.first);
@@ -180,7 +187,7 @@ const cheaperView: ViewDef = {
       note,
       extra: [
         { title: 'salary (USD)', value: (c) => cheaperOf(c)?.salary_usd ?? null, shown: (v) => (typeof v === 'number' ? usd(v) : v) },
-        { title: 'likeness per $M', value: (c) => cheaperOf(c)?.likeness_per_million ?? null },
+        { title: 'value (0-100)', value: (c) => cheaperOf(c)?.value_score ?? null },
         { title: 'frontier', value: (c) => { const cc = cheaperOf(c); return cc ? yesNo(cc.frontier) : null; } },
       ],
       chart: { title: 'Likeness against salary (the value frontier joined)', spec: frontierChartSpec(result), label: 'likeness against salary of the cheaper comps' },
@@ -199,6 +206,7 @@ const matchView: ViewDef = {
   idle: 'Choose the target and the candidate, then Compare.',
   usesFilters: true,
   defaultK: 10,
+  minCoverageOf: (info) => info.min_coverage.match,
   sections: (ctx) => [ctx.first.element, ctx.second.element],
   async run(ctx) {
     needPlayer(ctx.first);

@@ -37,13 +37,44 @@ const json = async (...args: string[]): Promise<ReturnType<typeof cheaperResultS
 
 describe('kindred cheaper <player>', () => {
   it('defaults to half the target\u2019s salary, echoes the pool counts and marks the frontier', async () => {
-    const r = await json(star.id, '--season', String(star.season));
+    const r = await json(star.id, '--season', String(star.season), '--recent', 'all', '--level-span', 'all');
     expect(r.query).toMatchObject({ player_id: star.id, season: star.season });
     expect(r.pool.salary).toMatchObject({ rule: 'max-share', share: 0.5, target_salary_usd: star.salary, limit_usd: Math.round(star.salary / 2) });
     expect(r.pool.salary.without_salary).toBeGreaterThan(0);
     expect(r.comps.length).toBeGreaterThan(0);
     expect(r.comps.every((c) => c.salary_usd <= star.salary / 2)).toBe(true);
     expect(r.comps[0]?.frontier).toBe(true);
+  });
+
+  it('draws by default from his level, his season and the two before it, at his position with half his PA', async () => {
+    const r = await json(star.id, '--season', String(star.season), '--k', '25');
+    expect(r.comps.length).toBeGreaterThan(0);
+    const level = r.query.level;
+    for (const c of r.comps) {
+      expect(c.level).toBe(level);
+      expect(c.season).toBeGreaterThanOrEqual(star.season - 2);
+      expect(c.season).toBeLessThanOrEqual(star.season);
+      expect(c.position).toBe(r.query.position);
+      expect(c.sample).toBeGreaterThanOrEqual(r.pool.sample_floor?.min ?? Infinity);
+    }
+    expect(r.pool.filters).toMatchObject({ levels: [level], season_from: star.season - 2, season_to: star.season });
+    // --recent all and --level-span all give the older seasons and other levels back
+    const wide = await json(star.id, '--season', String(star.season), '--recent', 'all', '--level-span', 'all');
+    expect(wide.pool.eligible).toBeGreaterThan(r.pool.eligible);
+  });
+
+  it('puts only comps above the unrelated likeness on the frontier, and scores value without rewarding the minimum salary', async () => {
+    const r = await json(star.id, '--season', String(star.season), '--k', '40', '--recent', 'all', '--level-span', 'all', '--sample-floor', '0', '--min-coverage', '0');
+    expect(r.pool.salary.likeness_floor).toBeCloseTo(100 / Math.E, 1);
+    for (const c of r.comps) {
+      if (c.frontier) expect(c.likeness).toBeGreaterThan(100 / Math.E);
+      expect(c.above_likeness_floor).toBe(c.likeness > 100 / Math.E);
+      if (!c.above_likeness_floor) expect(c.value_score).toBe(0);
+    }
+    // value never rises as likeness falls at the same salary or more (the likeness-per-$1M flaw)
+    for (const a of r.comps) for (const b of r.comps) {
+      if (a.likeness > b.likeness && a.salary_usd <= b.salary_usd) expect(a.value_score ?? 0).toBeGreaterThanOrEqual(b.value_score ?? 0);
+    }
   });
 
   it('--max-salary sets an absolute limit (commas allowed)', async () => {
@@ -61,10 +92,10 @@ describe('kindred cheaper <player>', () => {
   });
 
   it('--format csv gives a shortlist with readable headers and plain salaries', async () => {
-    const out = await runCli('cheaper', star.id, '--season', String(star.season), '--store', store, '--format', 'csv', '--k', '4');
+    const out = await runCli('cheaper', star.id, '--season', String(star.season), '--store', store, '--format', 'csv', '--k', '4', '--recent', 'all');
     expect(out.code).toBe(0);
     const rows: string[][] = parse(out.stdout);
-    expect(rows[0]).toEqual(expect.arrayContaining(['Player', 'Salary (USD)', 'Likeness per USD 1M', 'Value frontier']));
+    expect(rows[0]).toEqual(expect.arrayContaining(['Player', 'Salary (USD)', 'Value score (0-100)', 'Playing time', 'Playing time unit', 'Value frontier']));
     const col = rows[0]?.indexOf('Salary (USD)') ?? -1;
     expect(rows.slice(1).every((r) => /^\d+$/.test(r[col] ?? ''))).toBe(true);
     expect(rows).toHaveLength(5);

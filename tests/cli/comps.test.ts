@@ -98,7 +98,7 @@ describe('kindred comps <player> --format json', () => {
     expect(out.code).toBe(0);
     const lines = out.stdout.trim().split('\n');
     expect(lines).toHaveLength(5);
-    expect(lines[0]).toMatch(/^target_player_id,target_season,target_level,rank,player_id,name,season,level,position,age,sample,sample_unit,likeness/);
+    expect(lines[0]).toMatch(/^target_player_id,target_season,target_level,rank,player_id,name,season,level,position,age,sample,sample_unit,ip,likeness/);
     expect(lines[0]).toContain('pop_2b_s_grade');
   });
 });
@@ -242,7 +242,7 @@ describe('kindred comps: playing time of every comp', () => {
       expect(rows.map((i) => c?.sample[i])).toContain(comp.sample);
     }
     const csv = await runCli('comps', catcher.id, '--store', store, '--format', 'csv');
-    expect(csv.stdout.split('\n')[0]).toContain(',age,sample,sample_unit,likeness,');
+    expect(csv.stdout.split('\n')[0]).toContain(',age,sample,sample_unit,ip,likeness,');
     const table = await runCli('comps', catcher.id, '--store', store);
     expect(table.stdout).toMatch(/ Age\s+PA\s+Like /);
   });

@@ -27,6 +27,8 @@ export const compSchema = z.object({
   age: z.number().int().nullable(),
   sample: z.number().int().nonnegative(),
   sample_unit: z.enum(['PA', 'BF']),
+  /** Innings pitched in thirds notation (common practice: the digit after the point counts outs). */
+  ip: z.string().regex(/^\d+\.[012]$/).nullable(),
   likeness: z.number().min(0).max(100),
   distance: z.number().nonnegative(),
   coverage: z.number().min(0).max(1),
@@ -58,6 +60,16 @@ export const compsResultSchema = z.object({
     weights: z.record(z.string(), z.number()),
     preset: z.string(),
     family_shares: z.record(z.string(), z.number()),
+    sample_floor: z
+      .strictObject({
+        unit: z.enum(['PA', 'BF']),
+        min: z.number().int().positive(),
+        share: z.number().min(0).max(1),
+        target_sample: z.number().int().nonnegative(),
+        target_sample_from: z.enum(['target', 'group median']),
+      })
+      .nullable(),
+    summary: z.string().min(1),
   }),
   comps: z.array(compSchema),
 });

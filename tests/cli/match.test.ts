@@ -13,6 +13,7 @@ let target = '';
 let first = { id: '', season: 0 };
 let tenth = { id: '', season: 0 };
 let hitter = '';
+let second = '';
 
 beforeAll(async () => {
   sim = await buildSimStore();
@@ -26,6 +27,7 @@ beforeAll(async () => {
   const comps = compsResultSchema.parse(JSON.parse((await runCli('comps', target, '--store', store, '--format', 'json', '--k', '10', '--exact')).stdout));
   first = { id: comps.comps[0]?.player_id ?? '', season: comps.comps[0]?.season ?? 0 };
   tenth = { id: comps.comps[9]?.player_id ?? '', season: comps.comps[9]?.season ?? 0 };
+  second = comps.comps[1]?.player_id ?? '';
 });
 afterAll(() => sim.remove());
 
@@ -45,7 +47,9 @@ describe('kindred match <player-a> <player-b>', () => {
     expect(b.candidate.rank).toBe(10);
     expect(b.candidate.percentile).toBeCloseTo((100 * b.candidate.less_alike) / b.candidate.pool_players, 1);
     expect(b.candidate.percentile ?? 0).toBeLessThan(a.candidate.percentile ?? 0);
-    expect(a.closest?.player_id).toBe(first.id);
+    // the closest other player: the second comp, never the candidate himself
+    expect(a.closest?.player_id).toBe(second);
+    expect(b.closest?.player_id).toBe(first.id);
   });
 
   it('prints the likeness, the standing and every dimension with grades', async () => {

@@ -67,6 +67,21 @@ describe('kindred prospect <player>', () => {
     expect(r.comps[0]?.outcome).toHaveProperty('first_top_level_season');
   });
 
+  it('shows each comp\u2019s playing time and coverage in the table, as in the JSON', async () => {
+    const out = await runCli('prospect', hitter, '--store', store);
+    const r = await json(hitter);
+    const head = out.stdout.split('\n').find((l) => l.trimStart().startsWith('# ')) ?? '';
+    expect(head).toMatch(/ Age +PA +Like +Cov /);
+    const first = r.comps[0];
+    if (!first) throw new Error('no comps');
+    // the name cell may wrap: the row is the line holding the id and the one before it
+    const lines = out.stdout.split('\n');
+    const at = lines.findIndex((l) => l.includes(`(${first.player_id})`));
+    const row = `${lines[at - 1] ?? ''} ${lines[at] ?? ''} `;
+    expect(row).toContain(` ${first.sample} `);
+    expect(row).toContain(` ${Math.round(first.coverage * 100)}% `);
+  });
+
   it('--format json holds to the contract, echoes player_id and season, and gives hitters peak OPS+', async () => {
     const r = await json(hitter);
     expect(r.query.player_id).toBe(hitter);

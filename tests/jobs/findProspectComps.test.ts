@@ -44,6 +44,28 @@ describe('findProspectComps(store, outcomes, target, options)', () => {
     }
   });
 
+  it('leaves out comps no more alike than two unrelated players (likeness 100 / e), and counts them', () => {
+    let left = 0;
+    for (const at of targets.slice(0, 8)) {
+      const t = playerTarget(store, at);
+      const r = findProspectComps(store, outcomes, t, opts({ includeCensored: true, comps: { ...DEFAULT_PROSPECT_OPTIONS.comps, k: 200 } }));
+      for (const c of r.comps) expect(c.likeness).toBeGreaterThan(100 / Math.E - 0.05);
+      expect(r.pool.likeness_floor).toBeCloseTo(100 / Math.E, 1);
+      left += r.pool.below_likeness_floor ?? 0;
+    }
+    expect(left).toBeGreaterThan(0);
+  });
+
+  it('warns for a target already established at the top level, not for a prospect', () => {
+    const top = store.levels.length - 1;
+    const seasonsAtTop = (p: number, upTo: number): number => new Set(rowsWhere(store, 'IF', (i) => g.player[i] === p && g.level[i] === top && (g.season[i] as number) <= upTo).map((r) => g.season[r.row])).size;
+    const veteran = rowsWhere(store, 'IF', (i) => g.level[i] === top && !Number.isNaN(g.age[i] as number) && seasonsAtTop(g.player[i] as number, g.season[i] as number) >= 3)[0];
+    if (!veteran) throw new Error('no established top-level infielder');
+    const r = findProspectComps(store, outcomes, playerTarget(store, veteran), opts());
+    expect(r.warnings?.[0]).toMatch(/is established at the top level \(.*, \d+ seasons to \d{4}\)/);
+    expect(findProspectComps(store, outcomes, playerTarget(store, targets[0] as TargetRow), opts()).warnings).toEqual([]);
+  });
+
   it('leaves censored comps out of the list and the outlook, and counts the closer ones it left out', () => {
     const t = playerTarget(store, targets[0] as TargetRow);
     const plain = findProspectComps(store, outcomes, t, opts());

@@ -51,6 +51,22 @@ describe('matchPlayers(store, target, candidate, options)', () => {
     expect(m.candidate.percentile).toBeCloseTo((100 * m.candidate.less_alike) / m.candidate.pool_players, 1);
   });
 
+  it('compares the candidate at his most alike season, not his calendar-closest, and never names him as the closest other player', () => {
+    // a comp is listed at his most alike season; asked without a season, match must take the same one
+    const comps = findComps(store, target, { ...options.comps, k: 6 });
+    expect(comps.comps.length).toBeGreaterThan(0);
+    for (const c of comps.comps) {
+      const m = matchPlayers(store, target, store.playerById.get(c.player_id) as number, options);
+      expect([m.candidate.season, m.candidate.level]).toEqual([c.season, c.level]);
+      expect(m.candidate.likeness).toBe(c.likeness);
+      expect(m.closest?.player_id).not.toBe(c.player_id);
+    }
+    // the top comp's closest other player is the second comp
+    const top = comps.comps[0];
+    const m = matchPlayers(store, target, store.playerById.get(top?.player_id ?? '') as number, options);
+    expect(m.closest?.player_id).toBe(comps.comps[1]?.player_id);
+  });
+
   it('refuses a candidate with no profile in the target\u2019s group', () => {
     const hitters = store.groups.get('IF') as StoredGroup;
     const hitter = hitters.player[0] as number;

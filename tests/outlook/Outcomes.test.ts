@@ -40,6 +40,14 @@ describe('Outcomes.futureOf(player, kind, season, horizon, asOf)', () => {
     expect(o.top_level_seasons).toBe(3);
   });
 
+  it('gives the first top-level season as it was, even when he was already there in his comp season (not the season after)', () => {
+    // h reached the top level in 2012: from his 2012 season, the window starts in 2013 but he arrived in 2012
+    expect(outcomes.futureOf(h, 'hitter', 2012, 3).first_top_level_season).toBe(2012);
+    expect(outcomes.futureOf(h, 'hitter', 2013, 3).first_top_level_season).toBe(2012);
+    // nothing after the last season seen counts
+    expect(outcomes.futureOf(h, 'hitter', 2010, 1, 2011).first_top_level_season).toBeNull();
+  });
+
   it('takes the best OPS+ among seasons of at least 300 PA only', () => {
     const o = outcomes.futureOf(h, 'hitter', 2010, 6);
     expect(opsOf(2012)).toBeGreaterThan(opsOf(2015)); // the 299-PA season was the best one

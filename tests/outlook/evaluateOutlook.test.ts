@@ -28,7 +28,8 @@ describe('evaluateOutlook(store, outcomes, options)', () => {
   it('forecasts hundreds of held-out prospects, nearly all of them with comps', () => {
     expect(ev.hitter.targets).toBeGreaterThan(200);
     expect(ev.pitcher.targets).toBeGreaterThan(100);
-    expect(ev.withoutComps).toBeLessThan(0.05 * (ev.hitter.targets + ev.pitcher.targets));
+    // a prospect whom no earlier player resembles more than chance (likeness 100 / e) gets no comps: under one in ten
+    expect(ev.withoutComps).toBeLessThan(0.1 * (ev.hitter.targets + ev.pitcher.targets));
   });
 
   it('beats a single league-wide rate on the Brier score of reaching the top level', () => {

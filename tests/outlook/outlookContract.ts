@@ -42,7 +42,10 @@ export const prospectResultSchema = compsResultSchema.extend({
     }),
     complete_window: z.number().int().nonnegative(),
     censored: z.number().int().nonnegative(),
+    likeness_floor: z.number(),
+    below_likeness_floor: z.number().int().nonnegative(),
   }),
+  warnings: z.array(z.string()),
   comps: z.array(compSchema.extend({ censored: z.boolean(), outcome, path: z.array(pathStep).optional() })),
   outlook: figures.extend({
     horizon_seasons: z.number().int().positive(),
@@ -64,9 +67,11 @@ export const cheaperResultSchema = compsResultSchema.extend({
       over_limit: z.number().int().nonnegative(),
       without_salary: z.number().int().nonnegative(),
       without_salary_players: z.number().int().nonnegative(),
+      likeness_floor: z.number(),
+      value_reference_usd: z.number().int().positive(),
     }),
   }),
-  comps: z.array(compSchema.extend({ salary_usd: z.number().nonnegative(), likeness_per_million: z.number(), frontier: z.boolean() })),
+  comps: z.array(compSchema.extend({ salary_usd: z.number().nonnegative(), likeness_per_million: z.number(), value_score: z.number().min(0).max(100).nullable(), above_likeness_floor: z.boolean(), frontier: z.boolean() })),
 });
 
 export const matchResultSchema = z.object({

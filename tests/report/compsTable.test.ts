@@ -13,7 +13,7 @@ import type { CompsResult } from '../../src/query/CompsResult.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 
 /** The table's headings; the playing-time column says PA for hitters and BF for pitchers. */
-const headingsFor = (unit: string): string[] => ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', unit, 'Like', 'Cov', 'Alike / apart'];
+const headingsFor = (unit: string): string[] => ['#', 'Player', 'Season', 'Lvl', 'Pos', 'Age', ...(unit === 'BF' ? ['BF', 'IP'] : ['PA']), 'Like', 'Cov', 'Alike / apart'];
 let s: SimStore;
 
 function someTarget(group: PositionGroup): string[] {
@@ -60,8 +60,12 @@ describe.each(['C', 'IF', 'OF', 'SP', 'RP'] as const)('comps table for a %s targ
       expect(row.slice(at[4], at[5]).trim()).toBe(c.position);
       expect(cell(5)).toBe(c.age === null ? '-' : String(c.age));
       expect(cell(6)).toBe(String(c.sample));
-      expect(cell(7)).toBe(String(Math.round(c.likeness)));
-      expect(cell(8)).toBe(`${Math.round(100 * c.coverage)}%`);
+      // pitchers: innings pitched in thirds notation (common practice: 150.1 is 150 1/3) beside BF
+      const ip = c.sample_unit === 'BF' ? 1 : 0;
+      if (ip) expect(cell(7)).toMatch(/^\d+\.[012]$/);
+      if (ip) expect(cell(7)).toBe(c.ip);
+      expect(cell(7 + ip)).toBe(String(Math.round(c.likeness)));
+      expect(cell(8 + ip)).toBe(`${Math.round(100 * c.coverage)}%`);
       expect(idLine.trim().startsWith(c.player_id)).toBe(true);
     });
     const grid = lines.findIndex((l) => l.startsWith('Dimension'));

@@ -164,13 +164,16 @@ describe('the comps view', () => {
     expect(csvDownload.suggestedFilename()).toBe('kindred-comps.csv');
     const csv = await readFile(await csvDownload.path(), 'utf8');
     const lines = csv.trimEnd().split('\r\n');
-    expect(lines[0]).toBe('rank,player_id,name,season,level,position,age,sample,sample_unit,likeness,distance,coverage,alike,apart');
+    expect(lines[0]).toBe('rank,player_id,name,season,level,position,age,sample,sample_unit,ip,likeness,distance,coverage,alike,apart');
     expect(lines.length).toBe(6);
 
     const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
     const exported = JSON.parse(await readFile(await jsonDownload.path(), 'utf8')) as CompsResult;
     expect(exported.comps.length).toBe(5);
-    expect(exported.pool.filters).toEqual({ levels: ['Elite', 'Top'], age_min: 22, age_max: 30 });
+    // the levels checked replace the default levels; the default position and playing-time floor stay
+    expect(exported.pool.filters).toMatchObject({ levels: ['Elite', 'Top'], age_min: 22, age_max: 30, positions: [exported.query.position] });
+    expect(exported.pool.filters.min_sample).toBe(exported.pool.sample_floor?.min);
+    expect(await page.textContent('#pool-rules')).toBe(`Pool: ${exported.pool.summary}`);
     expect(lines.slice(1).map((l) => l.split(',')[1])).toEqual(exported.comps.map((c) => c.player_id));
   });
 
@@ -227,6 +230,8 @@ describe('the prospect view', () => {
     const who = uniquePlayer('IF', (i) => g?.level[i] === aa && (g?.age[i] ?? 0) >= 19 && (g?.age[i] ?? 99) <= 22 && (g?.season[i] ?? 0) >= 2018);
     await pick('player', who);
     expect(await page.inputValue('#opt-k')).toBe('25');
+    // the page shows, and so sends, the server's own least coverage for prospect comps (0.25, not the comps 0.5)
+    expect(await page.inputValue('#opt-min-coverage')).toBe('0.25');
     await page.click('#run');
     await page.waitForSelector('#comps-table tbody tr');
     await page.waitForSelector('#extra-chart svg');
@@ -265,7 +270,7 @@ describe('the cheaper comps view', () => {
     expect(await page.locator('#extra-chart svg .mark-symbol.role-mark path').count()).toBe(expected.comps.length);
     const [csvDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-csv')]);
     const header = (await readFile(await csvDownload.path(), 'utf8')).split('\r\n')[0];
-    expect(header).toBe('rank,player_id,name,season,level,position,age,sample,sample_unit,likeness,distance,coverage,salary (USD),likeness per $M,frontier,alike,apart');
+    expect(header).toBe('rank,player_id,name,season,level,position,age,sample,sample_unit,ip,likeness,distance,coverage,salary (USD),value (0-100),frontier,alike,apart');
     await page.screenshot({ path: join(ARTIFACTS, 'cheaper.png'), fullPage: true });
   });
 });

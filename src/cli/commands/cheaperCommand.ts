@@ -5,13 +5,11 @@ import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
-import { findCheaperComps } from '../../jobs/findCheaperComps.ts';
 import type { CheaperResult } from '../../jobs/CheaperResult.ts';
 import { cheaperTable } from '../../report/cheaperTable.ts';
 import { cheaperCsv } from '../../report/cheaperCsv.ts';
-import { answerCheaper, cheaperOptionsFrom } from '../../request/answerCheaper.ts';
+import { answerCheaper } from '../../request/answerCheaper.ts';
 import { helpOf } from '../../request/parameters.ts';
-import { targetFrom } from '../../request/targetFrom.ts';
 import type { OutputFormat } from '../../request/valueParsers.ts';
 
 /** Writes one cheaper-comps result in the chosen format. */
@@ -33,11 +31,10 @@ export function cheaperCommand(io: CliIo, setExit: (code: number) => void): Comm
     const batch = req.get('batch');
     if (batch !== undefined) {
       if (player !== undefined || req.has('want')) throw new UsageError('--batch takes its targets from the file: give no player or --want');
-      const options = cheaperOptionsFrom(req, store);
       setExit(
         await runBatch(
           io, batch, format,
-          (t) => findCheaperComps(store, targetFrom(store, req.with({ player: t.playerId, season: t.season, level: t.level })), options),
+          (t) => answerCheaper(store, req.with({ player: t.playerId, season: t.season, level: t.level })),
           (r) => cheaperCsv(r, store.groups.get(r.query.group)?.dims ?? []),
         ),
       );

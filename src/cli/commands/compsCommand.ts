@@ -4,15 +4,12 @@ import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
-import { findComps } from '../../query/findComps.ts';
 import type { CompsResult } from '../../query/CompsResult.ts';
 import { compsTable } from '../../report/compsTable.ts';
 import { compsCsv } from '../../report/compsCsv.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { answerComps } from '../../request/answerComps.ts';
-import { compsOptionsFrom } from '../../request/compsOptionsFrom.ts';
 import { helpOf } from '../../request/parameters.ts';
-import { targetFrom } from '../../request/targetFrom.ts';
 import type { OutputFormat } from '../../request/valueParsers.ts';
 
 /** Writes one result in the chosen format. */
@@ -34,10 +31,7 @@ export function compsCommand(io: CliIo, setExit: (code: number) => void): Comman
     const batch = req.get('batch');
     if (batch !== undefined) {
       if (player !== undefined || req.has('want')) throw new UsageError('--batch takes its targets from the file: give no player or --want');
-      const options = compsOptionsFrom(req, store);
-      setExit(
-        await runBatch(io, batch, format, (t) => findComps(store, targetFrom(store, req.with({ player: t.playerId, season: t.season, level: t.level })), options), (r) => compsCsv(r)),
-      );
+      setExit(await runBatch(io, batch, format, (t) => answerComps(store, req.with({ player: t.playerId, season: t.season, level: t.level })), (r) => compsCsv(r)));
       return;
     }
     writeResult(io, store, answerComps(store, req), format);

@@ -37,8 +37,8 @@ export function matchCommand(io: CliIo, setExit: (code: number) => void): Comman
     const batch = req.get('batch');
     if (batch !== undefined) {
       if (req.has('candidate')) throw new UsageError('--batch takes the candidates from the file: give only the target');
-      const options = matchOptionsFrom(req, store);
       const target = targetFrom(store, req);
+      const options = matchOptionsFrom(req, store, target);
       setExit(
         await runBatch(
           io, batch, format,

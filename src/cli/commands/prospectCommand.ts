@@ -4,15 +4,12 @@ import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
-import { findProspectComps } from '../../jobs/findProspectComps.ts';
 import type { ProspectResult } from '../../jobs/ProspectResult.ts';
-import { calibrateOutlook } from '../../outlook/calibrateOutlook.ts';
 import { readBacktestFile } from '../../outlook/backtestStore.ts';
 import { prospectTable } from '../../report/prospectTable.ts';
 import { prospectCsv } from '../../report/prospectCsv.ts';
-import { answerProspect, prospectOptionsFrom } from '../../request/answerProspect.ts';
+import { answerProspect } from '../../request/answerProspect.ts';
 import { helpOf } from '../../request/parameters.ts';
-import { targetFrom } from '../../request/targetFrom.ts';
 import type { OutputFormat } from '../../request/valueParsers.ts';
 
 /** Writes one prospect result in the chosen format. */
@@ -36,14 +33,10 @@ export function prospectCommand(io: CliIo, setExit: (code: number) => void): Com
     const batch = req.get('batch');
     if (batch !== undefined) {
       if (player !== undefined) throw new UsageError('--batch takes its targets from the file: give no player');
-      const options = prospectOptionsFrom(req, store);
       setExit(
         await runBatch(
           io, batch, format,
-          (t) => {
-            const target = targetFrom(store, req.with({ player: t.playerId, season: t.season, level: t.level }));
-            return calibrateOutlook(store, outcomes, target, findProspectComps(store, outcomes, target, options), options, backtest);
-          },
+          (t) => answerProspect(store, outcomes, req.with({ player: t.playerId, season: t.season, level: t.level }), backtest),
           (r) => prospectCsv(r),
         ),
       );

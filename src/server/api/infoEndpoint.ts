@@ -3,6 +3,7 @@ import { WEIGHT_PRESETS } from '../../query/weightPresets.ts';
 import type { LoadedStore } from '../LoadedStore.ts';
 import type { StoreInfo } from '../../request/apiContract.ts';
 import { noParameters } from '../../request/readRequest.ts';
+import { defaultOf } from '../../request/parameters.ts';
 
 export type { StoreInfo } from '../../request/apiContract.ts';
 import type { Endpoint } from '../Endpoint.ts';
@@ -28,6 +29,12 @@ export function answerInfo(loaded: LoadedStore, query: URLSearchParams): StoreIn
     seasons: { from, to },
     groups,
     presets: Object.keys(WEIGHT_PRESETS),
+    min_coverage: {
+      comps: defaultOf('minCoverage', 'comps') ?? 0,
+      prospect: defaultOf('minCoverage', 'prospect') ?? 0,
+      cheaper: defaultOf('minCoverage', 'cheaper') ?? 0,
+      match: defaultOf('minCoverage', 'match') ?? 0,
+    },
   };
 }
 

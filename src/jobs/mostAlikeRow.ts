@@ -9,11 +9,16 @@ export interface SeasonChoice {
 
 /**
  * The row of a player in a group to compare with a target: among his rows (narrowed by `season` and
- * `level` when given), the season closest to `reference` (his latest when there is no reference);
- * ties between seasons go to the later one, then to the higher level, then to the larger sample.
- * A player with no such row is a QueryError that lists his profiled seasons in the group.
+ * `level` when given, so the seasons asked are the ones compared), the one most alike the target,
+ * i.e. with the smallest `distance2` (a season that shares no weighted dimension, at an infinite
+ * distance, comes last); ties go to the later season, then to the higher level, then to the larger
+ * sample. Not the season closest in the calendar: a candidate is judged at his best match, as comps
+ * are. A player with no such row is a QueryError that lists his profiled seasons in the group.
+ *
+ * @example
+ * // rows of the candidate in 2019 (d2 9), 2021 (d2 2), 2022 (d2 5), target in 2022: the 2021 row
  */
-export function closestSeasonRow(store: ProfileStore, g: StoredGroup, player: number, reference: number | null, choice: SeasonChoice): number {
+export function mostAlikeRow(store: ProfileStore, g: StoredGroup, player: number, choice: SeasonChoice, distance2: (row: number) => number): number {
   const all: number[] = [];
   for (let i = 0; i < g.n; i++) if (g.player[i] === player) all.push(i);
   const levelIdx = choice.level !== undefined ? store.levels.indexOf(choice.level) : -1;
@@ -30,7 +35,8 @@ export function closestSeasonRow(store: ProfileStore, g: StoredGroup, player: nu
   }
   const season = (i: number): number => valueAt(g.season, i);
   const level = (i: number): number => valueAt(g.level, i);
-  const gap = (i: number): number => (reference === null ? -season(i) : Math.abs(season(i) - reference));
+  const d2 = new Map(rows.map((i) => [i, Number.isFinite(distance2(i)) ? distance2(i) : Infinity]));
+  const gap = (i: number): number => d2.get(i) ?? Infinity;
   let best = valueAt(rows, 0);
   for (const i of rows) {
     const better =

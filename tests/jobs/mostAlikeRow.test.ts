@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
-import { closestSeasonRow } from '../../src/jobs/closestSeasonRow.ts';
+import { mostAlikeRow } from '../../src/jobs/mostAlikeRow.ts';
 import { QueryError } from '../../src/errors/KindredError.ts';
 import { buildSimStore, type SimStore } from '../outlook/simStore.ts';
 
@@ -28,26 +28,31 @@ beforeAll(async () => {
 });
 afterAll(() => sim.remove());
 
-describe('closestSeasonRow(store, g, player, reference, choice)', () => {
-  it('picks the season closest to the reference', () => {
-    const seasons = rows.map((i) => g.season[i] as number);
-    const mid = [...seasons].sort((a, b) => a - b)[1] as number;
-    expect(g.season[closestSeasonRow(store, g, player, mid, {})]).toBe(mid);
-    expect(g.season[closestSeasonRow(store, g, player, 1900, {})]).toBe(Math.min(...seasons));
+describe('mostAlikeRow(store, g, player, choice, distance2)', () => {
+  it('takes his most alike season, not the one closest in the calendar', () => {
+    // the distance of each row made up for the check: his first season is the most alike
+    const first = rows[0] as number;
+    const d2 = (r: number): number => (r === first ? 1 : 10 + (g.season[r] as number) - 2000);
+    expect(mostAlikeRow(store, g, player, {}, d2)).toBe(first);
+    const last = rows[rows.length - 1] as number;
+    expect(mostAlikeRow(store, g, player, {}, (r) => (r === last ? 0.5 : 3))).toBe(last);
   });
 
-  it('takes his latest season, at his highest level, without a reference', () => {
+  it('puts a season at no finite distance last, and breaks ties by the later season, then the higher level', () => {
     const latest = Math.max(...rows.map((i) => g.season[i] as number));
-    const row = closestSeasonRow(store, g, player, null, {});
+    const row = mostAlikeRow(store, g, player, {}, () => 4);
     expect(g.season[row]).toBe(latest);
     const levels = rows.filter((i) => g.season[i] === latest).map((i) => g.level[i] as number);
     expect(g.level[row]).toBe(Math.max(...levels));
+    const first = rows[0] as number;
+    expect(mostAlikeRow(store, g, player, {}, (r) => (r === first ? 7 : NaN))).toBe(first);
   });
 
-  it('narrows to a season or a level, and lists his seasons when nothing matches', () => {
+  it('compares the season asked, and lists his seasons when nothing matches', () => {
     const first = g.season[rows[0] as number] as number;
-    expect(g.season[closestSeasonRow(store, g, player, 3000, { season: first })]).toBe(first);
-    expect(() => closestSeasonRow(store, g, player, null, { season: 1900 })).toThrow(QueryError);
-    expect(() => closestSeasonRow(store, g, player, null, { season: 1900 })).toThrow(/his SP seasons: \d{4} /);
+    const other = rows.find((r) => g.season[r] !== first) as number;
+    expect(g.season[mostAlikeRow(store, g, player, { season: first }, (r) => (r === other ? 0 : 5))]).toBe(first);
+    expect(() => mostAlikeRow(store, g, player, { season: 1900 }, () => 1)).toThrow(QueryError);
+    expect(() => mostAlikeRow(store, g, player, { season: 1900 }, () => 1)).toThrow(/his SP seasons: \d{4} /);
   });
 });

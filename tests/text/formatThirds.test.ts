@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatThirds } from '../../src/sim/formatThirds.ts';
+import { formatThirds } from '../../src/text/formatThirds.ts';
 import { parseThirds } from '../../src/ingest/parseThirds.ts';
 
 describe('formatThirds(outs)', () => {
