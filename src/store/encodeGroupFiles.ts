@@ -1,6 +1,7 @@
 import type { GroupProfiles } from '../profiles/buildProfiles.ts';
 import { float32ToBytes } from './float32Bytes.ts';
 import type { GroupFile } from './groupFile.ts';
+import { sha256Hex } from './sha256Hex.ts';
 import { groupFileNames } from './storeFileNames.ts';
 
 /** What the build adds to a group's profiles: the indexes it saved beside them. */
@@ -36,9 +37,12 @@ export function encodeGroupFiles(
   for (const [dim, map] of g.shrinkage) {
     if (map.size > 0) shrinkage[dim] = [...map].map(([key, s]) => [key, s.k, s.table, s.source, s.players]);
   }
+  const raw = float32ToBytes(g.raw);
+  const z = float32ToBytes(g.z);
   const file: GroupFile = {
     group: g.group,
     n: g.meta.length,
+    matrices: { raw: sha256Hex(raw), z: sha256Hex(z) },
     dims: [...g.dims],
     redundancy: [...g.redundancy],
     reliability: [...g.reliability],
@@ -59,8 +63,8 @@ export function encodeGroupFiles(
     ...(indexes.embedding ? { embedding: indexes.embedding } : {}),
   };
   return new Map<string, Uint8Array | string>([
-    [names.raw, float32ToBytes(g.raw)],
-    [names.z, float32ToBytes(g.z)],
+    [names.raw, raw],
+    [names.z, z],
     [names.json, JSON.stringify(file)],
   ]);
 }

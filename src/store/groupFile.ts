@@ -26,6 +26,12 @@ const indexSchema = z.strictObject({ M: z.number(), efConstruction: z.number(), 
 export const groupFileSchema = z.strictObject({
   group: z.enum(POSITION_GROUPS),
   n: z.number().int().nonnegative(),
+  /**
+   * sha256 of the two matrices beside this file (`group-<G>.raw.f32`, `group-<G>.z.f32`). They have the
+   * same size, so only their content tells them apart: with these, raw and standardised files swapped
+   * (or taken from another store), even with the manifest's checksums rewritten, are refused.
+   */
+  matrices: z.strictObject({ raw: z.string().regex(/^[0-9a-f]{64}$/), z: z.string().regex(/^[0-9a-f]{64}$/) }),
   dims: z.array(dimensionInfoSchema),
   /** Default weight per dimension: family share times within-family reliability and redundancy. */
   redundancy: z.array(z.number()),

@@ -6,8 +6,9 @@ export const STORE_FORMAT = 'kindred-store';
  * Version of the store layout. Bump it when the layout or any file's meaning changes; old stores are then refused.
  * 5: dimensions la_band_pct and run_speed_ft_s (formerly sweet_spot_pct and sprint_ft_s).
  * 6: group rows carry `outs` (innings pitched in thirds) for pitchers.
+ * 7: each group file names its raw and standardised matrices (and its embedding's files) by sha256.
  */
-export const STORE_FORMAT_VERSION = 6;
+export const STORE_FORMAT_VERSION = 7;
 /** Name of the manifest inside a store folder (reserved: no data file may use it). */
 export const MANIFEST_NAME = 'manifest.json';
 

@@ -14,7 +14,8 @@ import { groupFileNames } from './storeFileNames.ts';
  * Reads one position group from a verified store (the counterpart of encodeGroupFiles): parses the
  * JSON part, checks that every column, matrix, weight list and partition agrees with its row and
  * dimension counts, that it names the group its file name says (so files swapped between groups are
- * refused) and that its player and level references are in range, reads the embedding when there is one and loads the indexes (each checked by
+ * refused), that the raw and standardised matrices are the ones it names by sha256 (so the two,
+ * which have the same size, cannot be swapped) and that its player and level references are in range, reads the embedding when there is one and loads the indexes (each checked by
  * GuardedIndex.load before the native reader sees it). Any mismatch is StoreError `kindred.store.corrupt`.
  */
 export async function readGroup(
@@ -33,6 +34,13 @@ export async function readGroup(
   if (badPlayer >= 0) throw bad(`row ${badPlayer} names player ${gf.rows.player[badPlayer]} (the store has ${refs.players})`);
   const badLevel = outside(gf.rows.level, refs.levels);
   if (badLevel >= 0) throw bad(`row ${badLevel} names level ${gf.rows.level[badLevel]} (the store has ${refs.levels})`);
+  for (const kind of ['raw', 'z'] as const) {
+    const name = names[kind];
+    const listed = store.manifest.files[name]?.sha256;
+    if (listed !== gf.matrices[kind]) {
+      throw bad(`names ${name} with sha256 ${gf.matrices[kind]}, but the store holds ${listed ?? 'no such file'} (files swapped?)`);
+    }
+  }
   const raw = bytesToFloat32(await store.readBytes(names.raw));
   const z = bytesToFloat32(await store.readBytes(names.z));
   const lengths = [gf.rows.player, gf.rows.season, gf.rows.level, gf.rows.position, gf.rows.age, gf.rows.sample, gf.rows.outs, gf.rows.teams].map((a) => a.length);

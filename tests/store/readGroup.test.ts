@@ -1,0 +1,96 @@
+/**
+ * What readGroup refuses once the checksum check has been bypassed (the manifest rewritten to match
+ * edited files): files swapped between groups, the raw and standardised matrices swapped within one
+ * group, and player or level references past the store's tables.
+ */
+import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { buildStore } from '../../src/pipeline/buildStore.ts';
+import { simulateLeague } from '../../src/sim/simulateLeague.ts';
+import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import { groupFileNames } from '../../src/store/storeFileNames.ts';
+import { resealStore, swapStoreFiles } from '../helpers/resealStore.ts';
+
+let work: string;
+let built: string;
+let copies = 0;
+
+beforeAll(async () => {
+  work = mkdtempSync(join(tmpdir(), 'kindred-readgroup-'));
+  const league = simulateLeague({ seed: 31, firstSeason: 2018, lastSeason: 2026, targetPlayerSeasons: 900 });
+  await writeLeagueCsv(league, join(work, 'roster'));
+  built = join(work, 'built');
+  await buildStore(join(work, 'roster'), built, { lenient: false, threads: 1 });
+}, 120_000);
+afterAll(() => rmSync(work, { recursive: true, force: true }));
+
+/** A fresh copy of the built store to damage. */
+function copy(): string {
+  const dir = join(work, `copy-${copies++}`);
+  cpSync(built, dir, { recursive: true });
+  return dir;
+}
+
+function editJson(dir: string, name: string, edit: (json: { rows: { player: number[]; level: number[] } }) => void): void {
+  const path = join(dir, name);
+  const json = JSON.parse(readFileSync(path, 'utf8'));
+  edit(json);
+  writeFileSync(path, JSON.stringify(json));
+  resealStore(dir, [name]);
+}
+
+describe('readGroup behind a rewritten manifest', () => {
+  it('opens the store as built', async () => {
+    const store = await openProfileStore(copy());
+    expect(store.groups.get('SP')?.n).toBeGreaterThan(0);
+    expect(store.groups.get('RP')?.n).toBeGreaterThan(0);
+  });
+
+  it('refuses the SP and RP group files swapped (it used to serve relievers as starters)', async () => {
+    const dir = copy();
+    const sp = groupFileNames('SP');
+    const rp = groupFileNames('RP');
+    for (const kind of ['json', 'raw', 'z'] as const) swapStoreFiles(dir, sp[kind], rp[kind], true);
+    await expect(openProfileStore(dir)).rejects.toMatchObject({
+      code: 'kindred.store.corrupt',
+      message: expect.stringMatching(/group-SP\.json: holds group RP \(expected SP; files swapped\?\)/),
+    });
+  });
+
+  it('refuses the raw and standardised matrices of one group swapped (same size, so only their checksums in the group file tell them apart)', async () => {
+    const dir = copy();
+    const names = groupFileNames('IF');
+    expect(readFileSync(join(dir, names.raw)).length).toBe(readFileSync(join(dir, names.z)).length);
+    swapStoreFiles(dir, names.raw, names.z, true);
+    await expect(openProfileStore(dir)).rejects.toMatchObject({
+      code: 'kindred.store.corrupt',
+      message: expect.stringMatching(/group-IF\.json: names group-IF\.raw\.f32 with sha256 [0-9a-f]{64}, but the store holds [0-9a-f]{64} \(files swapped\?\)/),
+    });
+  });
+
+  it('refuses a row naming a player past the players table', async () => {
+    const dir = copy();
+    const players = (JSON.parse(readFileSync(join(dir, 'players.json'), 'utf8')) as { players: unknown[] }).players.length;
+    editJson(dir, groupFileNames('OF').json, (g) => {
+      g.rows.player[0] = players;
+    });
+    await expect(openProfileStore(dir)).rejects.toMatchObject({
+      code: 'kindred.store.corrupt',
+      message: expect.stringContaining(`row 0 names player ${players} (the store has ${players})`),
+    });
+  });
+
+  it('refuses a row naming a level past the level list', async () => {
+    const dir = copy();
+    editJson(dir, groupFileNames('C').json, (g) => {
+      g.rows.level[1] = 99;
+    });
+    await expect(openProfileStore(dir)).rejects.toMatchObject({
+      code: 'kindred.store.corrupt',
+      message: expect.stringMatching(/row 1 names level 99 \(the store has \d+\)/),
+    });
+  });
+});
