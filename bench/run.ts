@@ -19,6 +19,7 @@ const BENCHES: readonly { name: string; file: string; args: readonly string[]; w
   { name: 'embed-quality', file: 'embedQuality.bench.ts', args: ['30000', 'none,pca,autoencoder'], what: 'comps quality in the input, PCA and autoencoder spaces' },
   { name: 'outlook', file: 'outlook.bench.ts', args: [], what: 'prospect outlook calibration, Brier score and rank correlation against the base rate' },
   { name: 'serve', file: 'serve.bench.ts', args: ['20', '20'], what: 'HTTP load on the comps endpoint (20 connections, 20 s)' },
+  { name: 'fuzz', file: 'fuzz.bench.ts', args: [], what: 'fuzzing: 10,000 store and 10,000 roster mutants, command lines and API requests, each in a child process' },
 ];
 
 const check = process.argv.includes('--check');
