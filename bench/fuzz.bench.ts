@@ -5,20 +5,21 @@
  * random command lines and API requests, each in a child process. Aims: no crash, no hang past 10 s,
  * no exit code other than 0, 1 or 2, no failure outside the error hierarchy, no half-written store,
  * every store whose damage a reader can tell refused, no 5xx answer.
- * `node --import tsx bench/fuzz.bench.ts [store mutants] [roster mutants] [command lines] [requests] [workers] [seed]`
+ * `node --import tsx bench/fuzz.bench.ts [store mutants] [roster mutants] [command lines] [requests] [workers] [seed] [minutes]`
+ * (with a time budget in minutes, each run stops when its share is spent and the counts say how far it got).
  */
 import { aim } from './lib/aim.ts';
 import { type Finding, runFuzz } from '../tests/fuzz/runFuzz.ts';
 
-const [storeMutants, rosterMutants, commandLines, requests, workers, seed] = [10_000, 10_000, 2_000, 5_000, 2, 1].map((d, i) => {
+const [storeMutants, rosterMutants, commandLines, requests, workers, seed, minutes] = [10_000, 10_000, 2_000, 5_000, 2, 1, NaN].map((d, i) => {
   const arg = process.argv[2 + i];
   return arg === undefined ? d : Number(arg);
-}) as [number, number, number, number, number, number];
+}) as [number, number, number, number, number, number, number];
 
 const started = Date.now();
 const say = (line: string): void => console.log(`${((Date.now() - started) / 1000).toFixed(0).padStart(6)} s  ${line}`);
 const report = await runFuzz(
-  { seed, storeMutants, rosterMutants, commandLines, requests, workers, timeoutMs: 10_000 },
+  { seed, storeMutants, rosterMutants, commandLines, requests, workers, timeoutMs: 10_000, ...(Number.isNaN(minutes) ? {} : { minutes }) },
   say,
   (f) => say(`FINDING ${f.kind} [${f.where}] ${f.what}: ${f.detail.slice(0, 500)}`),
 );

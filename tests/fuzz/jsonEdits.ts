@@ -3,7 +3,7 @@
  * value of another kind or an extreme one, a key deleted or added, an array shortened or an element
  * repeated. Seeded: the same generator state gives the same edit.
  */
-import type { SeededRandom } from '../../src/sim/random.ts';
+import type { SeededRandom } from '../../src/random/SeededRandom.ts';
 
 type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
 

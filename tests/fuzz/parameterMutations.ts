@@ -5,7 +5,7 @@
  * text, and parameters a job does not take.
  */
 import { PARAMETER_KEYS, PARAMETERS } from '../../src/request/parameters.ts';
-import type { SeededRandom } from '../../src/sim/random.ts';
+import type { SeededRandom } from '../../src/random/SeededRandom.ts';
 
 export const FUZZ_JOBS = ['comps', 'prospect', 'cheaper', 'match', 'dims'] as const;
 

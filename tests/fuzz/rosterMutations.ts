@@ -8,7 +8,7 @@
  */
 import { copyFileSync, existsSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { SeededRandom } from '../../src/sim/random.ts';
+import type { SeededRandom } from '../../src/random/SeededRandom.ts';
 
 export interface RosterMutant {
   readonly what: string;

@@ -14,7 +14,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { buildStore } from '../../src/pipeline/buildStore.ts';
-import { SeededRandom } from '../../src/sim/random.ts';
+import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
@@ -34,6 +34,11 @@ export interface FuzzPlan {
   readonly workers: number;
   /** Longest a command may take before it counts as a hang. */
   readonly timeoutMs: number;
+  /**
+   * Optional time budget in minutes: the store and roster runs get 45% of it each and the command
+   * lines and requests the rest; a run stops early when its share is spent (the report says how many ran).
+   */
+  readonly minutes?: number;
 }
 
 export interface Finding {
@@ -101,13 +106,20 @@ function endFindings(where: string, what: string, commands: readonly (readonly s
 }
 
 /** Runs `count` items over `workers` slots, each slot with its own child and set-up. */
-async function overSlots<S>(count: number, workers: number, setUp: (slot: number) => S, item: (slot: S, runner: ChildRunner, index: number) => Promise<void>, timeoutMs: number): Promise<void> {
+async function overSlots<S>(
+  count: number,
+  workers: number,
+  setUp: (slot: number) => S,
+  item: (slot: S, runner: ChildRunner, index: number) => Promise<void>,
+  timeoutMs: number,
+  stopAt = Infinity,
+): Promise<void> {
   await Promise.all(
     Array.from({ length: Math.min(workers, Math.max(count, 1)) }, async (_, slot) => {
       const state = setUp(slot);
       const runner = new ChildRunner({ timeoutMs });
       try {
-        for (let i = slot; i < count; i += workers) await item(state, runner, i);
+        for (let i = slot; i < count && Date.now() < stopAt; i += workers) await item(state, runner, i);
       } finally {
         runner.close();
       }
@@ -142,6 +154,9 @@ export async function runFuzz(plan: FuzzPlan, log: (line: string) => void = () =
     await buildStore(roster, stores.input, { lenient: false, threads: 1 });
     await buildStore(roster, stores.pca, { lenient: false, threads: 1, embed: { method: 'pca', driverTargets: 0 } });
     const targets = await targetsOf(stores.input);
+    const budget = plan.minutes === undefined ? undefined : plan.minutes * 60_000;
+    const phaseStart = Date.now();
+    const until = (share: number): number => (budget === undefined ? Infinity : Date.now() + budget * share);
     log(`fuzz: roster of ${targets.players.length}+ players, stores in the input space and in PCA; ${targets.comps.length} groups queried per store mutant`);
 
     // Store mutants: each damages a work copy of one of the two stores, then queries it.
@@ -182,6 +197,7 @@ export async function runFuzz(plan: FuzzPlan, log: (line: string) => void = () =
         if (report.store.mutants % 500 === 0) log(`fuzz: ${report.store.mutants} store mutants, ${findings.length} findings`);
       },
       plan.timeoutMs,
+      until(0.45),
     );
     log(`fuzz: ${report.store.mutants} store mutants done`);
 
@@ -226,6 +242,7 @@ export async function runFuzz(plan: FuzzPlan, log: (line: string) => void = () =
         if (report.roster.mutants % 500 === 0) log(`fuzz: ${report.roster.mutants} roster mutants, ${findings.length} findings`);
       },
       plan.timeoutMs,
+      budget === undefined ? Infinity : phaseStart + budget * 0.9,
     );
     log(`fuzz: ${report.roster.mutants} roster mutants done`);
 
@@ -244,10 +261,11 @@ export async function runFuzz(plan: FuzzPlan, log: (line: string) => void = () =
         if (end.kind === 'done') for (const r of end.results) countCode(report.commands.exitCodes, r.code);
       },
       plan.timeoutMs,
+      budget === undefined ? Infinity : phaseStart + budget * 0.95,
     );
     log(`fuzz: ${report.commands.lines} command lines done`);
 
-    if (plan.requests > 0) await fuzzServer(plan, stores.input, targets.players, report.requests, findings);
+    if (plan.requests > 0) await fuzzServer(plan, stores.input, targets.players, report.requests, findings, budget === undefined ? Infinity : phaseStart + budget);
     log(`fuzz: ${report.requests.sent} requests done`);
   } finally {
     rmSync(work, { recursive: true, force: true });
@@ -262,6 +280,7 @@ async function fuzzServer(
   players: readonly string[],
   counts: { sent: number; statuses: Record<number, number> },
   findings: { push(...more: Finding[]): void },
+  stopAt: number,
 ): Promise<void> {
   const child = spawn(process.execPath, [join(ROOT, 'bin', 'kindred.js'), 'serve', '--store', storeDir, '--port', '0'], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
   let log = '';
@@ -282,7 +301,7 @@ async function fuzzServer(
       });
       child.once('exit', () => reject(new Error(`kindred serve ended before listening: ${log}`)));
     });
-    for (let i = 0; i < plan.requests; i++) {
+    for (let i = 0; i < plan.requests && Date.now() < stopAt; i++) {
       const rng = seedOf(plan, 4, i);
       const { method, path } = randomRequest(rng, players);
       const where = `request ${i}`;

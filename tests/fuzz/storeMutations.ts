@@ -12,7 +12,7 @@
  */
 import { copyFileSync, existsSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { SeededRandom } from '../../src/sim/random.ts';
+import type { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { MANIFEST_NAME } from '../../src/store/manifest.ts';
 import { listedFiles, resealStore } from '../helpers/resealStore.ts';
 import { editJson } from './jsonEdits.ts';
