@@ -7,7 +7,7 @@ export const HNSW_HEADER_BYTES = 96;
 /**
  * Structural check of a file written by hnswlib's `saveIndex` (hnswalg.h, hnswlib 0.8, vendored by
  * hnswlib-node 3.0.0), done in JS before the native reader sees it. It compares the header with the
- * manifest (count, M, 2M, efConstruction, the per-element size implied by dim), then walks every
+ * manifest (count, capacity equal to the count, M, 2M, efConstruction, the per-element size implied by dim), then walks every
  * layer-0 and upper-layer link list checking neighbour counts and ids (< count), labels (< count),
  * that a neighbour on level L reaches level L itself, that the entry point sits on the top level, and
  * that the lists end exactly at the end of the file: the invariants the native reader and search trust.
@@ -31,6 +31,7 @@ export function verifyHnswFile(bytes: Uint8Array, meta: IndexMeta, file: string)
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   const u64 = (at: number): number => Number(view.getBigUint64(at, true));
   const offsetLevel0 = u64(0);
+  const maxElements = u64(8);
   const count = u64(16);
   const sizeData = u64(24);
   const labelOffset = u64(32);
@@ -52,6 +53,10 @@ export function verifyHnswFile(bytes: Uint8Array, meta: IndexMeta, file: string)
     fail(`${sizeData} bytes per element imply dimension ${(sizeData - linksLevel0 - 8) / 4} (expected ${meta.dim})`);
   }
   expect('element count', count, meta.count);
+  // The native reader allocates maxElements elements and then reads count of them into that block:
+  // a smaller maxElements overruns the heap (the process aborts), a huge one asks for any amount of
+  // memory. GuardedIndex.build sizes it to the count (at least 1).
+  expect('maxElements', maxElements, Math.max(count, 1));
   expect('M', m, meta.M);
   expect('maxM', maxM, meta.M);
   expect('efConstruction', efConstruction, meta.efConstruction);

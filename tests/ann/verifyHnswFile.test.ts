@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { GuardedIndex } from '../../src/ann/GuardedIndex.ts';
 import { HNSW_HEADER_BYTES, verifyHnswFile } from '../../src/ann/verifyHnswFile.ts';
-import type { IndexMeta } from '../../src/ann/types.ts';
+import type { IndexMeta } from '../../src/ann/IndexParams.ts';
 import { randomVectors } from './randomVectors.ts';
 
 const dim = 4;
@@ -102,6 +102,16 @@ describe('verifyHnswFile', () => {
       b.writeUInt32LE(l.count, (l.listsAt[from] as number) + 4);
     });
     expect(() => verifyHnswFile(bytes, meta, 'index.hnsw')).toThrow(/links to \d+ on level 1 \(expected an id below \d+\)/);
+  });
+
+  it('refuses a capacity (maxElements) below the count: the native reader would read count elements into a smaller block', () => {
+    const bytes = edited((b, l) => b.writeBigUInt64LE(BigInt(l.count - 1), 8));
+    expect(() => verifyHnswFile(bytes, meta, 'index.hnsw')).toThrow(/maxElements is \d+ \(expected \d+\)/);
+  });
+
+  it('refuses a capacity far above the count (the native reader would allocate it whole)', () => {
+    const bytes = edited((b) => b.writeBigUInt64LE(2n ** 40n, 8));
+    expect(() => verifyHnswFile(bytes, meta, 'index.hnsw')).toThrow(/maxElements is 1099511627776 \(expected 600\)/);
   });
 
   it('refuses an upper-layer list claiming more than M links', () => {

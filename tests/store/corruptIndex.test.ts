@@ -37,3 +37,12 @@ describe('a store whose hnsw entry point names an element without upper layers, 
   });
 });
 
+
+describe('a store whose hnsw capacity (maxElements) is one below its count, checksum rewritten in the manifest', () => {
+  it('is refused by the index check before the native reader runs (found by the fuzz suite: it aborted the process, malloc(): invalid size)', () => {
+    const child = runChild('max-elements');
+    expect(child.signal, child.stderr).toBeNull();
+    expect(child.status, child.stderr).toBe(0);
+    expect(child.stdout.trim().split('\n')).toEqual(['store kindred.store.corrupt', 'direct kindred.store.corrupt']);
+  });
+});

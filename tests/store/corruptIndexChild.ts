@@ -1,10 +1,10 @@
 /**
  * Child process for tests/store/corruptIndex.test.ts
- * (run as `node --import tsx corruptIndexChild.ts <work folder> [body|entry-point]`).
+ * (run as `node --import tsx corruptIndexChild.ts <work folder> [body|entry-point|max-elements]`).
  * Builds a store holding an HNSW index and damages the index file: `body` overwrites part of the
  * index body with the same number of bytes; `entry-point` names an element without upper layers as
- * the entry point and rewrites the file's size and sha256 in the manifest, so that the checksum check
- * passes. Then it opens the store and tries to load the index as the serving code would. It prints
+ * the entry point, `max-elements` sets the capacity one below the count; these two rewrite the file's
+ * size and sha256 in the manifest, so that the checksum check passes. Then it opens the store and tries to load the index as the serving code would. It prints
  * one line per attempt (`store <code>`, then `direct <code>` for a load that skips the store) and
  * ends normally; a crash in the native code would instead end it by a signal.
  */
@@ -29,7 +29,7 @@ await writeStore(storeDir, { params: { index: { ...built.meta } }, files: new Ma
 
 const indexPath = join(storeDir, 'index.hnsw');
 const bytes = readFileSync(indexPath);
-if (mode === 'entry-point') {
+if (mode === 'entry-point' || mode === 'max-elements') {
   // hnswlib 0.8 layout (hnswalg.h): entry point uint32 at byte 52; after layer 0 (count x
   // sizeDataPerElement bytes from byte 96), each element's uint32 size of its upper-layer lists.
   const count = Number(bytes.readBigUInt64LE(16));
@@ -40,7 +40,8 @@ if (mode === 'entry-point') {
     if (size === 0) low = i;
     at += 4 + size;
   }
-  bytes.writeUInt32LE(low, 52);
+  if (mode === 'entry-point') bytes.writeUInt32LE(low, 52);
+  else bytes.writeBigUInt64LE(BigInt(count - 1), 8); // maxElements, at byte 8
   writeFileSync(indexPath, bytes);
   const manifestPath = join(storeDir, 'manifest.json');
   const manifest: { files: Record<string, { sha256: string; bytes: number }> } = JSON.parse(readFileSync(manifestPath, 'utf8'));
