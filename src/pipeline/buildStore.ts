@@ -8,7 +8,8 @@ import type { GroupFile } from '../store/groupFile.ts';
 import { encodeGroupFiles } from '../store/encodeGroupFiles.ts';
 import { encodePlayersFile } from '../store/playersFile.ts';
 import { encodeOutcomesFile } from '../store/outcomesFile.ts';
-import { chartsFolderOf, groupFileNames, OUTCOMES_FILE, PLAYERS_FILE } from '../store/storeFileNames.ts';
+import { chartsFolderOf, groupEmbeddingFileNames, groupFileNames, OUTCOMES_FILE, PLAYERS_FILE } from '../store/storeFileNames.ts';
+import { sha256Hex } from '../store/sha256Hex.ts';
 import { IndexBuildPool } from './IndexBuildPool.ts';
 import type { IndexParams } from '../ann/IndexParams.ts';
 import { writeStore } from '../store/writeStore.ts';
@@ -145,7 +146,7 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
       const groupFiles = encodeGroupFiles(g, playerIndex, roster.levels, {
         index: mainIndex,
         partitions,
-        ...(e ? { embedding: { space: e.space, dim: e.dim } } : {}),
+        ...(e ? { embedding: { space: e.space, dim: e.dim, sha256: embeddingChecksums(group, e.files) } } : {}),
       });
       for (const [name, content] of groupFiles) files.set(name, content);
       counts[group] = g.meta.length;
@@ -188,6 +189,17 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
     seconds: (performance.now() - started) / 1000,
     ...(embed.method === 'none' ? {} : { embedding: { space: embed.method, groups: embedded, chartsDir: chartsFolderOf(storeDir) } }),
   };
+}
+
+/** sha256 of a group's three embedding files, for its group file (src/store/groupFile.ts). */
+function embeddingChecksums(group: string, files: ReadonlyMap<string, string | Uint8Array>): { summary: string; model: string; codes: string } {
+  const names = groupEmbeddingFileNames(group);
+  const sha = (name: string): string => {
+    const content = files.get(name);
+    if (content === undefined) throw new Error(`internal: the embedding of ${group} has no ${name}`);
+    return sha256Hex(typeof content === 'string' ? new TextEncoder().encode(content) : content);
+  };
+  return { summary: sha(names.summary), model: sha(names.model), codes: sha(names.codes) };
 }
 
 /** A partition with fewer rows is scanned at query time instead of indexed (scanning is as fast, and exact). */

@@ -7,6 +7,8 @@ import { z } from 'zod';
 import { POSITION_GROUPS } from '../profiles/positionGroup.ts';
 import { SKILL_FAMILIES } from '../profiles/skillFamily.ts';
 
+const sha256Text = z.string().regex(/^[0-9a-f]{64}$/);
+
 const dimensionInfoSchema = z.strictObject({
   name: z.string(),
   label: z.string(),
@@ -31,7 +33,7 @@ export const groupFileSchema = z.strictObject({
    * same size, so only their content tells them apart: with these, raw and standardised files swapped
    * (or taken from another store), even with the manifest's checksums rewritten, are refused.
    */
-  matrices: z.strictObject({ raw: z.string().regex(/^[0-9a-f]{64}$/), z: z.string().regex(/^[0-9a-f]{64}$/) }),
+  matrices: z.strictObject({ raw: sha256Text, z: sha256Text }),
   dims: z.array(dimensionInfoSchema),
   /** Default weight per dimension: family share times within-family reliability and redundancy. */
   redundancy: z.array(z.number()),
@@ -71,7 +73,14 @@ export const groupFileSchema = z.strictObject({
    * Present when comps are ranked in a learned space: its kind and code size (the index then holds the
    * codes, `index.dim` = `dim`). The model, codes and summary are `group-<G>.{model.json,codes.f64,embedding.json}`.
    */
-  embedding: z.strictObject({ space: z.enum(['pca', 'autoencoder']), dim: z.number().int().positive() }).optional(),
+  embedding: z
+    .strictObject({
+      space: z.enum(['pca', 'autoencoder']),
+      dim: z.number().int().positive(),
+      /** sha256 of the three embedding files, so that files swapped between groups (same shapes) are refused. */
+      sha256: z.strictObject({ summary: sha256Text, model: sha256Text, codes: sha256Text }),
+    })
+    .optional(),
 });
 
 export type GroupFile = z.infer<typeof groupFileSchema>;

@@ -8,14 +8,14 @@ import type { OpenStore } from './openStore.ts';
 import { corruptFile, parseStoreJson } from './parseStoreJson.ts';
 import type { StoredGroup, StoredPartition } from './ProfileStore.ts';
 import { readGroupEmbedding } from './readGroupEmbedding.ts';
-import { groupFileNames } from './storeFileNames.ts';
+import { groupEmbeddingFileNames, groupFileNames } from './storeFileNames.ts';
 
 /**
  * Reads one position group from a verified store (the counterpart of encodeGroupFiles): parses the
  * JSON part, checks that every column, matrix, weight list and partition agrees with its row and
  * dimension counts, that it names the group its file name says (so files swapped between groups are
- * refused), that the raw and standardised matrices are the ones it names by sha256 (so the two,
- * which have the same size, cannot be swapped) and that its player and level references are in range, reads the embedding when there is one and loads the indexes (each checked by
+ * refused), that the raw and standardised matrices and the embedding's files are the ones it names by
+ * sha256 (so files of the same size, such as the two matrices, cannot be swapped) and that its player and level references are in range, reads the embedding when there is one and loads the indexes (each checked by
  * GuardedIndex.load before the native reader sees it). Any mismatch is StoreError `kindred.store.corrupt`.
  */
 export async function readGroup(
@@ -34,12 +34,17 @@ export async function readGroup(
   if (badPlayer >= 0) throw bad(`row ${badPlayer} names player ${gf.rows.player[badPlayer]} (the store has ${refs.players})`);
   const badLevel = outside(gf.rows.level, refs.levels);
   if (badLevel >= 0) throw bad(`row ${badLevel} names level ${gf.rows.level[badLevel]} (the store has ${refs.levels})`);
-  for (const kind of ['raw', 'z'] as const) {
-    const name = names[kind];
+  const named = (name: string, sha256: string): void => {
     const listed = store.manifest.files[name]?.sha256;
-    if (listed !== gf.matrices[kind]) {
-      throw bad(`names ${name} with sha256 ${gf.matrices[kind]}, but the store holds ${listed ?? 'no such file'} (files swapped?)`);
-    }
+    if (listed !== sha256) throw bad(`names ${name} with sha256 ${sha256}, but the store holds ${listed ?? 'no such file'} (files swapped?)`);
+  };
+  named(names.raw, gf.matrices.raw);
+  named(names.z, gf.matrices.z);
+  if (gf.embedding) {
+    const files = groupEmbeddingFileNames(group);
+    named(files.summary, gf.embedding.sha256.summary);
+    named(files.model, gf.embedding.sha256.model);
+    named(files.codes, gf.embedding.sha256.codes);
   }
   const raw = bytesToFloat32(await store.readBytes(names.raw));
   const z = bytesToFloat32(await store.readBytes(names.z));

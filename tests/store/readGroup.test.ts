@@ -11,11 +11,12 @@ import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
-import { groupFileNames } from '../../src/store/storeFileNames.ts';
+import { groupEmbeddingFileNames, groupFileNames } from '../../src/store/storeFileNames.ts';
 import { resealStore, swapStoreFiles } from '../helpers/resealStore.ts';
 
 let work: string;
 let built: string;
+let builtPca: string;
 let copies = 0;
 
 beforeAll(async () => {
@@ -24,13 +25,15 @@ beforeAll(async () => {
   await writeLeagueCsv(league, join(work, 'roster'));
   built = join(work, 'built');
   await buildStore(join(work, 'roster'), built, { lenient: false, threads: 1 });
-}, 120_000);
+  builtPca = join(work, 'built-pca');
+  await buildStore(join(work, 'roster'), builtPca, { lenient: false, threads: 1, embed: { method: 'pca', driverTargets: 0 } });
+}, 240_000);
 afterAll(() => rmSync(work, { recursive: true, force: true }));
 
-/** A fresh copy of the built store to damage. */
-function copy(): string {
+/** A fresh copy of the built store (input space, or PCA) to damage. */
+function copy(from: 'input' | 'pca' = 'input'): string {
   const dir = join(work, `copy-${copies++}`);
-  cpSync(built, dir, { recursive: true });
+  cpSync(from === 'pca' ? builtPca : built, dir, { recursive: true });
   return dir;
 }
 
@@ -43,7 +46,8 @@ function editJson(dir: string, name: string, edit: (json: { rows: { player: numb
 }
 
 describe('readGroup behind a rewritten manifest', () => {
-  it('opens the store as built', async () => {
+  it('opens the stores as built', async () => {
+    expect((await openProfileStore(copy('pca'))).groups.get('SP')?.embedding?.space).toBe('pca');
     const store = await openProfileStore(copy());
     expect(store.groups.get('SP')?.n).toBeGreaterThan(0);
     expect(store.groups.get('RP')?.n).toBeGreaterThan(0);
@@ -70,6 +74,19 @@ describe('readGroup behind a rewritten manifest', () => {
       message: expect.stringMatching(/group-IF\.json: names group-IF\.raw\.f32 with sha256 [0-9a-f]{64}, but the store holds [0-9a-f]{64} \(files swapped\?\)/),
     });
   });
+
+  for (const kind of ['model', 'summary', 'codes'] as const) {
+    it(`refuses the SP and RP embedding ${kind} files swapped (same shapes; found by the fuzz suite for the model)`, async () => {
+      const dir = copy('pca');
+      const sp = groupEmbeddingFileNames('SP')[kind];
+      const rp = groupEmbeddingFileNames('RP')[kind];
+      swapStoreFiles(dir, sp, rp, true);
+      await expect(openProfileStore(dir)).rejects.toMatchObject({
+        code: 'kindred.store.corrupt',
+        message: expect.stringMatching(/names group-(SP|RP)\.[a-z]+\.[a-z0-9]+ with sha256 [0-9a-f]{64}, but the store holds [0-9a-f]{64} \(files swapped\?\)/),
+      });
+    });
+  }
 
   it('refuses a row naming a player past the players table', async () => {
     const dir = copy();
