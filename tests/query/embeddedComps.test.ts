@@ -19,6 +19,7 @@ import { embeddingModelFromJSON } from '../../src/embed/EmbeddingModel.ts';
 import { writeStore } from '../../src/store/writeStore.ts';
 import { openStore } from '../../src/store/openStore.ts';
 import { StoreError } from '../../src/errors/KindredError.ts';
+import { sha256Hex } from '../../src/store/sha256Hex.ts';
 
 let dir = '';
 let store: ProfileStore;
@@ -106,7 +107,12 @@ describe('openProfileStore with an embedding', () => {
     const files = new Map<string, Uint8Array | string>();
     for (const name of Object.keys(src.manifest.files)) files.set(name, await src.readBytes(name));
     const summary = JSON.parse(await src.readText('group-RP.embedding.json')) as { dim: number };
-    files.set('group-RP.embedding.json', JSON.stringify({ ...summary, dim: summary.dim + 1 }));
+    const edited = JSON.stringify({ ...summary, dim: summary.dim + 1 });
+    files.set('group-RP.embedding.json', edited);
+    // the group file names the summary by checksum: name the edited one, so only the shape check stands
+    const group = JSON.parse(await src.readText('group-RP.json')) as { embedding: { sha256: { summary: string } } };
+    group.embedding.sha256.summary = sha256Hex(new TextEncoder().encode(edited));
+    files.set('group-RP.json', JSON.stringify(group));
     const bad = join(dir, 'disagreeing');
     await writeStore(bad, { params: src.manifest.params, files });
     await expect(openProfileStore(bad)).rejects.toThrow(StoreError);
