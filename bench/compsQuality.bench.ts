@@ -9,6 +9,7 @@
  * Prints the mean ratio (top-10 comps' true-talent distance / the 10 truly nearest players'; 1.0 is
  * perfect, lower is better) per league, then the mean and spread (sd) over the leagues.
  */
+import { aim } from './lib/aim.ts';
 import { benchLeagues, withBenchLeague } from './leagues.ts';
 import type { ProfileStore } from '../src/store/ProfileStore.ts';
 import { DEFAULT_COMPS_OPTIONS, type CompsOptions } from '../src/query/findComps.ts';
@@ -89,6 +90,15 @@ export async function runCompsQuality(playerSeasons: number, leagueCount = 4): P
     });
     lines.push(`${talents.padEnd(11)} ${cells.join(' | ')}`);
   }
+  // The README's claims for the default (skill families): better than plain z-scores on both truths in
+  // every league, and better than the whole-group weighting on production in every league.
+  const beats = (talents: 'all' | 'production', other: Scheme): number =>
+    leagueNames.filter((_, i) => (perLeague.get(`${talents}|families`)?.[i] ?? Infinity) < (perLeague.get(`${talents}|${other}`)?.[i] ?? -Infinity)).length;
+  const everyLeague = { atLeast: leagueNames.length, unit: 'leagues' } as const;
+  lines.push('', 'aims for the default (skill families), in leagues won:');
+  lines.push(`  beats plain z-scores, all talents: ${beats('all', 'plain')} ${aim('quality: families beat plain z-scores on all talents', beats('all', 'plain'), everyLeague)}`);
+  lines.push(`  beats plain z-scores, production: ${beats('production', 'plain')} ${aim('quality: families beat plain z-scores on production', beats('production', 'plain'), everyLeague)}`);
+  lines.push(`  beats the whole-group weighting, production: ${beats('production', 'whole-group')} ${aim('quality: families beat the whole-group weighting on production', beats('production', 'whole-group'), everyLeague)}`);
   lines.push('', 'per group over leagues and levels, mean:');
   for (const talents of ['all', 'production'] as const) {
     const cells = GROUPS.map((grp) => {

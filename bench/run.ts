@@ -18,7 +18,7 @@ const BENCHES: readonly { name: string; file: string; args: readonly string[]; w
   { name: 'embed', file: 'embed.bench.ts', args: [], what: 'autoencoder training time at 100,000 rows' },
   { name: 'embed-quality', file: 'embedQuality.bench.ts', args: ['30000', 'none,pca,autoencoder'], what: 'comps quality in the input, PCA and autoencoder spaces' },
   { name: 'outlook', file: 'outlook.bench.ts', args: [], what: 'prospect outlook calibration, Brier score and rank correlation against the base rate' },
-  { name: 'serve', file: 'serve.bench.ts', args: ['20', '20'], what: 'HTTP load on the comps endpoint (20 connections, 20 s)' },
+  { name: 'serve', file: 'serve.bench.ts', args: ['20', '20'], what: 'HTTP load on the comps endpoint (20 connections, 20 s each: default cache, --cache 0, --cache 0 with reloads every 0.3 s; then 200 connections)' },
   { name: 'fuzz', file: 'fuzz.bench.ts', args: [], what: 'fuzzing: 10,000 store and 10,000 roster mutants, command lines and API requests, each in a child process' },
 ];
 

@@ -17,6 +17,8 @@ export interface ServeLoad {
   readonly paths: readonly string[];
   readonly connections: number;
   readonly seconds: number;
+  /** Something to do beside the load (e.g. reloads), started once the server answers; returns its stop. */
+  readonly beside?: (url: string) => () => Promise<void>;
 }
 
 export async function serveUnderLoad(load: ServeLoad): ReturnType<typeof autocannon> {
@@ -35,12 +37,17 @@ export async function serveUnderLoad(load: ServeLoad): ReturnType<typeof autocan
     let next = 0;
     const warm = await fetch(new URL(load.paths[0] ?? '/api/info', url));
     if (warm.status !== 200) throw new Error(`warm-up answered ${warm.status}`);
-    return await autocannon({
-      url,
-      connections: load.connections,
-      duration: load.seconds,
-      requests: [{ setupRequest: (req) => ({ ...req, path: load.paths[next++ % load.paths.length] ?? '/api/info' }) }],
-    });
+    const stop = load.beside?.(url);
+    try {
+      return await autocannon({
+        url,
+        connections: load.connections,
+        duration: load.seconds,
+        requests: [{ setupRequest: (req) => ({ ...req, path: load.paths[next++ % load.paths.length] ?? '/api/info' }) }],
+      });
+    } finally {
+      await stop?.();
+    }
   } finally {
     child.kill('SIGTERM');
     await new Promise((r) => child.once('exit', r));
