@@ -14,7 +14,7 @@ const VALUES: readonly string[] = [
   '', '0', '1', '2', '-1', '3', '10', '50', '51', '200', '2.5', '0.5', '1.5', '1e309', '-1e309', 'NaN', 'Infinity', '9007199254740993', '0x10', '007',
   '2015', '2020', '9999', '1800', '2015-2020', '2020-2015', '20152020', '2015-', '-2020', '2015--2020', '21-24', '2530', '25-30', '30-25', '100', '-5-3',
   'obp=.300', 'obp=.300,obp=.400', 'obp=5', 'obp=60g', 'obp=90g', 'k_pct=.2,bb_pct=.1', 'obp=2,obp=0', 'obp=2', 'obp=-1', 'obp=1e309', 'nothing=1', 'obp',
-  'pop_2b_s=1.90', 'fip=3.5,k_pct=.3', 'SS', 'SS,2B', 'C', 'SP', 'RP', 'XX', 'L', 'R', 'S', 'L,R', 'Q', 'MLB', 'AAA', 'AA,AAA', 'ZZZ',
+  'pop_2b_s=1.90', 'fip=3.5,k_pct=.3', 'SS', 'SS,2B', 'C', 'SP', 'RP', 'XX', 'L', 'R', 'S', 'L,R', 'Q', 'Top', 'Elite', 'High,Elite', 'ZZZ',
   'json', 'csv', 'table', 'bat', 'glove', 'power', 'speed', 'results', 'stuff', 'command', 'redundancy', 'plain', 'IF', 'OF',
   '1000000', '0.000001', '\u001b[2J', '\u202eevil', '=1+1', '../etc/passwd', 'x'.repeat(3000), 'é', ' 5 ', '5,', ',', '%', '%00',
 ];

@@ -21,7 +21,7 @@ export interface RosterMutant {
 export const BAD_CELLS: readonly string[] = [
   '', ' ', 'NaN', 'nan', 'Infinity', '-Infinity', '-1', '-0', '0', '1e309', '1e-309', '9'.repeat(40), '0x10', '007', ' 12 ', '12.', '.5', '1,5',
   'abc', 'null', 'TRUE', '"', '""', "'", '=HYPERLINK("http://x","y")', '+cmd|/c calc', '@SUM(A1)', '-2+3', '\t=1', '\u001b[2J\u001b]0;x\u0007',
-  '\u202eevil', '\u0000', 'é', '\uFEFF1', '2090-01-01', '0001-01-01', '1999-02-30', '9999', '1800', '2026', 'MLB', 'AAA', 'ZZZ', 'SS', 'XX', 'L', 'S', 'Q',
+  '\u202eevil', '\u0000', 'é', '\uFEFF1', '2090-01-01', '0001-01-01', '1999-02-30', '9999', '1800', '2026', 'Top', 'Elite', 'ZZZ', 'SS', 'XX', 'L', 'S', 'Q',
   'x'.repeat(20_000), '12\n34', '1;2',
 ];
 
