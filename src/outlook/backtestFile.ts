@@ -9,8 +9,9 @@ import { z } from 'zod';
 
 export { BACKTEST_FILE } from '../store/storeFileNames.ts';
 export const BACKTEST_FORMAT = 'kindred-backtest';
-export const BACKTEST_VERSION = 1;
+export const BACKTEST_VERSION = 2;
 
+const feature = z.enum(['comps', 'matched', 'sample', 'age', 'path', 'profile']);
 const interval = z.strictObject({ value: z.number().nullable(), low: z.number().nullable(), high: z.number().nullable() });
 
 export const kindSummarySchema = z.strictObject({
@@ -41,8 +42,14 @@ export const fittedSchema = z.strictObject({
   peak_scores: z.number().int(),
   seasons_widening: z.number().nullable(),
   seasons_scores: z.number().int(),
-  /** [level index, mean log(1 + sample)] of the training forecasts. */
+  /** The peak regression's coefficients (intercept first) and the residual quantiles of its p10 and p90; null with the blend. */
+  peak_model: z.array(z.number()).nullable(),
+  peak_residual: z.tuple([z.number(), z.number()]).nullable(),
+  overall_peak: z.number(),
+  /** [level index, mean log(1 + sample)] and [level index, mean age] of the training forecasts. */
   sample_centre: z.array(z.tuple([z.number().int(), z.number()])),
+  age_centre: z.array(z.tuple([z.number().int(), z.number()])),
+  profile_dims: z.array(z.string()),
 });
 
 export const backtestFileSchema = z.strictObject({
@@ -53,9 +60,12 @@ export const backtestFileSchema = z.strictObject({
   k: z.number().int(),
   calibration: z.strictObject({
     method: z.enum(['logistic', 'isotonic']),
-    features: z.array(z.enum(['comps', 'matched', 'sample'])),
+    features: z.array(feature),
     shrink: z.number(),
     alpha: z.number(),
+    peak: z.enum(['blend', 'scaled', 'regression']),
+    peak_features: z.array(feature),
+    ridge: z.number(),
   }),
   cuts: z.array(z.number().int()),
   too_short: z.string().nullable(),

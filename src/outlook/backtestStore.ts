@@ -87,7 +87,7 @@ export function backtestStore(store: ProfileStore, outcomes: Outcomes, options: 
     store_created_at: store.opened.manifest.createdAt,
     horizon,
     k: prospect.comps.k,
-    calibration: { method: choice.method, features: [...choice.features], shrink: choice.shrink, alpha: choice.alpha },
+    calibration: { method: choice.method, features: [...choice.features], shrink: choice.shrink, alpha: choice.alpha, peak: choice.peak, peak_features: [...choice.peakFeatures], ridge: choice.ridge },
     cuts: [...result.cuts],
     too_short: result.tooShort,
     seconds: Number(((performance.now() - started) / 1000).toFixed(1)),
@@ -101,7 +101,12 @@ export function backtestStore(store: ProfileStore, outcomes: Outcomes, options: 
       peak_scores: f.peakScores,
       seasons_widening: Number.isFinite(f.seasonsWidening) ? f.seasonsWidening : null,
       seasons_scores: f.seasonsScores,
-      sample_centre: [...f.sampleCentre].map(([level, v]) => [level, Number(v.toFixed(5))] as [number, number]),
+      peak_model: f.peakModel ? [...f.peakModel.coefficients] : null,
+      peak_residual: Number.isFinite(f.peakResidual[0]) && Number.isFinite(f.peakResidual[1]) ? [f.peakResidual[0], f.peakResidual[1]] : null,
+      overall_peak: f.overallPeak,
+      sample_centre: [...f.sampleCentre],
+      age_centre: [...f.ageCentre],
+      profile_dims: [...f.profileDims],
     })),
   };
   return { result, fitted, file };
@@ -144,7 +149,8 @@ export async function readBacktestFile(store: ProfileStore): Promise<{ file: Bac
 export function fittedFromFile(file: BacktestFile, kind: OutcomeKind): FittedCalibration | null {
   const f = file.fitted.find((x) => x.kind === kind);
   if (!f) return null;
-  const choice: CalibrationChoice = { ...file.calibration, features: [...file.calibration.features] };
+  const cal = file.calibration;
+  const choice: CalibrationChoice = { method: cal.method, features: [...cal.features], shrink: cal.shrink, alpha: cal.alpha, peak: cal.peak, peakFeatures: [...cal.peak_features], ridge: cal.ridge };
   return {
     choice,
     training: f.training,
@@ -154,7 +160,12 @@ export function fittedFromFile(file: BacktestFile, kind: OutcomeKind): FittedCal
     peakScores: f.peak_scores,
     seasonsWidening: f.seasons_widening ?? Infinity,
     seasonsScores: f.seasons_scores,
+    peakModel: f.peak_model ? { coefficients: f.peak_model } : null,
+    peakResidual: f.peak_residual ?? [NaN, NaN],
     overall: f.overall,
+    overallPeak: f.overall_peak,
     sampleCentre: new Map(f.sample_centre),
+    ageCentre: new Map(f.age_centre),
+    profileDims: f.profile_dims,
   };
 }

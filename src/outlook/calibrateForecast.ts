@@ -1,17 +1,22 @@
 import { conformalQuantile, rangeScore } from '../stats/conformalQuantile.ts';
 import type { RawForecast, Spread } from './collectForecasts.ts';
 import { fitLogistic, logisticProbability, type LogisticFit } from '../stats/fitLogistic.ts';
+import { fitRidge, ridgePrediction, type RidgeFit } from '../stats/fitRidge.ts';
 import { applyIsotonicMap, fitIsotonicMap, type IsotonicMap } from '../stats/isotonicRegression.ts';
 
 /**
- * Inputs of the reached-the-top-level model (project choices, decided by bench/outlook.bench.ts), each
- * measured against the level-and-age base rate b, which is the model's offset (its log-odds enter with
- * coefficient 1, so with no evidence the forecast is the base rate known at the cut):
- * - comps: logit(shrunk comps' share) - logit(b);
- * - matched: logit(matched base rate) - logit(b) (0 unless the pool has a band or path);
- * - sample: log(1 + PA or BF) minus its mean at that level in the training forecasts (playing time).
+ * Inputs of the reached-the-top-level model and of the peak model (project choices, decided by
+ * bench/outlook.bench.ts). The reach model's offset is the log-odds of the level-and-age base rate b
+ * (coefficient 1: with no evidence the forecast is the base rate known at the cut); the peak model's is
+ * the matched base rate's peak p50.
+ * - comps: reach: logit(shrunk comps' share) - logit(b); peak: the comps' and base rate's blended p50 minus the base rate's p50;
+ * - matched: reach: logit(matched base rate) - logit(b) (0 unless the pool has a band or path); peak: unused (0);
+ * - sample: log(1 + PA or BF) minus its mean at that level in the training forecasts (playing time);
+ * - age: age minus the mean age at that level in the training forecasts (young for the level);
+ * - path: two 0/1 terms, at the same level the season before (repeating it), and without a profile the season before;
+ * - profile: his own standardised profile, one term per dimension (missing: 0, the stratum mean).
  */
-export type CalibrationFeature = 'comps' | 'matched' | 'sample';
+export type CalibrationFeature = 'comps' | 'matched' | 'sample' | 'age' | 'path' | 'profile';
 
 export interface CalibrationChoice {
   /** Map of the features to a probability: a fitted logistic (Platt 1999) or, on the comps feature alone, PAV isotonic (Zadrozny and Elkan 2002). */
@@ -24,12 +29,27 @@ export interface CalibrationChoice {
   readonly shrink: number;
   /** Nominal miscoverage of the ranges (0.2: p10 to p90). */
   readonly alpha: number;
+  /**
+   * The peak's p50 and range: `blend`, the comps' and base rate's p10 / p50 / p90 blended and widened by
+   * split conformal (CQR score); `scaled`, the same with the score divided by the blended range's width
+   * (locally weighted conformal, Lei et al. 2018 section 5.2), so the widening grows with the range; `regression`, a ridge regression of the realised peak on `peakFeatures`
+   * with the base rate's p50 as offset, its range from cross-fitted residual quantiles (split conformal).
+   */
+  readonly peak: 'blend' | 'scaled' | 'regression';
+  readonly peakFeatures: readonly CalibrationFeature[];
+  /** Ridge penalty of both models on their slopes (features are on a unit-ish scale). */
+  readonly ridge: number;
 }
 
-export const DEFAULT_CALIBRATION: CalibrationChoice = { method: 'logistic', features: ['comps', 'sample'], shrink: 5, alpha: 0.2 };
+export const DEFAULT_CALIBRATION: CalibrationChoice = {
+  method: 'logistic', features: ['comps', 'sample'], shrink: 5, alpha: 0.2, peak: 'blend', peakFeatures: ['comps'], ridge: 2,
+};
 
 /** Training forecasts need a level-and-age base rate resting on at least this many player-seasons. */
 export const MIN_BASE_PLAYERS = 20;
+
+/** Folds of the cross-fitted peak residuals. */
+const FOLDS = 5;
 
 /** A fitted calibration for one kind of player (hitters or pitchers), from forecasts whose truth is known. */
 export interface FittedCalibration {
@@ -37,15 +57,22 @@ export interface FittedCalibration {
   readonly training: number;
   readonly logistic: LogisticFit | null;
   readonly isotonic: IsotonicMap | null;
-  /** Conformal widening of the peak range and of the top-level seasons range (conformalQuantile, CQR score). */
+  /** Conformal widening of the blended peak range (CQR score; `blend`), and of the top-level seasons range. */
   readonly peakWidening: number;
   readonly peakScores: number;
   readonly seasonsWidening: number;
   readonly seasonsScores: number;
-  /** Overall share reached in training (used when a forecast has no base rate at all). */
+  /** `regression`: the peak model, and the residual quantiles added to its fit for p10 and p90. */
+  readonly peakModel: RidgeFit | null;
+  readonly peakResidual: readonly [number, number];
+  /** Overall share reached and mean realised peak in training (when a forecast has no base rate at all). */
   readonly overall: number;
-  /** Mean log(1 + sample) by level index in training (the centre of the sample feature). */
+  readonly overallPeak: number;
+  /** Means by level index in training: log(1 + sample), and age (the centres of those features). */
   readonly sampleCentre: ReadonlyMap<number, number>;
+  readonly ageCentre: ReadonlyMap<number, number>;
+  /** Dimension names of the profile feature, in order. */
+  readonly profileDims: readonly string[];
 }
 
 export interface CalibratedForecast {
@@ -75,15 +102,35 @@ function anchorOf(r: RawForecast, overall: number): number {
   return logit(finiteOr(r.levelAge.share, baseShare(r, overall)));
 }
 
-function featuresOf(r: RawForecast, c: CalibrationChoice, overall: number, centre: ReadonlyMap<number, number>): number[] {
-  const anchor = anchorOf(r, overall);
-  return c.features.map((f) => {
+/** The peak model's offset: the matched base rate's p50, else the training mean. */
+function peakAnchorOf(r: RawForecast, overallPeak: number): number {
+  return finiteOr(r.matched.peak.p50, overallPeak);
+}
+
+interface Centres {
+  readonly overall: number;
+  readonly overallPeak: number;
+  readonly sampleCentre: ReadonlyMap<number, number>;
+  readonly ageCentre: ReadonlyMap<number, number>;
+  readonly profileDims: readonly string[];
+}
+
+function featuresOf(r: RawForecast, features: readonly CalibrationFeature[], target: 'reach' | 'peak', c: CalibrationChoice, k: Centres): number[] {
+  const out: number[] = [];
+  for (const f of features) {
     switch (f) {
-      case 'comps': return logit(shrunkShare(r, c.shrink, overall)) - anchor;
-      case 'matched': return logit(baseShare(r, overall)) - anchor;
-      case 'sample': return Math.log1p(r.sample) - (centre.get(r.level) ?? Math.log1p(r.sample));
+      case 'comps':
+        if (target === 'reach') out.push(logit(shrunkShare(r, c.shrink, k.overall)) - anchorOf(r, k.overall));
+        else out.push(finiteOr(rawRanges(r, c.shrink).peak.p50 - peakAnchorOf(r, k.overallPeak), 0));
+        break;
+      case 'matched': out.push(target === 'reach' ? logit(baseShare(r, k.overall)) - anchorOf(r, k.overall) : 0); break;
+      case 'sample': out.push(Math.log1p(r.sample) - (k.sampleCentre.get(r.level) ?? Math.log1p(r.sample))); break;
+      case 'age': out.push(finiteOr(r.age - (k.ageCentre.get(r.level) ?? r.age), 0)); break;
+      case 'path': out.push(r.levelBefore === r.level ? 1 : 0, r.levelBefore < 0 ? 1 : 0); break;
+      case 'profile': for (const name of k.profileDims) out.push(finiteOr(r.profile[name] ?? NaN, 0)); break;
     }
-  });
+  }
+  return out;
 }
 
 /** The comps' and the matched base rate's spreads blended, weight n / (n + shrink) on the comps. */
@@ -101,29 +148,46 @@ function rawRanges(r: RawForecast, shrink: number): { peak: Spread; seasons: Spr
   return { peak: blend(r.comps.peak, r.matched.peak, shrink), seasons: blend(r.comps.seasons, r.matched.seasons, shrink) };
 }
 
+/** A range's width for the scaled score, at least 1 (a point range still gets a widening). */
+const widthOf = (s: Spread): number => Math.max(1, s.p90 - s.p10);
+
+const meanBy = (rows: readonly RawForecast[], value: (r: RawForecast) => number): Map<number, number> => {
+  const sums = new Map<number, { s: number; n: number }>();
+  for (const r of rows) {
+    const v = value(r);
+    if (!Number.isFinite(v)) continue;
+    const e = sums.get(r.level) ?? { s: 0, n: 0 };
+    e.s += v;
+    e.n++;
+    sums.set(r.level, e);
+  }
+  return new Map([...sums].map(([level, e]) => [level, e.s / e.n]));
+};
+
 /**
  * Fits the calibration on forecasts with a known truth (all of one kind): the probability map on the
- * features, and the conformal widening of the ranges from the same forecasts' scores (the ranges are
- * not fitted, so these scores are out-of-sample for them).
+ * features, the peak model, and the conformal adjustment of the ranges (from scores the ranges were not
+ * fitted on: the blended ranges are not fitted at all; the regression's residuals are cross-fitted).
  */
 export function fitCalibration(rows: readonly RawForecast[], choice: CalibrationChoice = DEFAULT_CALIBRATION): FittedCalibration {
   const known = rows.filter((r) => r.truth !== null && r.levelAge.n >= MIN_BASE_PLAYERS);
   const overall = known.length > 0 ? known.filter((r) => r.truth?.reached).length / known.length : 0.5;
+  const peaks = known.filter((r) => r.truth?.peak !== null && r.truth?.peak !== undefined);
+  const overallPeak = peaks.length > 0 ? peaks.reduce((a, r) => a + (r.truth?.peak ?? 0), 0) / peaks.length : 100;
+  const uses = (f: CalibrationFeature): boolean => choice.features.includes(f) || (choice.peak === 'regression' && choice.peakFeatures.includes(f));
+  const centres: Centres = {
+    overall, overallPeak,
+    sampleCentre: meanBy(known, (r) => Math.log1p(r.sample)),
+    ageCentre: meanBy(known, (r) => r.age),
+    profileDims: uses('profile') ? [...new Set(known.flatMap((r) => Object.keys(r.profile)))].sort() : [],
+  };
   const y = known.map((r) => r.truth?.reached === true);
-  const sums = new Map<number, { s: number; n: number }>();
-  for (const r of known) {
-    const e = sums.get(r.level) ?? { s: 0, n: 0 };
-    e.s += Math.log1p(r.sample);
-    e.n++;
-    sums.set(r.level, e);
-  }
-  const sampleCentre = new Map([...sums].map(([level, e]) => [level, e.s / e.n]));
   let logistic: LogisticFit | null = null;
   let isotonic: IsotonicMap | null = null;
   if (known.length > 0) {
     if (choice.method === 'logistic') {
-      logistic = fitLogistic(known.map((r) => featuresOf(r, choice, overall, sampleCentre)), y, {
-        ridge: 2, penaliseIntercept: true, offsets: known.map((r) => anchorOf(r, overall)),
+      logistic = fitLogistic(known.map((r) => featuresOf(r, choice.features, 'reach', choice, centres)), y, {
+        ridge: choice.ridge, penaliseIntercept: true, offsets: known.map((r) => anchorOf(r, overall)),
       });
     } else isotonic = fitIsotonicMap(known.map((r) => shrunkShare(r, choice.shrink, overall)), y.map((v) => (v ? 1 : 0)));
   }
@@ -132,8 +196,26 @@ export function fitCalibration(rows: readonly RawForecast[], choice: Calibration
     const { peak, seasons } = rawRanges(r, choice.shrink);
     const t = r.truth;
     if (t === null) continue;
-    if (t.peak !== null && Number.isFinite(peak.p10)) peakScores.push(rangeScore(t.peak, peak.p10, peak.p90));
+    if (t.peak !== null && Number.isFinite(peak.p10)) peakScores.push(rangeScore(t.peak, peak.p10, peak.p90) / (choice.peak === 'scaled' ? widthOf(peak) : 1));
     if (Number.isFinite(seasons.p10)) seasonScores.push(rangeScore(t.seasons, seasons.p10, seasons.p90));
+  }
+  let peakModel: RidgeFit | null = null;
+  let peakResidual: readonly [number, number] = [NaN, NaN];
+  if (choice.peak === 'regression' && peaks.length > 0) {
+    const xs = peaks.map((r) => featuresOf(r, choice.peakFeatures, 'peak', choice, centres));
+    const ys = peaks.map((r) => (r.truth?.peak ?? 0) - peakAnchorOf(r, overallPeak));
+    peakModel = fitRidge(xs, ys, choice.ridge);
+    // cross-fitted residuals (each row's from a fit without its fold), so the quantiles are out of sample
+    const residuals: number[] = [];
+    for (let fold = 0; fold < FOLDS; fold++) {
+      const inFold = (i: number): boolean => i % FOLDS === fold;
+      const train = xs.map((_, i) => i).filter((i) => !inFold(i));
+      if (train.length === 0) continue;
+      const m = fitRidge(train.map((i) => xs[i] as number[]), train.map((i) => ys[i] as number), choice.ridge);
+      xs.forEach((x, i) => { if (inFold(i)) residuals.push((ys[i] as number) - ridgePrediction(m, x)); });
+    }
+    // two one-sided split-conformal quantiles at alpha / 2 each (Lei et al. 2018; Romano et al. 2019, asymmetric form)
+    peakResidual = [-conformalQuantile(residuals.map((e) => -e), choice.alpha / 2), conformalQuantile(residuals, choice.alpha / 2)];
   }
   return {
     choice,
@@ -141,19 +223,24 @@ export function fitCalibration(rows: readonly RawForecast[], choice: Calibration
     logistic,
     isotonic,
     peakWidening: conformalQuantile(peakScores, choice.alpha),
-    peakScores: peakScores.length,
+    peakScores: choice.peak === 'regression' ? peaks.length : peakScores.length,
     seasonsWidening: conformalQuantile(seasonScores, choice.alpha),
     seasonsScores: seasonScores.length,
+    peakModel,
+    peakResidual,
     overall,
-    sampleCentre,
+    overallPeak,
+    sampleCentre: centres.sampleCentre,
+    ageCentre: centres.ageCentre,
+    profileDims: centres.profileDims,
   };
 }
 
-/** The calibrated forecast of one prospect-season: the probability from the fitted map, the ranges widened (or narrowed) by the conformal quantile. */
+/** The calibrated forecast of one prospect-season: the probability from the fitted map, the peak from its model, the ranges adjusted to their coverage. */
 export function calibrateForecast(fit: FittedCalibration, r: RawForecast, horizon: number): CalibratedForecast {
   const c = fit.choice;
   let reached: number;
-  if (fit.logistic) reached = logisticProbability(fit.logistic, featuresOf(r, c, fit.overall, fit.sampleCentre), anchorOf(r, fit.overall));
+  if (fit.logistic) reached = logisticProbability(fit.logistic, featuresOf(r, c.features, 'reach', c, fit), anchorOf(r, fit.overall));
   else if (fit.isotonic) reached = applyIsotonicMap(fit.isotonic, shrunkShare(r, c.shrink, fit.overall));
   else reached = shrunkShare(r, c.shrink, fit.overall);
   const { peak, seasons } = rawRanges(r, c.shrink);
@@ -161,9 +248,13 @@ export function calibrateForecast(fit: FittedCalibration, r: RawForecast, horizo
     if (!Number.isFinite(s.p10) || !Number.isFinite(q)) return { ...s, p10: NaN, p90: NaN };
     return { n: s.n, p10: Math.max(lo, Math.min(s.p50, s.p10 - q)), p50: s.p50, p90: Math.min(hi, Math.max(s.p50, s.p90 + q)) };
   };
-  return {
-    reached,
-    peak: widen(peak, fit.peakWidening, -Infinity, Infinity),
-    seasons: widen(seasons, fit.seasonsWidening, 0, horizon),
-  };
+  let peakOut: Spread;
+  if (c.peak === 'regression' && fit.peakModel) {
+    const p50 = peakAnchorOf(r, fit.overallPeak) + ridgePrediction(fit.peakModel, featuresOf(r, c.peakFeatures, 'peak', c, fit));
+    const [lo, hi] = fit.peakResidual;
+    peakOut = Number.isFinite(lo) && Number.isFinite(hi)
+      ? { n: peak.n, p10: p50 + Math.min(0, lo), p50, p90: p50 + Math.max(0, hi) }
+      : { n: peak.n, p10: NaN, p50, p90: NaN };
+  } else peakOut = widen(peak, fit.peakWidening * (c.peak === 'scaled' && Number.isFinite(peak.p10) ? widthOf(peak) : 1), -Infinity, Infinity);
+  return { reached, peak: peakOut, seasons: widen(seasons, fit.seasonsWidening, 0, horizon) };
 }

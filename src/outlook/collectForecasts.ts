@@ -2,6 +2,7 @@ import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts
 import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { playerTarget } from '../query/playerTarget.ts';
 import { findProspectComps, type ProspectOptions } from '../jobs/findProspectComps.ts';
+import { storeAsOf } from './groupAsOf.ts';
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 import { peakOf, type Outcomes } from './Outcomes.ts';
 import { peakSummaryOf } from './summariseOutlook.ts';
@@ -27,6 +28,10 @@ export interface RawForecast {
   readonly age: number;
   /** PA (hitters) or BF (pitchers) that season. */
   readonly sample: number;
+  /** His highest level in his group the season before (-1: no profile that season). */
+  readonly levelBefore: number;
+  /** His standardised profile that season (as built at the end of it), by dimension name; missing dimensions absent. */
+  readonly profile: Readonly<Record<string, number>>;
   readonly comps: {
     readonly used: number;
     readonly effective: number;
@@ -59,8 +64,9 @@ const spreadOf = (q: { n: number; p10: number | null; p50: number | null; p90: n
 
 /**
  * Forecasts every prospect-season (a player's highest level below the top in a season, in his group,
- * with an age) as of the end of that season: findProspectComps with asOf = his season, so that only
- * what was known then enters (pool seasons before his, comp outcomes whose window had ended). These are
+ * with an age) as of the end of that season: findProspectComps with asOf = his season on the group as
+ * built then (groupAsOf: standardisation and weights from rows up to his season), so that only what was
+ * known then enters (pool seasons before his, comp outcomes whose window had ended). These are
  * the raw material of the rolling-origin backtest (runBacktest): a forecast at season t, with its
  * truth known by t + horizon, may calibrate forecasts at cuts from t + horizon on.
  * Per season and position group at most `perSeason` targets, chosen by Knuth's multiplicative hash of the player.
@@ -92,12 +98,17 @@ export function collectForecasts(store: ProfileStore, outcomes: Outcomes, option
       else bySeason.set(s, [i]);
     }
     for (const [season, rows] of [...bySeason].sort((a, b) => a[0] - b[0])) {
+      // the group as built at the end of the season: later rows, and their say in standardisation and weights, left out
+      const view = storeAsOf(store, group, season);
       const hash = (r: number): number => (((g.player[r] as number) + 1) * 2654435761 + season * 40503) % 4294967296;
       const chosen = rows.length > perSeason ? [...rows].sort((a, b) => hash(a) - hash(b)).slice(0, perSeason) : rows;
-      for (const row of chosen.sort((a, b) => a - b)) {
-        const target = playerTarget(store, { group, row });
-        const result = findProspectComps(store, outcomes, target, { ...options.prospect, asOf: season, includeCensored: false });
-        out.push(rawForecastOf(g, group, row, result.outlook, outcomes, horizon, reachedOf));
+      const vg = view.groups.get(group) ?? g;
+      // a profile that could not be standardised then (a stratum still too thin without later seasons) is left out
+      const known = (row: number): boolean => vg.dims.some((_, j) => !Number.isNaN(vg.z[row * vg.d + j] as number) && (vg.redundancy[j] as number) > 0);
+      for (const row of chosen.filter(known).sort((a, b) => a - b)) {
+        const target = playerTarget(view, { group, row });
+        const result = findProspectComps(view, outcomes, target, { ...options.prospect, asOf: season, includeCensored: false });
+        out.push(rawForecastOf(vg, group, row, result.outlook, outcomes, horizon, reachedOf));
       }
     }
   }
@@ -115,6 +126,7 @@ export function rawForecastOf(
   return {
     kind, group, player: g.player[row] as number, row, season,
     level: g.level[row] as number, age: g.age[row] as number, sample: g.sample[row] as number,
+    levelBefore: highestLevelBefore(g, row), profile: profileOf(g, row),
     comps: { used: o.comps_used, effective: o.comps_effective, share: nan(o.reached_top_level), peak: spreadOf(peakSummaryOf(o)), seasons: spreadOf(o.top_level_seasons) },
     matched: { n: o.baseline.player_seasons, share: nan(o.baseline.reached_top_level), peak: spreadOf(peakSummaryOf(o.baseline)), seasons: spreadOf(o.baseline.top_level_seasons) },
     levelAge: levelAgeRate(g, row, Math.min(season, o.as_of_season), horizon, reachedOf),
@@ -147,4 +159,28 @@ function levelAgeRate(g: StoredGroup, row: number, season: number, horizon: numb
     hits += r;
   }
   return { n, share: n > 0 ? hits / n : NaN };
+}
+
+/** Highest level of each player-season of a group, keyed player * 10000 + season (cached per season column, which views share). */
+const highest = new WeakMap<Int32Array, Map<number, number>>();
+function highestLevelBefore(g: StoredGroup, row: number): number {
+  let m = highest.get(g.season);
+  if (!m) {
+    m = new Map();
+    for (let i = 0; i < g.n; i++) {
+      const key = (g.player[i] as number) * 10000 + (g.season[i] as number);
+      m.set(key, Math.max(m.get(key) ?? -1, g.level[i] as number));
+    }
+    highest.set(g.season, m);
+  }
+  return m.get((g.player[row] as number) * 10000 + (g.season[row] as number) - 1) ?? -1;
+}
+
+function profileOf(g: StoredGroup, row: number): Record<string, number> {
+  const out: Record<string, number> = {};
+  g.dims.forEach((dim, j) => {
+    const v = g.z[row * g.d + j] as number;
+    if (!Number.isNaN(v)) out[dim.name] = v;
+  });
+  return out;
 }

@@ -5,10 +5,7 @@ import { assembleSeasons, DEFAULT_MINIMUMS, type AssembledSeasons, type SampleMi
 import { measureDimensions, type MeasuredColumn } from './measureDimensions.ts';
 import { DEFAULT_SHRINKAGE, type ShrinkageOptions, type ShrinkageUsed } from './shrinkage.ts';
 import { standardiseByStratum, DEFAULT_STANDARDISE, type StandardiseOptions, type StratumStats } from './standardiseByStratum.ts';
-import { redundancyWeights } from './redundancyWeights.ts';
-import { reliability } from './reliability.ts';
-import { familyWeights } from './familyWeights.ts';
-import { DEFAULT_FAMILY_SHARES, SKILL_FAMILIES } from './skillFamily.ts';
+import { defaultWeights } from './defaultWeights.ts';
 import { groupOf, POSITION_GROUPS, type PositionGroup } from './positionGroup.ts';
 import { HITTER_DIMENSIONS } from './hitterDimensions.ts';
 import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
@@ -161,10 +158,8 @@ function assembleGroup(
   });
   const ids = new Map<string, number>();
   const playerNumber = (id: string): number => ids.get(id) ?? ids.set(id, ids.size).size - 1;
-  const rel = reliability(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season));
-  const families = dims.map((dim) => dim.family);
-  const within = redundancyWeights(z64, n, d, rel, 30, families.map((f) => SKILL_FAMILIES.indexOf(f)));
-  return { group, dims, meta, raw, z, strata, reliability: rel, redundancy: familyWeights(families, within, DEFAULT_FAMILY_SHARES), shrinkage };
+  const w = defaultWeights(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season), dims.map((dim) => dim.family));
+  return { group, dims, meta, raw, z, strata, reliability: w.reliability, redundancy: w.redundancy, shrinkage };
 }
 
 /** FIP constant of every season and level, from that league's lines (src/stats/leagueFip.ts). */
