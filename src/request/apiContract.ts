@@ -12,6 +12,8 @@ export type { CheaperComp, CheaperResult } from '../jobs/CheaperResult.ts';
 export type { MatchCandidate, MatchResult } from '../jobs/MatchResult.ts';
 export type { ProspectComp, ProspectResult } from '../jobs/ProspectResult.ts';
 export type { DimensionInfo } from '../profiles/Dimension.ts';
+/** `GET /api/backtest`: the prospect outlook replayed at past cut seasons (the format of a store's backtest.json). */
+export type { BacktestFile as BacktestAnswer } from '../outlook/backtestFile.ts';
 
 /** `GET /api/dims`: the dimensions of each position group (or of one). */
 export type DimsAnswer = Partial<Record<PositionGroup, readonly DimensionInfo[]>>;

@@ -51,8 +51,13 @@ export interface RequestValues {
   maxShare: number;
   q: string;
   limit: number;
-  group: PositionGroup;
+  group: GroupChoice;
+  cuts: number[];
+  charts: string;
 }
+
+/** A position group, or every group of one kind (`hitters`, `pitchers`). */
+export type GroupChoice = PositionGroup | 'hitters' | 'pitchers';
 
 export type ParameterKey = keyof RequestValues;
 
@@ -87,9 +92,11 @@ function preset(value: string): WeightPreset {
   return value;
 }
 
-function positionGroup(value: string): PositionGroup {
+function groupChoice(value: string): GroupChoice {
+  const word = value.trim().toLowerCase();
+  if (word === 'hitters' || word === 'pitchers') return word;
   const g = POSITION_GROUPS.find((x) => x === value.trim().toUpperCase());
-  if (g === undefined) throw new BadValue(`expected a position group (${POSITION_GROUPS.join(', ')}), got "${value}"`);
+  if (g === undefined) throw new BadValue(`expected hitters, pitchers or a position group (${POSITION_GROUPS.join(', ')}), got "${value}"`);
   return g;
 }
 
@@ -99,7 +106,7 @@ function positionGroup(value: string): PositionGroup {
  */
 export const PARAMETERS: { readonly [K in ParameterKey]: Parameter<RequestValues[K]> } = {
   store: {
-    name: 'store', value: 'dir', help: 'store folder made by kindred build', parse: v.text, default: DEFAULT_STORE, jobs: [...TARGET_JOBS, 'dims'], only: 'cli',
+    name: 'store', value: 'dir', help: 'store folder made by kindred build', parse: v.text, default: DEFAULT_STORE, jobs: [...TARGET_JOBS, 'dims', 'backtest'], only: 'cli',
     helpFor: { dims: 'store whose fitted regression constants to show beside the table (when the folder holds one)' },
   },
   player: {
@@ -172,11 +179,17 @@ export const PARAMETERS: { readonly [K in ParameterKey]: Parameter<RequestValues
   exact: { name: 'exact', help: 'scan the whole pool instead of asking the index', parse: v.flag, default: DEFAULT_COMPS_OPTIONS.exact, jobs: TARGET_JOBS },
   allSeasons: { name: 'all-seasons', help: 'allow several seasons of one comp player', parse: v.flag, default: DEFAULT_COMPS_OPTIONS.allSeasons, jobs: TARGET_JOBS },
   format: {
-    name: 'format', value: 'format', help: 'table, json or csv', parse: v.format, default: 'table', jobs: [...TARGET_JOBS, 'dims'], only: 'cli', helpFor: { dims: 'table or json' },
+    name: 'format', value: 'format', help: 'table, json or csv', parse: v.format, default: 'table', jobs: [...TARGET_JOBS, 'dims', 'backtest'], only: 'cli',
+    helpFor: { dims: 'table or json', backtest: 'table or json' },
   },
   q: { name: 'q', value: 'text', help: 'part of a player name or an id', parse: v.text, jobs: ['players'], only: 'http' },
   limit: { name: 'limit', value: 'n', help: 'most players to suggest', parse: v.wholeUpTo(MAX_PLAYERS_LIMIT), default: 10, jobs: ['players'], only: 'http' },
-  group: { name: 'group', value: 'group', help: `position group (${POSITION_GROUPS.join(', ')})`, parse: positionGroup, jobs: ['map'], only: 'http' },
+  group: {
+    name: 'group', value: 'group', help: `position group (${POSITION_GROUPS.join(', ')})`, parse: groupChoice, jobs: ['map', 'backtest'],
+    helpFor: { backtest: `hitters, pitchers or one position group (${POSITION_GROUPS.join(', ')}) (default: every group)` },
+  },
+  cuts: { name: 'cuts', value: 'seasons', help: 'cut seasons, comma-separated (default: every season that can be scored)', parse: v.seasons, jobs: ['backtest'] },
+  charts: { name: 'charts', value: 'dir', help: 'also write reliability and coverage charts (SVG) into this folder', parse: v.text, jobs: ['backtest'], only: 'cli' },
 };
 
 /** The keys of the table, in its order. */

@@ -62,6 +62,13 @@ export function list(value: string): string[] {
   return value.split(',').map((s) => s.trim()).filter((s) => s.length > 0);
 }
 
+/** "2014,2016,2018": one or more four-digit seasons, given back once each, in order. */
+export function seasons(value: string): number[] {
+  const each = list(value).map((s) => season(s));
+  if (each.length === 0) throw new BadValue(`expected seasons, e.g. 2014,2016,2018, got "${value}"`);
+  return [...new Set(each)].sort((a, b) => a - b);
+}
+
 export function position(value: string): Position {
   const v = value.trim().toUpperCase();
   if (!isPosition(v)) throw new BadValue(`expected a position (${POSITIONS.join(', ')}), got "${value}"`);

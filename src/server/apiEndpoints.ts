@@ -8,6 +8,7 @@ import { reloadEndpoint } from './api/reloadEndpoint.ts';
 import { prospectEndpoint } from './api/prospectEndpoint.ts';
 import { cheaperEndpoint } from './api/cheaperEndpoint.ts';
 import { matchEndpoint } from './api/matchEndpoint.ts';
+import { backtestEndpoint } from './api/backtestEndpoint.ts';
 
 /** Every JSON endpoint by its exact path. */
 export const API_ENDPOINTS: ReadonlyMap<string, Endpoint> = new Map([
@@ -15,6 +16,7 @@ export const API_ENDPOINTS: ReadonlyMap<string, Endpoint> = new Map([
   ['/api/prospect', prospectEndpoint],
   ['/api/cheaper', cheaperEndpoint],
   ['/api/match', matchEndpoint],
+  ['/api/backtest', backtestEndpoint],
   ['/api/players', playersEndpoint],
   ['/api/dims', dimsEndpoint],
   ['/api/map', mapEndpoint],

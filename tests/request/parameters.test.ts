@@ -5,6 +5,7 @@ import { prospectCommand } from '../../src/cli/commands/prospectCommand.ts';
 import { cheaperCommand } from '../../src/cli/commands/cheaperCommand.ts';
 import { matchCommand } from '../../src/cli/commands/matchCommand.ts';
 import { dimsCommand } from '../../src/cli/commands/dimsCommand.ts';
+import { backtestCommand } from '../../src/cli/commands/backtestCommand.ts';
 import { JOBS, type JobName } from '../../src/request/jobs.ts';
 import { defaultOf, PARAMETER_KEYS, PARAMETERS, parametersOf } from '../../src/request/parameters.ts';
 import { captureIo } from '../helpers/captureIo.ts';
@@ -16,6 +17,7 @@ const commands: [JobName, Command][] = [
   ['cheaper', cheaperCommand(io, () => {})],
   ['match', matchCommand(io, () => {})],
   ['dims', dimsCommand(io)],
+  ['backtest', backtestCommand(io)],
 ];
 
 describe('the request table', () => {

@@ -156,3 +156,26 @@ describe('GET /api/match answers what `kindred match --format json` prints', () 
     }
   });
 });
+
+describe('GET /api/backtest answers what `kindred backtest --format json` prints (one request table for both)', () => {
+  const withoutTime = (x: unknown): unknown => ({ ...(x as Record<string, unknown>), seconds: null });
+  it('for one position group at chosen cuts', async () => {
+    const expected = await cli(['backtest', '--group', 'SP', '--cuts', '2018,2020']);
+    const r = await get('/api/backtest?group=SP&cuts=2018,2020');
+    expect(r.status).toBe(200);
+    expect(withoutTime(json(r))).toEqual(withoutTime(expected));
+    expect((json(r) as { kinds: { kind: string }[] }).kinds.map((k) => k.kind)).toEqual(['pitcher']);
+  }, 120_000);
+  it('refuses bad parameters with 400, and the files and formats of the command line', async () => {
+    for (const [q, message] of [
+      ['cuts=soon', /parameter cuts: expected a four-digit season/],
+      ['group=catchers', /expected hitters, pitchers or a position group/],
+      ['charts=%2Ftmp', /unknown parameter "charts"/],
+      ['format=json', /unknown parameter "format"/],
+    ] as [string, RegExp][]) {
+      const r = await get(`/api/backtest?${q}`);
+      expect(r.status, q).toBe(400);
+      expect(errorOf(r).message).toMatch(message);
+    }
+  });
+});

@@ -10,6 +10,7 @@ import type { Endpoint } from '../Endpoint.ts';
 export function answerMap(loaded: LoadedStore, query: URLSearchParams): PoolMap {
   const group = readRequest('map', 'http', query).get('group');
   if (group === undefined) throw new ParameterError('group', `is required (${POSITION_GROUPS.join(', ')})`);
+  if (group === 'hitters' || group === 'pitchers') throw new ParameterError('group', `expected one position group (${POSITION_GROUPS.join(', ')}), got "${group}"`, { context: { value: group } });
   const m = loaded.map(group);
   if (!m) throw new QueryError('kindred.query.emptyPool', `the store has no ${group} profiles`, { group });
   return m;
