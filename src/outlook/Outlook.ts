@@ -54,13 +54,24 @@ export interface BacktestFigure {
  * the fitted map, the ranges adjusted by split conformal prediction, and how outlooks like this fared
  * when replayed at past cut seasons.
  */
+/** A calibrated p10 / p50 / p90 with the coverage its kind of range achieved in the backtest. */
+export interface CalibratedRange {
+  readonly p10: number | null;
+  readonly p50: number | null;
+  readonly p90: number | null;
+  readonly coverage: number | null;
+}
+
 export interface CalibratedOutlook {
   /** How the figures were made, in words (the pool, the probability map, the ranges). */
   readonly method: string;
   readonly reached_top_level: number;
-  /** p10 / p50 / p90 of the peak OPS+ (hitters) or best FIP- (pitchers), adjusted to 80% coverage. */
-  readonly peak: { readonly p10: number | null; readonly p50: number | null; readonly p90: number | null };
-  readonly top_level_seasons: { readonly p10: number | null; readonly p50: number | null; readonly p90: number | null };
+  /**
+   * p10 / p50 / p90 of the peak OPS+ (hitters) or best FIP- (pitchers), adjusted to 80% coverage, and
+   * `coverage`: the share of realised values such ranges held in the backtest (null without one).
+   */
+  readonly peak: CalibratedRange;
+  readonly top_level_seasons: CalibratedRange;
   /** On this roster, replayed at past cuts with only what was known then. */
   readonly backtest: {
     readonly cuts: readonly number[];

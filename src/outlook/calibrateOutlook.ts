@@ -63,8 +63,8 @@ export function calibrateOutlook(
       `fitted on ${fit.training} earlier forecasts of this roster; ranges: comps' and base rate's p10-p90 of ${peakName} and top-level seasons ` +
       `adjusted by split conformal prediction (Lei et al. 2018) to ${Math.round((1 - fit.choice.alpha) * 100)}% coverage`,
     reached_top_level: Number(c.reached.toFixed(3)),
-    peak: { p10: r1(c.peak.p10), p50: r1(c.peak.p50), p90: r1(c.peak.p90) },
-    top_level_seasons: { p10: r1(c.seasons.p10), p50: r1(c.seasons.p50), p90: r1(c.seasons.p90) },
+    peak: { p10: r1(c.peak.p10), p50: r1(c.peak.p50), p90: r1(c.peak.p90), coverage: summary.peak_coverage.value },
+    top_level_seasons: { p10: r1(c.seasons.p10), p50: r1(c.seasons.p50), p90: r1(c.seasons.p90), coverage: summary.seasons_coverage.value },
     backtest: {
       cuts: file.cuts,
       targets: summary.targets,

@@ -19,10 +19,11 @@ function calibratedLines(result: ProspectResult, peakLabel: string): string[] {
   const tri = (q: { p10: number | null; p50: number | null; p90: number | null }, d = 0): string => `${num(q.p10, d)} / ${num(q.p50, d)} / ${num(q.p90, d)}`;
   const cov = (x: number | null): string => (x === null ? '-' : `${Math.round(x * 100)}%`);
   return [
-    `Calibrated on this roster's history: reached the top level ${pct(c.reached_top_level)}; ${peakLabel} p10 / p50 / p90 ${tri(c.peak)}; top-level seasons ${tri(c.top_level_seasons)}`,
+    `Calibrated on this roster's history: reached the top level ${pct(c.reached_top_level)}`,
+    `  ${peakLabel} p10 / p50 / p90 ${tri(c.peak)} (such ranges held ${cov(c.peak.coverage)} in the backtest; nominal 80%)`,
+    `  top-level seasons p10 / p50 / p90 ${tri(c.top_level_seasons)} (held ${cov(c.top_level_seasons.coverage)})`,
     `On this roster, ${result.query.group === 'SP' || result.query.group === 'RP' ? 'pitcher' : 'hitter'} outlooks replayed at ${b.cuts[0] ?? '-'}-${b.cuts[b.cuts.length - 1] ?? '-'} (${b.targets.toLocaleString('en-US')} prospects, ${pct(b.reached_share)} reached the top level):`,
     `  Brier skill against the level-and-age base rate ${signed(b.skill_vs_level_age.value)}${span(b.skill_vs_level_age.low, b.skill_vs_level_age.high)};` +
-      ` p10-p90 held the ${peakLabel} ${cov(b.peak_coverage.value)} of the time and the top-level seasons ${cov(b.seasons_coverage.value)} (nominal 80%);` +
       ` Spearman of p50 with the realised ${peakLabel} ${num(b.spearman_peak.value, 2)}`,
     `  How: ${c.method}.`,
   ];

@@ -141,7 +141,7 @@ const prospectView: ViewDef = {
     const c = o.calibrated;
     const bt = c?.backtest;
     const calibrated = c && bt
-      ? ` Calibrated on this roster's history: ${pct(c.reached_top_level)}. On this roster, outlooks replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''} scored a Brier skill of ${bt.skill_vs_level_age.value ?? 'n/a'} against the level-and-age base rate, and their p10-p90 held the realised peak ${pct(bt.peak_coverage.value)} of the time (nominal 80%).`
+      ? ` Calibrated on this roster's history: ${pct(c.reached_top_level)}. On this roster, outlooks replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''} scored a Brier skill of ${bt.skill_vs_level_age.value ?? 'n/a'} against the level-and-age base rate, and their p10-p90 held the realised peak ${pct(c.peak.coverage)} and the top-level seasons ${pct(c.top_level_seasons.coverage)} of the time (nominal 80%).`
       : ` No calibrated outlook: ${o.calibration_note ?? 'no backtest stored'}.`;
     const warned = (result.warnings ?? []).map((w) => `${w} `).join('');
     const note = `${warned}Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_top_level)} reached the top level, against a base rate of ${pct(o.baseline.reached_top_level)} for ${o.baseline.player_seasons} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
