@@ -96,7 +96,7 @@ function groupChoice(value: string): GroupChoice {
   const word = value.trim().toLowerCase();
   if (word === 'hitters' || word === 'pitchers') return word;
   const g = POSITION_GROUPS.find((x) => x === value.trim().toUpperCase());
-  if (g === undefined) throw new BadValue(`expected hitters, pitchers or a position group (${POSITION_GROUPS.join(', ')}), got "${value}"`);
+  if (g === undefined) throw new BadValue(`expected a position group (${POSITION_GROUPS.join(', ')}), or hitters or pitchers where every group of a kind will do, got "${value}"`);
   return g;
 }
 

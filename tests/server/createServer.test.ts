@@ -217,6 +217,7 @@ describe('GET /api/map', () => {
   it('refuses a missing or unknown group', async () => {
     expect(errorOf(await get('/api/map')).message).toMatch(/^parameter group: is required/);
     expect(errorOf(await get('/api/map?group=ZZ')).message).toMatch(/expected a position group/);
+    expect(errorOf(await get('/api/map?group=hitters')).message).toMatch(/expected one position group/);
   });
 });
 

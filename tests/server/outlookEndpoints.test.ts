@@ -169,7 +169,7 @@ describe('GET /api/backtest answers what `kindred backtest --format json` prints
   it('refuses bad parameters with 400, and the files and formats of the command line', async () => {
     for (const [q, message] of [
       ['cuts=soon', /parameter cuts: expected a four-digit season/],
-      ['group=catchers', /expected hitters, pitchers or a position group/],
+      ['group=catchers', /expected a position group .* or hitters or pitchers/],
       ['charts=%2Ftmp', /unknown parameter "charts"/],
       ['format=json', /unknown parameter "format"/],
     ] as [string, RegExp][]) {
