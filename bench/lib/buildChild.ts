@@ -10,4 +10,5 @@ if (!roster || !store) throw new Error('usage: buildChild.ts <roster> <store>');
 const summary = await buildStore(roster, store, { lenient: false });
 const profiles = Object.values(summary.profiles).reduce((a, b) => a + b, 0);
 // maxRSS is the process's peak, worker threads included (they share the process)
-console.log(JSON.stringify({ seconds: summary.seconds, maxRssMb: process.resourceUsage().maxRSS / 1024, profiles, threads: availableParallelism() }));
+const cpu = process.cpuUsage(); // the whole process, worker threads included
+console.log(JSON.stringify({ seconds: summary.seconds, cpuSeconds: (cpu.user + cpu.system) / 1e6, maxRssMb: process.resourceUsage().maxRSS / 1024, profiles, threads: availableParallelism() }));

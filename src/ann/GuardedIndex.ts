@@ -85,13 +85,14 @@ export class GuardedIndex {
    * file it lists. A body corrupted at the same length can load and then crash the process at search.
    * As a second guard the file's structure is checked against `meta` in JS before the native reader
    * runs; after loading, the count and dimension are compared too. Any mismatch discards the native
-   * object and throws StoreError `kindred.store.corrupt`.
+   * object and throws StoreError `kindred.store.corrupt`. `verified`, when given, is the file's
+   * content as the caller read and verified it (then it is checked here instead of being read again).
    */
-  static load(path: string, meta: IndexMeta): GuardedIndex {
+  static load(path: string, meta: IndexMeta, verified?: Uint8Array): GuardedIndex {
     checkMeta(meta);
-    let bytes: Buffer;
+    let bytes: Uint8Array;
     try {
-      bytes = readFileSync(path);
+      bytes = verified ?? readFileSync(path);
     } catch (error) {
       throw withCause(
         new StoreError('kindred.store.corrupt', `${path}: cannot read the index file (${describe(error)})`, { file: path }),

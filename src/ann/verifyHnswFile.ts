@@ -76,8 +76,10 @@ export function verifyHnswFile(bytes: Uint8Array, meta: IndexMeta, file: string)
       const id = view.getUint32(base + 4 + 4 * l, true);
       if (id >= count) fail(`element ${i} links to ${id} (expected an id below ${count})`);
     }
-    const label = u64(base + labelOffset);
-    if (label >= count) fail(`element ${i} has label ${label} (expected a label below ${count})`);
+    // a uint64 label, read as two uint32 halves (a BigInt per element is slow on large indexes)
+    const labelLow = view.getUint32(base + labelOffset, true);
+    const labelHigh = view.getUint32(base + labelOffset + 4, true);
+    if (labelHigh !== 0 || labelLow >= count) fail(`element ${i} has label ${u64(base + labelOffset)} (expected a label below ${count})`);
   }
   const linksPerElement = maxM * 4 + 4;
   // First pass: each element's level (the native search trusts that a neighbour on level L has its

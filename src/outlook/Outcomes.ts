@@ -48,7 +48,7 @@ export class Outcomes {
     const indexOf = (id: string): number => {
       const i = playerIndex.get(id);
       if (i === undefined) {
-        throw new StoreError('kindred.store.corrupt', `${source}: player ${JSON.stringify(id)} is not in players.json; rebuild the store`, { file: source, value: id });
+        throw new StoreError('kindred.store.corrupt', `${source}: player ${JSON.stringify(id)} is not in the store's players (players.bin); rebuild the store`, { file: source, value: id });
       }
       return i;
     };

@@ -5,14 +5,14 @@ import { readRoster, type ColumnMap } from '../ingest/readRoster.ts';
 import { writeRejects } from '../ingest/writeRejects.ts';
 import { buildProfiles, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
 import type { GroupFile } from '../store/groupFile.ts';
-import { encodeGroupFiles } from '../store/encodeGroupFiles.ts';
-import { encodePlayersFile } from '../store/playersFile.ts';
+import { encodeGroupFiles, type GroupIndexes } from '../store/encodeGroupFiles.ts';
+import { encodePlayersFile, playerIndexOf } from '../store/playersFile.ts';
 import { encodeOutcomesFile } from '../store/outcomesFile.ts';
 import { chartsFolderOf, groupEmbeddingFileNames, groupFileNames, OUTCOMES_FILE, PLAYERS_FILE } from '../store/storeFileNames.ts';
 import { sha256Hex } from '../store/sha256Hex.ts';
 import { IndexBuildPool } from './IndexBuildPool.ts';
 import type { IndexParams } from '../ann/IndexParams.ts';
-import { writeStore } from '../store/writeStore.ts';
+import { StoreWriter } from '../store/writeStore.ts';
 import { checkStoreTarget, cleanLeftovers, lockStore } from '../store/storeTarget.ts';
 import { partitionByCoverage, type CoveragePartition } from '../ann/partitionByCoverage.ts';
 import { partitionVector } from '../ann/partitionVector.ts';
@@ -78,9 +78,27 @@ export async function buildStore(rosterDir: string, storeDir: string, options: B
   }
 }
 
-async function buildLocked(rosterDir: string, storeDir: string, options: BuildOptions): Promise<BuildSummary> {
-  const started = performance.now();
-  const progress = options.onProgress ?? (() => {});
+/** What the build keeps of the roster once the profiles are made (the roster itself is then let go). */
+interface ReadRoster {
+  /** The profiles by group; the build deletes each group once it is written, to let it be collected. */
+  readonly groups: Map<PositionGroup, GroupProfiles>;
+  readonly skipped: ProfileSet['skipped'];
+  readonly playerIndex: ReadonlyMap<string, number>;
+  readonly levels: readonly string[];
+  readonly playersFile: Uint8Array;
+  readonly outcomesFile: string;
+  readonly rowsRead: BuildSummary['rowsRead'];
+  readonly rejected: number;
+  readonly rejectsPath: string | null;
+  readonly notices: BuildSummary['notices'];
+}
+
+/**
+ * Reads the roster, writes its rejects, builds the profiles and encodes the players and outcomes
+ * files. Only these leave the function, so the parsed roster (the build's largest object) can be
+ * collected before the indexes are built.
+ */
+async function readAndProfile(rosterDir: string, storeDir: string, options: BuildOptions, progress: ProgressFn): Promise<ReadRoster> {
   const roster = await readRoster(rosterDir, {
     lenient: options.lenient,
     ...(options.columnMap ? { columnMap: options.columnMap } : {}),
@@ -93,42 +111,69 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
   }
   progress('profiles', 0, 1);
   const profiles = buildProfiles(roster, options.profile ?? DEFAULT_PROFILE_OPTIONS);
-  const files = new Map<string, Uint8Array | string>();
-  const { text: playersText, playerIndex } = encodePlayersFile(roster);
-  files.set(PLAYERS_FILE, playersText);
-  files.set(OUTCOMES_FILE, encodeOutcomesFile(computeOutcomes(roster)));
+  return {
+    groups: new Map(profiles.groups),
+    skipped: profiles.skipped,
+    playerIndex: playerIndexOf(roster),
+    levels: [...roster.levels],
+    playersFile: encodePlayersFile(roster, new Map([...profiles.groups].map(([group, g]) => [group, g.meta]))),
+    outcomesFile: encodeOutcomesFile(computeOutcomes(roster)),
+    rowsRead: roster.rowsRead,
+    rejected: roster.rejected.length,
+    rejectsPath,
+    notices: roster.notices,
+  };
+}
+
+type ProgressFn = NonNullable<BuildOptions['onProgress']>;
+
+async function buildLocked(rosterDir: string, storeDir: string, options: BuildOptions): Promise<BuildSummary> {
+  const started = performance.now();
+  const progress: ProgressFn = options.onProgress ?? (() => {});
+  const read = await readAndProfile(rosterDir, storeDir, options, progress);
+  const { playerIndex, levels, rejectsPath } = read;
+  const skipped = read.skipped;
+  /** Groups still to write; each is dropped once its files are written and its index vectors handed over. */
+  const pending = read.groups;
+  const groupCount = pending.size;
   const indexParams = options.index ?? DEFAULT_INDEX_PARAMS;
   const counts: Partial<Record<PositionGroup, number>> = {};
   const embed = resolveEmbedSettings(options.embed ?? {});
   const charts = new Map<string, string>();
   const embedded: Partial<Record<PositionGroup, { dim: number; seconds: number }>> = {};
+  // Files go to the store's temp folder as they are made, so the build never holds them all.
+  const writer = await StoreWriter.begin(storeDir);
   const scratch = await mkdtemp(join(tmpdir(), 'kindred-index-'));
   const pool = new IndexBuildPool(options.threads ?? availableParallelism());
-  /** Index builds in flight; each puts its file in `files` (at the place reserved for it) when saved. */
+  /** Index builds in flight; each writes its file into the store when saved. */
   const indexFiles: Promise<void>[] = [];
   const indexFile = (name: string, vectors: Float32Array, dim: number): void => {
-    files.set(name, new Uint8Array(0));
-    const built = pool.build(vectors, dim, indexParams, join(scratch, name)).then((bytes) => {
-      files.set(name, bytes);
+    const built = pool.build(vectors, dim, indexParams, join(scratch, name)).then(async (bytes) => {
+      await writer.add(name, bytes);
+      await rm(join(scratch, name), { force: true });
     });
     built.catch(() => {}); // awaited below; a failure must not go unhandled while the loop still runs
     indexFiles.push(built);
   };
   try {
+    await writer.add(PLAYERS_FILE, read.playersFile);
+    await writer.add(OUTCOMES_FILE, read.outcomesFile);
     let done = 0;
-    for (const [group, g] of profiles.groups) {
+    for (const group of [...pending.keys()]) {
+      const g = pending.get(group);
+      if (!g) continue;
       const names = groupFileNames(group);
       let e: EmbeddedGroup | null = null;
       if (embed.method !== 'none' && g.meta.length >= MIN_EMBED_ROWS && g.dims.length >= 2) {
-        progress(`embedding ${group}`, done, profiles.groups.size);
+        progress(`embedding ${group}`, done, groupCount);
         e = await embedProfiles(g, embed);
-        for (const [name, content] of e.files) files.set(name, content);
+        for (const [name, content] of e.files) await writer.add(name, content);
         for (const [name, svg] of e.charts) charts.set(name, svg);
         embedded[group] = { dim: e.dim, seconds: e.seconds };
       }
-      progress(`index ${group}`, done, profiles.groups.size);
+      progress(`index ${group}`, done, groupCount);
       let mainIndex: GroupFile['index'] = null;
-      const partitions: GroupFile['partitions'] = [];
+      const partitions: GroupIndexes['partitions'][number][] = [];
       if (e) {
         indexFile(names.index, e.vectors, e.dim);
         mainIndex = { ...indexParams, dim: e.dim, count: g.meta.length };
@@ -140,52 +185,54 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
             indexFile(names.partitionIndex(i), partitionVectors(g.z, g.dims.length, part, sqrtW), part.dims.length);
             meta = { ...indexParams, dim: part.dims.length, count: part.rows.length };
           }
-          partitions.push({ dims: [...part.dims], rows: [...part.rows], index: meta });
+          partitions.push({ dims: [...part.dims], rows: part.rows, index: meta });
         }
       }
-      const groupFiles = encodeGroupFiles(g, playerIndex, roster.levels, {
+      const groupFiles = encodeGroupFiles(g, playerIndex, levels, {
         index: mainIndex,
         partitions,
         ...(e ? { embedding: { space: e.space, dim: e.dim, sha256: embeddingChecksums(group, e.files) } } : {}),
       });
-      for (const [name, content] of groupFiles) files.set(name, content);
+      for (const [name, content] of groupFiles) await writer.add(name, content);
       counts[group] = g.meta.length;
+      pending.delete(group);
       done++;
     }
-    progress('index', done, profiles.groups.size);
+    progress('index', done, groupCount);
     await Promise.all(indexFiles);
     progress('writing store', 0, 1);
     const staged = await stageCharts(chartsFolderOf(storeDir), charts);
     try {
-      await writeStore(storeDir, {
-        params: {
-          roster: rosterDir,
-          lenient: options.lenient,
-          profile: options.profile ?? DEFAULT_PROFILE_OPTIONS,
-          index: indexParams,
-          space: embed.method === 'none' ? 'input' : embed.method,
-          ...(embed.method === 'none' ? {} : { embedding: settingsRecord(embed) }),
-          groups: counts,
-        },
-        files,
+      await writer.commit({
+        roster: rosterDir,
+        lenient: options.lenient,
+        profile: options.profile ?? DEFAULT_PROFILE_OPTIONS,
+        index: indexParams,
+        space: embed.method === 'none' ? 'input' : embed.method,
+        ...(embed.method === 'none' ? {} : { embedding: settingsRecord(embed) }),
+        groups: counts,
       });
     } catch (error) {
       await staged.discard();
       throw error;
     }
     await staged.commit();
+  } catch (error) {
+    await Promise.allSettled(indexFiles);
+    await writer.abort();
+    throw error;
   } finally {
     await pool.close();
     await rm(scratch, { recursive: true, force: true });
   }
   return {
     storeDir,
-    rowsRead: roster.rowsRead,
-    rejected: roster.rejected.length,
+    rowsRead: read.rowsRead,
+    rejected: read.rejected,
     rejectsPath,
-    notices: roster.notices,
+    notices: read.notices,
     profiles: counts,
-    skipped: profiles.skipped,
+    skipped,
     seconds: (performance.now() - started) / 1000,
     ...(embed.method === 'none' ? {} : { embedding: { space: embed.method, groups: embedded, chartsDir: chartsFolderOf(storeDir) } }),
   };

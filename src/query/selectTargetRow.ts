@@ -16,13 +16,9 @@ export interface TargetChoice {
   readonly position?: Position;
 }
 
-/** Every profile row of a player, across groups. */
+/** Every profile row of a player, across groups (from the players table: only his groups are read). */
 export function playerRows(store: ProfileStore, player: number): TargetRow[] {
-  const rows: TargetRow[] = [];
-  for (const [group, g] of store.groups) {
-    for (let i = 0; i < g.n; i++) if (g.player[i] === player) rows.push({ group, row: i });
-  }
-  return rows;
+  return [...store.rowsOf(player)];
 }
 
 /**

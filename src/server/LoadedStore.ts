@@ -20,7 +20,6 @@ export class LoadedStore {
   /** Serialised answers of cacheable endpoints for this store. */
   readonly answers: AnswerCache;
   readonly #maps = new Map<PositionGroup, PoolMap>();
-  #rows: Map<number, TargetRow[]> | undefined;
 
   constructor(served: ServedStore, generation: number, cacheEntries: number, loadedAt: Date = new Date()) {
     this.store = served.store;
@@ -42,21 +41,9 @@ export class LoadedStore {
     return m;
   }
 
-  /** Every profiled row of a player (all groups), from an index built on first use. */
+  /** Every profiled row of a player (all groups), from the store's players table. */
   rowsOf(player: number): readonly TargetRow[] {
-    if (!this.#rows) {
-      const all = new Map<number, TargetRow[]>();
-      for (const [group, g] of this.store.groups) {
-        for (let i = 0; i < g.n; i++) {
-          const p = g.player[i] as number;
-          let list = all.get(p);
-          if (!list) all.set(p, (list = []));
-          list.push({ group, row: i });
-        }
-      }
-      this.#rows = all;
-    }
-    return this.#rows.get(player) ?? [];
+    return this.store.rowsOf(player);
   }
 }
 

@@ -59,6 +59,12 @@ export interface StoredGroup {
   readonly embedding?: StoredEmbedding;
 }
 
+/** A profile row: the group and the row in it. */
+export interface StoredRowRef {
+  readonly group: PositionGroup;
+  readonly row: number;
+}
+
 /** A store opened for queries (openProfileStore): players, groups and, on demand, the outcomes. */
 export interface ProfileStore {
   readonly dir: string;
@@ -68,6 +74,11 @@ export interface ProfileStore {
   readonly levels: readonly string[];
   readonly players: readonly StoredPlayer[];
   readonly playerById: ReadonlyMap<string, number>;
+  /**
+   * Every profile row of a player (by store index), in POSITION_GROUPS order and row order, from the
+   * players table: only the player's own groups are read.
+   */
+  rowsOf(player: number): readonly StoredRowRef[];
   /** Salary by player index and season. */
   readonly salaries: ReadonlyMap<number, ReadonlyMap<number, number>>;
   readonly groups: ReadonlyMap<PositionGroup, StoredGroup>;

@@ -1,4 +1,6 @@
 import type { GroupProfiles } from '../profiles/buildProfiles.ts';
+import { POSITIONS } from '../profiles/positionGroup.ts';
+import { encodeColumns } from './columnsFile.ts';
 import { float32ToBytes } from './float32Bytes.ts';
 import type { GroupFile } from './groupFile.ts';
 import { sha256Hex } from './sha256Hex.ts';
@@ -8,14 +10,14 @@ import { groupFileNames } from './storeFileNames.ts';
 export interface GroupIndexes {
   /** The index over all rows (codes of a learned space); null in the input space. */
   readonly index: GroupFile['index'];
-  /** Input space: the coverage partitions and their index metadata. */
-  readonly partitions: GroupFile['partitions'];
+  /** Input space: the coverage partitions (dimensions, group rows) and their index metadata. */
+  readonly partitions: readonly { readonly dims: readonly number[]; readonly rows: ArrayLike<number>; readonly index: GroupFile['index'] }[];
   /** The learned space's kind and code size, when comps are ranked in one. */
   readonly embedding?: GroupFile['embedding'];
 }
 
 /**
- * The files of one position group (JSON part, raw and standardised matrices), by store file name;
+ * The files of one position group (JSON part, rows, raw and standardised matrices), by store file name;
  * the counterpart of readGroup. Rows refer to players and levels by store index (`playerIndex`, `levels`).
  */
 export function encodeGroupFiles(
@@ -46,25 +48,42 @@ export function encodeGroupFiles(
     dims: [...g.dims],
     redundancy: [...g.redundancy],
     reliability: [...g.reliability],
-    rows: {
-      player: g.meta.map((m) => playerIndex.get(m.playerId) ?? -1),
-      season: g.meta.map((m) => m.season),
-      level: g.meta.map((m) => levelIdx.get(m.level) ?? -1),
-      position: g.meta.map((m) => m.position),
-      age: g.meta.map((m) => m.age),
-      sample: g.meta.map((m) => m.sample),
-      outs: g.meta.map((m) => m.outs),
-      teams: g.meta.map((m) => m.teams.join('/')),
-    },
     strata,
     shrinkage,
     index: indexes.index,
-    partitions: indexes.partitions,
+    partitions: indexes.partitions.map((p) => ({ dims: [...p.dims], rows: p.rows.length, index: p.index })),
     ...(indexes.embedding ? { embedding: indexes.embedding } : {}),
   };
+  const teamNames: string[] = [];
+  const teamIdx = new Map<string, number>();
+  const team = g.meta.map((m) => {
+    const key = m.teams.join('/');
+    let i = teamIdx.get(key);
+    if (i === undefined) {
+      i = teamNames.length;
+      teamIdx.set(key, i);
+      teamNames.push(key);
+    }
+    return i;
+  });
+  const partitionRows: number[] = [];
+  for (const p of indexes.partitions) for (let i = 0; i < p.rows.length; i++) partitionRows.push(p.rows[i] ?? 0);
+  const rows = encodeColumns([
+    { name: 'player', type: 'i32', values: g.meta.map((m) => playerIndex.get(m.playerId) ?? -1) },
+    { name: 'season', type: 'i32', values: g.meta.map((m) => m.season) },
+    { name: 'level', type: 'i32', values: g.meta.map((m) => levelIdx.get(m.level) ?? -1) },
+    { name: 'position', type: 'u8', values: g.meta.map((m) => POSITIONS.indexOf(m.position)) },
+    { name: 'age', type: 'f64', values: g.meta.map((m) => m.age ?? NaN) },
+    { name: 'sample', type: 'i32', values: g.meta.map((m) => m.sample) },
+    { name: 'outs', type: 'f64', values: g.meta.map((m) => m.outs ?? NaN) },
+    { name: 'team', type: 'i32', values: team },
+    { name: 'team_name', type: 'strings', values: teamNames },
+    { name: 'partition_rows', type: 'i32', values: partitionRows },
+  ]);
   return new Map<string, Uint8Array | string>([
     [names.raw, raw],
     [names.z, z],
+    [names.rows, rows],
     [names.json, JSON.stringify(file)],
   ]);
 }

@@ -1,7 +1,9 @@
 /**
  * The JSON part of a position group in the store (`group-<G>.json`): dimensions, weights, strata and
- * the row metadata in columns. The numbers live beside it in `group-<G>.raw.f32` and `group-<G>.z.f32`.
- * Written by encodeGroupFiles (src/store/encodeGroupFiles.ts), read by readGroup.
+ * the partitions' index metadata, all small. The row metadata (player, season, level, position, age,
+ * sample, teams) and the partitions' row lists are a columns file beside it, `group-<G>.rows.bin`
+ * (src/store/columnsFile.ts, columns in GROUP_ROW_COLUMNS); the numbers are `group-<G>.raw.f32` and
+ * `group-<G>.z.f32`. Written by encodeGroupFiles (src/store/encodeGroupFiles.ts), read by readGroup.
  */
 import { z } from 'zod';
 import { POSITION_GROUPS } from '../profiles/positionGroup.ts';
@@ -38,17 +40,6 @@ export const groupFileSchema = z.strictObject({
   /** Default weight per dimension: family share times within-family reliability and redundancy. */
   redundancy: z.array(z.number()),
   reliability: z.array(z.number()),
-  rows: z.strictObject({
-    player: z.array(z.number().int().nonnegative()),
-    season: z.array(z.number().int()),
-    level: z.array(z.number().int().nonnegative()),
-    position: z.array(z.enum(['C', '1B', '2B', '3B', 'SS', 'LF', 'CF', 'RF', 'DH', 'SP', 'RP'])),
-    age: z.array(z.number().int().nullable()),
-    sample: z.array(z.number().int().nonnegative()),
-    /** Outs recorded (innings pitched in thirds) per pitcher row; null for hitter rows. */
-    outs: z.array(z.number().int().nonnegative().nullable()),
-    teams: z.array(z.string()),
-  }),
   /** Per dimension: [stratum key, mean, sd, n, first season, last season]. */
   strata: z.record(z.string(), z.array(z.tuple([z.string(), z.number(), z.number(), z.number(), z.number(), z.number()]))),
   /**
@@ -60,12 +51,13 @@ export const groupFileSchema = z.strictObject({
   index: indexSchema.nullable(),
   /**
    * Input space: the rows split by coverage pattern (src/ann/partitionByCoverage.ts), each with the
-   * dimensions its vectors hold and, when it is large enough, its own index `group-<G>.p<i>.hnsw`.
+   * dimensions its vectors hold, its row count (its rows are the next `rows` of the `partition_rows`
+   * column of `group-<G>.rows.bin`) and, when it is large enough, its own index `group-<G>.p<i>.hnsw`.
    */
   partitions: z.array(
     z.strictObject({
       dims: z.array(z.number().int().nonnegative()),
-      rows: z.array(z.number().int().nonnegative()),
+      rows: z.number().int().nonnegative(),
       index: indexSchema.nullable(),
     }),
   ),
@@ -85,3 +77,11 @@ export const groupFileSchema = z.strictObject({
 
 export type GroupFile = z.infer<typeof groupFileSchema>;
 
+
+/**
+ * Columns of `group-<G>.rows.bin`, one value per group row unless said: `player` and `level` (i32,
+ * store indices), `season` (i32), `position` (u8, index in POSITIONS), `age` (f64, NaN unknown),
+ * `sample` (i32, PA or BF), `outs` (f64, outs recorded by a pitcher row, NaN for hitter rows), `team` (i32, index in `team_name`), `team_name` (strings, the distinct
+ * team lists joined by '/'), `partition_rows` (i32, every partition's rows in partition order).
+ */
+export const GROUP_ROW_COLUMNS = ['player', 'season', 'level', 'position', 'age', 'sample', 'outs', 'team', 'team_name', 'partition_rows'] as const;

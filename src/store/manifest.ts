@@ -7,8 +7,9 @@ export const STORE_FORMAT = 'kindred-store';
  * 5: dimensions la_band_pct and run_speed_ft_s (formerly sweet_spot_pct and sprint_ft_s).
  * 6: group rows carry `outs` (innings pitched in thirds) for pitchers.
  * 7: each group file names its raw and standardised matrices (and its embedding's files) by sha256.
+ * 8: players and group rows as columns files (players.bin, group-<G>.rows.bin), read lazily.
  */
-export const STORE_FORMAT_VERSION = 7;
+export const STORE_FORMAT_VERSION = 8;
 /** Name of the manifest inside a store folder (reserved: no data file may use it). */
 export const MANIFEST_NAME = 'manifest.json';
 

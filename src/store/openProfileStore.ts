@@ -2,41 +2,76 @@ import { StoreError } from '../errors/KindredError.ts';
 import { Outcomes } from '../outlook/Outcomes.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
 import { decodeOutcomesFile } from './outcomesFile.ts';
-import { openStore } from './openStore.ts';
+import { openStore, type OpenStore } from './openStore.ts';
 import { decodePlayersFile } from './playersFile.ts';
-import type { ProfileStore, StoredGroup, StoredPlayer } from './ProfileStore.ts';
-import { readGroup } from './readGroup.ts';
+import { corruptFile } from './parseStoreJson.ts';
+import type { ProfileStore, StoredGroup, StoredPlayer, StoredRowRef } from './ProfileStore.ts';
+import { once, readGroup } from './readGroup.ts';
 import { groupFileNames, OUTCOMES_FILE, PLAYERS_FILE } from './storeFileNames.ts';
 
+/** How much of a store is read at open. */
+export interface OpenProfileOptions {
+  /**
+   * `lazy` (the default): the manifest and the players now, every position group (rows, matrices,
+   * indexes) when it is first asked for, the outcomes on the first `outcomes()`.
+   * `eager`: all of it now, so that any damaged file is refused by the open itself.
+   */
+  readonly load?: 'lazy' | 'eager';
+}
+
 /**
- * Opens a store for queries: the manifest and every checksum are verified by openStore before any
- * file is parsed or any index is handed to the native reader; then the players, every position group
- * (with its embedding and indexes) and the outcomes' text are read. The outcomes are decoded on the
- * first `outcomes()` call.
+ * Opens a store for queries. The manifest is checked and every listed file is opened with its size
+ * checked (openStore with `verify: 'read'`); the players table is read now. Each file's sha256 is
+ * verified when the file is first read, before it is parsed or handed to the native index reader, and
+ * each is read once: all of a group's files (rows, matrices, indexes) when the group is first asked
+ * for (`groups.get`, or iterating `groups`), the outcomes on the first `outcomes()`. A file
+ * damaged after the open is refused by the call that first reads it, with the same StoreError
+ * (`kindred.store.corrupt`) as at open. Reads go to the files as opened, so a rebuild swapping a new
+ * store folder in meanwhile is never mixed in. With `load: 'eager'` every part is read at open.
  */
-export async function openProfileStore(dir: string): Promise<ProfileStore> {
-  const store = await openStore(dir);
-  const pf = decodePlayersFile(await store.readText(PLAYERS_FILE), `${dir}/${PLAYERS_FILE}`);
-  const players: StoredPlayer[] = pf.players.map((p) => ({
-    playerId: p.player_id,
-    name: p.name,
-    birthDate: p.birth_date,
-    bats: p.bats,
-    throws: p.throws,
-  }));
-  const playerById = new Map(players.map((p, i) => [p.playerId, i]));
-  const salaries = new Map<number, Map<number, number>>();
-  for (const [idx, season, salary] of pf.contracts) {
-    let m = salaries.get(idx);
-    if (!m) salaries.set(idx, (m = new Map()));
-    m.set(season, salary);
+export async function openProfileStore(dir: string, options: OpenProfileOptions = {}): Promise<ProfileStore> {
+  const store = await openStore(dir, { verify: 'read' });
+  try {
+    const profile = profileStoreOf(dir, store);
+    if (options.load === 'eager') touchAll(profile);
+    return profile;
+  } catch (error) {
+    store.close();
+    throw error;
   }
-  const groups = new Map<PositionGroup, StoredGroup>();
-  for (const group of POSITION_GROUPS) {
-    if (groupFileNames(group).json in store.manifest.files) groups.set(group, await readGroup(store, group, { players: players.length, levels: pf.levels.length }));
-  }
-  const outcomesText = OUTCOMES_FILE in store.manifest.files ? await store.readText(OUTCOMES_FILE) : null;
-  let outcomes: Outcomes | undefined;
+}
+
+function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
+  const pf = decodePlayersFile(store.readBytesSync(PLAYERS_FILE), `${store.dir}/${PLAYERS_FILE}`);
+  const players: readonly StoredPlayer[] = pf.players;
+  const playerById = new Map<string, number>();
+  players.forEach((p, i) => playerById.set(p.playerId, i));
+  const salaries = once((): ReadonlyMap<number, ReadonlyMap<number, number>> => {
+    const out = new Map<number, Map<number, number>>();
+    const { player, season, salary } = pf.contracts;
+    for (let i = 0; i < player.length; i++) {
+      const idx = player[i] ?? -1;
+      let m = out.get(idx);
+      if (!m) out.set(idx, (m = new Map()));
+      m.set(season[i] ?? 0, salary[i] ?? 0);
+    }
+    return out;
+  });
+  const refs = { players: players.length, levels: pf.levels.length };
+  const groups = new LazyGroups(
+    POSITION_GROUPS.filter((g) => groupFileNames(g).json in store.manifest.files),
+    (group) => readWholeGroup(readGroup(store, group, refs)),
+  );
+  const outcomes = once((): Outcomes => {
+    if (!(OUTCOMES_FILE in store.manifest.files)) {
+      throw new StoreError('kindred.store.missing', `store at ${store.dir} has no ${OUTCOMES_FILE} (built by an older kindred); rebuild it with kindred build`, {
+        dir: store.dir,
+        file: OUTCOMES_FILE,
+      });
+    }
+    const where = `${store.dir}/${OUTCOMES_FILE}`;
+    return new Outcomes(decodeOutcomesFile(store.readTextSync(OUTCOMES_FILE), where), playerById, where);
+  });
   return {
     dir,
     opened: store,
@@ -44,19 +79,100 @@ export async function openProfileStore(dir: string): Promise<ProfileStore> {
     levels: pf.levels,
     players,
     playerById,
-    salaries,
-    groups,
-    outcomes(): Outcomes {
-      if (outcomes) return outcomes;
-      if (outcomesText === null) {
-        throw new StoreError('kindred.store.missing', `store at ${store.dir} has no ${OUTCOMES_FILE} (built by an older kindred); rebuild it with kindred build`, {
-          dir: store.dir,
-          file: OUTCOMES_FILE,
-        });
+    rowsOf(p: number): readonly StoredRowRef[] {
+      const { start, group, row } = pf.rows;
+      const out: StoredRowRef[] = [];
+      for (let i = start[p] ?? 0; i < (start[p + 1] ?? 0); i++) {
+        const name = POSITION_GROUPS[group[i] ?? -1];
+        const r = row[i] ?? -1;
+        const g = name === undefined ? undefined : groups.get(name);
+        if (name === undefined || !g || r >= g.n || g.player[r] !== p) {
+          throw corruptFile(`${store.dir}/${PLAYERS_FILE}`, `lists row ${r} of group ${name ?? group[i]} for player ${p}, which the group does not hold`);
+        }
+        out.push({ group: name, row: r });
       }
-      const where = `${store.dir}/${OUTCOMES_FILE}`;
-      outcomes = new Outcomes(decodeOutcomesFile(outcomesText, where), playerById, where);
-      return outcomes;
+      return out;
     },
+    get salaries() {
+      return salaries();
+    },
+    groups,
+    outcomes,
   };
+}
+
+/**
+ * Reads the rest of a group now: its matrices and every index. A group is read whole when it is first
+ * asked for, so any damaged file of it is refused then, whichever of its parts the query would use.
+ */
+function readWholeGroup(g: StoredGroup): StoredGroup {
+  void g.raw;
+  void g.z;
+  void g.index;
+  for (const p of g.partitions) void p.index;
+  return g;
+}
+
+/** Reads every part of an opened store now (the eager open): every group and the outcomes. */
+function touchAll(profile: ProfileStore): void {
+  for (const g of profile.groups.values()) void g.n;
+  if (OUTCOMES_FILE in profile.opened.manifest.files) profile.outcomes();
+}
+
+/**
+ * The position groups of a store, each read on first access (`get`, or iteration, which reads them
+ * all in POSITION_GROUPS order). `has`, `size` and `keys` answer from the manifest without reading.
+ */
+class LazyGroups implements ReadonlyMap<PositionGroup, StoredGroup> {
+  readonly #order: readonly PositionGroup[];
+  readonly #read: (group: PositionGroup) => StoredGroup;
+  readonly #loaded = new Map<PositionGroup, StoredGroup>();
+
+  constructor(order: readonly PositionGroup[], read: (group: PositionGroup) => StoredGroup) {
+    this.#order = order;
+    this.#read = read;
+  }
+
+  get size(): number {
+    return this.#order.length;
+  }
+
+  has(key: PositionGroup): boolean {
+    return this.#order.includes(key);
+  }
+
+  get(key: PositionGroup): StoredGroup | undefined {
+    const loaded = this.#loaded.get(key);
+    if (loaded) return loaded;
+    if (!this.has(key)) return undefined;
+    const g = this.#read(key);
+    this.#loaded.set(key, g);
+    return g;
+  }
+
+  #at(key: PositionGroup): StoredGroup {
+    const g = this.get(key);
+    if (!g) throw new Error(`unreachable: group ${key} is listed but not read`);
+    return g;
+  }
+
+  *entries(): MapIterator<[PositionGroup, StoredGroup]> {
+    for (const key of this.#order) yield [key, this.#at(key)];
+  }
+
+  *keys(): MapIterator<PositionGroup> {
+    yield* this.#order;
+  }
+
+  *values(): MapIterator<StoredGroup> {
+    for (const key of this.#order) yield this.#at(key);
+  }
+
+  [Symbol.iterator](): MapIterator<[PositionGroup, StoredGroup]> {
+    return this.entries();
+  }
+
+  forEach(callback: (value: StoredGroup, key: PositionGroup, map: ReadonlyMap<PositionGroup, StoredGroup>) => void): void {
+    for (const [key, value] of this.entries()) callback(value, key, this);
+  }
 }

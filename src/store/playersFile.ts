@@ -1,47 +1,129 @@
 /**
- * `players.json` in the store: the level names, every player (id, name, birth date, bats, throws) in
- * store order (rows refer to players by that index) and the contracts. Written by encodePlayersFile,
- * read by decodePlayersFile.
+ * `players.bin` in the store: the level names, every player (id, name, birth date, bats, throws) in
+ * store order (rows refer to players by that index) and the contracts, as a columns file
+ * (src/store/columnsFile.ts), so that opening a store reads it without parsing any JSON.
+ * Written by encodePlayersFile, read by decodePlayersFile.
+ *
+ * Columns: `level` (strings); `player_id`, `name`, `birth_date` (strings, '' when unknown), `bats`
+ * (u8: 0 unknown, then BATS order L R S), `throws` (u8: 0 unknown, then THROWS order L R);
+ * `contract_player` (i32 store index), `contract_season` (i32), `contract_salary` (f64, USD);
+ * every player's profile rows, so that a player's seasons are found without reading every group:
+ * `rows_start` (i32, one more than the players: player i's rows are entries rows_start[i] to
+ * rows_start[i + 1] - 1), `rows_group` (u8, index in POSITION_GROUPS), `rows_row` (i32, row in that group),
+ * in POSITION_GROUPS order and row order.
  */
-import { z } from 'zod';
-import type { Roster } from '../ingest/Roster.ts';
-import { parseStoreJson } from './parseStoreJson.ts';
+import { BATS, THROWS } from '../ingest/playersColumns.ts';
+import type { Bats, Roster, Throws } from '../ingest/Roster.ts';
+import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
+import { decodeColumns, encodeColumns } from './columnsFile.ts';
+import { corruptFile } from './parseStoreJson.ts';
+import type { StoredPlayer } from './ProfileStore.ts';
 
-export const playersFileSchema = z.strictObject({
-  levels: z.array(z.string()),
-  players: z.array(
-    z.strictObject({
-      player_id: z.string(),
-      name: z.string(),
-      birth_date: z.string().nullable(),
-      bats: z.enum(['L', 'R', 'S']).nullable(),
-      throws: z.enum(['L', 'R']).nullable(),
-    }),
-  ),
-  /** [player index, season, salary in USD] */
-  contracts: z.array(z.tuple([z.number().int(), z.number().int(), z.number()])),
-});
-
-export type PlayersFile = z.infer<typeof playersFileSchema>;
-
-/** The players file of a roster, and each player's store index by id (in roster order). */
-export function encodePlayersFile(roster: Roster): { readonly text: string; readonly playerIndex: ReadonlyMap<string, number> } {
-  const playerIndex = new Map<string, number>();
-  const players: PlayersFile['players'] = [];
-  for (const p of roster.players.values()) {
-    playerIndex.set(p.playerId, players.length);
-    players.push({ player_id: p.playerId, name: p.name, birth_date: p.birthDate ?? null, bats: p.bats ?? null, throws: p.throws ?? null });
-  }
-  const contracts: PlayersFile['contracts'] = [];
-  for (const c of roster.contracts) {
-    const idx = playerIndex.get(c.playerId);
-    if (idx !== undefined) contracts.push([idx, c.season, c.salaryUsd]);
-  }
-  const file: PlayersFile = { levels: [...roster.levels], players, contracts };
-  return { text: JSON.stringify(file), playerIndex };
+/** What players.bin holds, decoded. */
+export interface PlayersFile {
+  readonly levels: readonly string[];
+  readonly players: readonly StoredPlayer[];
+  readonly contracts: { readonly player: Int32Array; readonly season: Int32Array; readonly salary: Float64Array };
+  /** Each player's profile rows (see the columns above). */
+  readonly rows: { readonly start: Int32Array; readonly group: Uint8Array; readonly row: Int32Array };
 }
 
-/** Parses and checks players.json (`where` names it in errors: StoreError `kindred.store.corrupt`). */
-export function decodePlayersFile(text: string, where: string): PlayersFile {
-  return parseStoreJson(text, playersFileSchema, where);
+/** Player ids in store order, and each one's store index. */
+export function playerIndexOf(roster: Roster): ReadonlyMap<string, number> {
+  const index = new Map<string, number>();
+  for (const p of roster.players.values()) index.set(p.playerId, index.size);
+  return index;
+}
+
+/**
+ * The players file of a roster whose players have the store indices of playerIndexOf, with the rows
+ * of each group (by player id, in row order).
+ */
+export function encodePlayersFile(roster: Roster, groups: ReadonlyMap<PositionGroup, readonly { readonly playerId: string }[]>): Uint8Array {
+  const playerIndex = playerIndexOf(roster);
+  const ids: string[] = [];
+  const names: string[] = [];
+  const births: string[] = [];
+  const bats: number[] = [];
+  const throws: number[] = [];
+  for (const p of roster.players.values()) {
+    ids.push(p.playerId);
+    names.push(p.name);
+    births.push(p.birthDate ?? '');
+    bats.push(p.bats ? BATS.indexOf(p.bats) + 1 : 0);
+    throws.push(p.throws ? THROWS.indexOf(p.throws) + 1 : 0);
+  }
+  const cPlayer: number[] = [];
+  const cSeason: number[] = [];
+  const cSalary: number[] = [];
+  for (const c of roster.contracts) {
+    const idx = playerIndex.get(c.playerId);
+    if (idx === undefined) continue;
+    cPlayer.push(idx);
+    cSeason.push(c.season);
+    cSalary.push(c.salaryUsd);
+  }
+  const lists: { group: number; row: number }[][] = ids.map(() => []);
+  POSITION_GROUPS.forEach((group, gi) => {
+    groups.get(group)?.forEach((m, row) => lists[playerIndex.get(m.playerId) ?? -1]?.push({ group: gi, row }));
+  });
+  const start: number[] = [0];
+  for (const list of lists) start.push((start[start.length - 1] ?? 0) + list.length);
+  const all = lists.flat();
+  return encodeColumns([
+    { name: 'level', type: 'strings', values: [...roster.levels] },
+    { name: 'player_id', type: 'strings', values: ids },
+    { name: 'name', type: 'strings', values: names },
+    { name: 'birth_date', type: 'strings', values: births },
+    { name: 'bats', type: 'u8', values: bats },
+    { name: 'throws', type: 'u8', values: throws },
+    { name: 'contract_player', type: 'i32', values: cPlayer },
+    { name: 'contract_season', type: 'i32', values: cSeason },
+    { name: 'contract_salary', type: 'f64', values: cSalary },
+    { name: 'rows_start', type: 'i32', values: start },
+    { name: 'rows_group', type: 'u8', values: all.map((r) => r.group) },
+    { name: 'rows_row', type: 'i32', values: all.map((r) => r.row) },
+  ]);
+}
+
+/** Decodes and checks players.bin (`where` names it in errors: StoreError `kindred.store.corrupt`). */
+export function decodePlayersFile(bytes: Uint8Array, where: string): PlayersFile {
+  const bad = (what: string): Error => corruptFile(where, what);
+  const cols = decodeColumns(bytes, where);
+  const levels = cols.strings('level');
+  const ids = cols.strings('player_id');
+  const n = ids.length;
+  const names = cols.strings('name', n);
+  const births = cols.strings('birth_date', n);
+  const bats = cols.u8('bats', n);
+  const throws = cols.u8('throws', n);
+  const players = new Array<StoredPlayer>(n);
+  for (let i = 0; i < n; i++) {
+    const b = bats[i] ?? 0;
+    const t = throws[i] ?? 0;
+    const batsValue: Bats | null = b === 0 ? null : (BATS[b - 1] ?? null);
+    const throwsValue: Throws | null = t === 0 ? null : (THROWS[t - 1] ?? null);
+    if ((b !== 0 && batsValue === null) || (t !== 0 && throwsValue === null)) throw bad(`player ${i} has bats code ${b}, throws code ${t} (expected 0 to ${BATS.length} and 0 to ${THROWS.length})`);
+    const birth = births[i] ?? '';
+    players[i] = { playerId: ids[i] ?? '', name: names[i] ?? '', birthDate: birth === '' ? null : birth, bats: batsValue, throws: throwsValue };
+  }
+  const player = cols.i32('contract_player');
+  const season = cols.i32('contract_season', player.length);
+  const salary = cols.f64('contract_salary', player.length);
+  for (let i = 0; i < player.length; i++) {
+    const p = player[i] ?? -1;
+    if (p < 0 || p >= n) throw bad(`contract ${i} names player ${p} (the store has ${n})`);
+    if (!Number.isFinite(salary[i] ?? NaN)) throw bad(`contract ${i} has salary ${salary[i]} (expected a finite number)`);
+  }
+  const start = cols.i32('rows_start', n + 1);
+  const total = start[n] ?? 0;
+  const group = cols.u8('rows_group', total);
+  const row = cols.i32('rows_row', total);
+  for (let i = 0; i < n; i++) {
+    if ((start[i] ?? 0) > (start[i + 1] ?? 0) || (start[0] ?? 0) !== 0) throw bad(`rows_start of player ${i} runs backwards`);
+  }
+  for (let i = 0; i < total; i++) {
+    if ((group[i] ?? POSITION_GROUPS.length) >= POSITION_GROUPS.length || (row[i] ?? -1) < 0) throw bad(`profile row entry ${i} names group ${group[i]} row ${row[i]}`);
+  }
+  return { levels, players, contracts: { player, season, salary }, rows: { start, group, row } };
 }

@@ -1,7 +1,10 @@
 import { GuardedIndex } from '../ann/GuardedIndex.ts';
-import type { PositionGroup } from '../profiles/positionGroup.ts';
+import type { IndexMeta } from '../ann/IndexParams.ts';
+import type { Position } from '../ingest/Roster.ts';
+import { POSITIONS, type PositionGroup } from '../profiles/positionGroup.ts';
 import type { StratumStats } from '../profiles/standardiseByStratum.ts';
 import type { ShrinkageUsed } from '../profiles/shrinkage.ts';
+import { decodeColumns } from './columnsFile.ts';
 import { bytesToFloat32 } from './float32Bytes.ts';
 import { groupFileSchema } from './groupFile.ts';
 import type { OpenStore } from './openStore.ts';
@@ -10,30 +13,33 @@ import type { StoredGroup, StoredPartition } from './ProfileStore.ts';
 import { readGroupEmbedding } from './readGroupEmbedding.ts';
 import { groupEmbeddingFileNames, groupFileNames } from './storeFileNames.ts';
 
+/** A value computed on the first call and kept (a failed first call is tried again on the next). */
+export function once<T>(compute: () => T): () => T {
+  let kept: { readonly value: T } | undefined;
+  return () => (kept ??= { value: compute() }).value;
+}
+
 /**
- * Reads one position group from a verified store (the counterpart of encodeGroupFiles): parses the
- * JSON part, checks that every column, matrix, weight list and partition agrees with its row and
- * dimension counts, that it names the group its file name says (so files swapped between groups are
- * refused), that the raw and standardised matrices and the embedding's files are the ones it names by
- * sha256 (so files of the same size, such as the two matrices, cannot be swapped) and that its player and level references are in range, reads the embedding when there is one and loads the indexes (each checked by
- * GuardedIndex.load before the native reader sees it). Any mismatch is StoreError `kindred.store.corrupt`.
+ * Reads one position group from a store (the counterpart of encodeGroupFiles). Now: parses the JSON
+ * part and the rows (`group-<G>.rows.bin`), checks that every column, weight list and partition agrees
+ * with its row and dimension counts, that it names the group its file name says (so files swapped
+ * between groups are refused), that the raw and standardised matrices and the embedding's files are
+ * the ones it names by sha256 (so files of the same size, such as the two matrices, cannot be swapped),
+ * that its player and level references are in range, and reads the embedding when there is one. On first use (a getter): the raw and standardised matrices (`raw`,
+ * `z`, sizes checked) and each index (`index`, `partitions[i].index`, checked by GuardedIndex.load
+ * before the native reader sees it). Every file is verified against the manifest when read, once.
+ * Any mismatch is StoreError `kindred.store.corrupt`, thrown by the call or getter that reads the file.
  */
-export async function readGroup(
-  store: OpenStore,
-  group: PositionGroup,
-  refs: { readonly players: number; readonly levels: number },
-): Promise<StoredGroup> {
+export function readGroup(store: OpenStore, group: PositionGroup, refs: { readonly players: number; readonly levels: number }): StoredGroup {
   const names = groupFileNames(group);
   const where = `${store.dir}/${names.json}`;
   const bad = (what: string): Error => corruptFile(where, what);
-  const gf = parseStoreJson(await store.readText(names.json), groupFileSchema, where);
+  const gf = parseStoreJson(store.readTextSync(names.json), groupFileSchema, where);
   if (gf.group !== group) throw bad(`holds group ${gf.group} (expected ${group}; files swapped?)`);
   const d = gf.dims.length;
-  const outside = (values: readonly number[], below: number): number => values.findIndex((v) => v >= below);
-  const badPlayer = outside(gf.rows.player, refs.players);
-  if (badPlayer >= 0) throw bad(`row ${badPlayer} names player ${gf.rows.player[badPlayer]} (the store has ${refs.players})`);
-  const badLevel = outside(gf.rows.level, refs.levels);
-  if (badLevel >= 0) throw bad(`row ${badLevel} names level ${gf.rows.level[badLevel]} (the store has ${refs.levels})`);
+  const n = gf.n;
+  if (gf.redundancy.length !== d || gf.reliability.length !== d) throw bad(`sizes do not match (${n} rows x ${d} dimensions)`);
+
   const named = (name: string, sha256: string): void => {
     const listed = store.manifest.files[name]?.sha256;
     if (listed !== sha256) throw bad(`names ${name} with sha256 ${sha256}, but the store holds ${listed ?? 'no such file'} (files swapped?)`);
@@ -46,61 +52,115 @@ export async function readGroup(
     named(files.model, gf.embedding.sha256.model);
     named(files.codes, gf.embedding.sha256.codes);
   }
-  const raw = bytesToFloat32(await store.readBytes(names.raw));
-  const z = bytesToFloat32(await store.readBytes(names.z));
-  const lengths = [gf.rows.player, gf.rows.season, gf.rows.level, gf.rows.position, gf.rows.age, gf.rows.sample, gf.rows.outs, gf.rows.teams].map((a) => a.length);
-  if (raw.length !== gf.n * d || z.length !== gf.n * d || lengths.some((l) => l !== gf.n) || gf.redundancy.length !== d || gf.reliability.length !== d) {
-    throw bad(`sizes do not match (${gf.n} rows x ${d} dimensions)`);
+
+  const rowsWhere = `${store.dir}/${names.rows}`;
+  const badRow = (what: string): Error => corruptFile(rowsWhere, what);
+  const cols = decodeColumns(store.readBytesSync(names.rows), rowsWhere);
+  const player = cols.i32('player', n);
+  const season = cols.i32('season', n);
+  const level = cols.i32('level', n);
+  const positionCode = cols.u8('position', n);
+  const age = cols.f64('age', n);
+  const sample = cols.i32('sample', n);
+  const outs = cols.f64('outs', n);
+  const team = cols.i32('team', n);
+  const teamNames = cols.strings('team_name');
+  const partitionRows = cols.i32('partition_rows');
+  const position = new Array<Position>(n);
+  const teams = new Array<string>(n);
+  for (let i = 0; i < n; i++) {
+    const p = player[i] ?? -1;
+    if (p < 0 || p >= refs.players) throw badRow(`row ${i} names player ${p} (the store has ${refs.players})`);
+    const l = level[i] ?? -1;
+    if (l < 0 || l >= refs.levels) throw badRow(`row ${i} names level ${l} (the store has ${refs.levels})`);
+    const pos = POSITIONS[positionCode[i] ?? POSITIONS.length];
+    if (pos === undefined) throw badRow(`row ${i} has position code ${positionCode[i]} (expected 0 to ${POSITIONS.length - 1})`);
+    position[i] = pos;
+    const t = teamNames[team[i] ?? -1];
+    if (t === undefined) throw badRow(`row ${i} names team list ${team[i]} (the file has ${teamNames.length})`);
+    teams[i] = t;
+    const a = age[i] ?? NaN;
+    const s = sample[i] ?? -1;
+    if (!(Number.isNaN(a) || Number.isInteger(a)) || s < 0) throw badRow(`row ${i} has age ${a}, sample ${s} (expected a whole age or none, a sample of 0 or more)`);
+    const o = outs[i] ?? NaN;
+    if (!(Number.isNaN(o) || (Number.isInteger(o) && o >= 0))) throw badRow(`row ${i} has ${o} outs (expected a whole number of 0 or more, or none)`);
   }
+
   const embedding = gf.embedding
-    ? await readGroupEmbedding(store, group, { space: gf.embedding.space, dim: gf.embedding.dim, d, n: gf.n, dims: gf.dims.map((x) => x.name) })
+    ? readGroupEmbedding(store, group, { space: gf.embedding.space, dim: gf.embedding.dim, d, n, dims: gf.dims.map((x) => x.name) })
     : undefined;
-  let index: GuardedIndex | null = null;
+  const loadIndex = (file: string, meta: IndexMeta): GuardedIndex => {
+    const bytes = store.readBytesSync(file);
+    return store.withVerifiedPath(file, bytes, (path) => GuardedIndex.load(path, meta, bytes));
+  };
+  let index: () => GuardedIndex | null = () => null;
   if (embedding) {
-    if (!gf.index || gf.index.dim !== embedding.dim || gf.index.count !== gf.n) throw bad('index metadata does not match the codes');
-    index = GuardedIndex.load(store.path(names.index), gf.index);
+    const meta = gf.index;
+    if (!meta || meta.dim !== embedding.dim || meta.count !== n) throw bad('index metadata does not match the codes');
+    index = once(() => loadIndex(names.index, meta));
   }
   const partitions: StoredPartition[] = [];
   let covered = 0;
   for (const [i, p] of gf.partitions.entries()) {
-    if (p.dims.some((j) => j >= d) || p.rows.some((r) => r >= gf.n)) throw bad(`partition ${i} points past the profiles`);
-    if (p.index && (p.index.dim !== p.dims.length || p.index.count !== p.rows.length)) throw bad(`partition ${i} index metadata does not match`);
-    covered += p.rows.length;
+    if (covered + p.rows > partitionRows.length) throw bad(`partition ${i} holds more rows than ${names.rows} lists`);
+    const rows = partitionRows.subarray(covered, covered + p.rows);
+    if (p.dims.some((j) => j >= d) || rows.some((r) => r < 0 || r >= n)) throw bad(`partition ${i} points past the profiles`);
+    const meta = p.index;
+    if (meta && (meta.dim !== p.dims.length || meta.count !== p.rows)) throw bad(`partition ${i} index metadata does not match`);
+    covered += p.rows;
+    const partIndex = meta ? once(() => loadIndex(names.partitionIndex(i), meta)) : () => null;
     partitions.push({
       dims: Int32Array.from(p.dims),
-      rows: Int32Array.from(p.rows),
-      index: p.index ? GuardedIndex.load(store.path(names.partitionIndex(i)), p.index) : null,
+      rows,
+      get index() {
+        return partIndex();
+      },
     });
   }
-  if (!embedding && covered !== gf.n) throw bad(`partitions hold ${covered} of ${gf.n} rows`);
+  if (covered !== partitionRows.length) throw bad(`partitions hold ${covered} rows, ${names.rows} lists ${partitionRows.length}`);
+  if (!embedding && covered !== n) throw bad(`partitions hold ${covered} of ${n} rows`);
   const strata = new Map<string, Map<string, StratumStats>>();
   for (const [dim, list] of Object.entries(gf.strata)) {
-    strata.set(dim, new Map(list.map(([key, mean, sd, n, from, to]) => [key, { mean, sd, n, seasons: [from, to] as const }])));
+    strata.set(dim, new Map(list.map(([key, mean, sd, count, from, to]) => [key, { mean, sd, n: count, seasons: [from, to] as const }])));
   }
   const shrinkage = new Map<string, Map<string, ShrinkageUsed>>();
   for (const [dim, list] of Object.entries(gf.shrinkage)) {
     shrinkage.set(dim, new Map(list.map(([key, k, table, source, players]) => [key, { k, table, source, players }])));
   }
+  const matrix = (file: string): (() => Float32Array) =>
+    once(() => {
+      const values = bytesToFloat32(store.readBytesSync(file));
+      if (values.length !== n * d) throw corruptFile(`${store.dir}/${file}`, `holds ${values.length} values (expected ${n} rows x ${d} dimensions)`);
+      return values;
+    });
+  const raw = matrix(names.raw);
+  const z = matrix(names.z);
   return {
     group,
     dims: gf.dims,
     d,
-    n: gf.n,
+    n,
     redundancy: Float64Array.from(gf.redundancy),
     reliability: Float64Array.from(gf.reliability),
-    player: Int32Array.from(gf.rows.player),
-    season: Int32Array.from(gf.rows.season),
-    level: Int32Array.from(gf.rows.level),
-    position: gf.rows.position,
-    age: Float64Array.from(gf.rows.age, (a) => (a === null ? NaN : a)),
-    sample: Int32Array.from(gf.rows.sample),
-    outs: Float64Array.from(gf.rows.outs, (o) => (o === null ? NaN : o)),
-    teams: gf.rows.teams,
-    raw,
-    z,
+    player,
+    season,
+    level,
+    position,
+    age,
+    sample,
+    outs,
+    teams,
+    get raw() {
+      return raw();
+    },
+    get z() {
+      return z();
+    },
     strata,
     shrinkage,
-    index,
+    get index() {
+      return index();
+    },
     partitions,
     ...(embedding ? { embedding } : {}),
   };

@@ -12,20 +12,20 @@ const corrupt = (dir: string, file: string, what: string): StoreError => corrupt
 const parseJson = (text: string, dir: string, file: string): unknown => parseJsonText(text, `${dir}/${file}`);
 
 /**
- * Reads a group's embedding from a verified store (openStore has checked every file's size and sha256
- * against the manifest, so a changed byte in the model, codes or summary is refused before this runs):
+ * Reads a group's embedding from a store (each file's size and sha256 are checked against the manifest
+ * as it is read, so a changed byte in the model, codes or summary is refused before it is parsed):
  * parses the summary (format tag, version, shape) and the model (PcaEmbedding or Autoencoder JSON,
  * each checks its own tag and shape), and checks that they agree with the group (space, d, code size,
  * n codes of that size, one driver per dimension). Any mismatch is StoreError `kindred.store.corrupt`.
  */
-export async function readGroupEmbedding(
+export function readGroupEmbedding(
   store: OpenStore,
   group: string,
   expected: { readonly space: 'pca' | 'autoencoder'; readonly dim: number; readonly d: number; readonly n: number; readonly dims: readonly string[] },
-): Promise<StoredEmbedding> {
+): StoredEmbedding {
   const dir = store.dir;
   const names = groupEmbeddingFileNames(group);
-  const parsed = groupEmbeddingSchema.safeParse(parseJson(await store.readText(names.summary), dir, names.summary));
+  const parsed = groupEmbeddingSchema.safeParse(parseJson(store.readTextSync(names.summary), dir, names.summary));
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
     throw corrupt(dir, names.summary, `unexpected content at ${issue?.path.join('.') ?? '?'}: ${issue?.message ?? 'invalid'}`);
@@ -36,12 +36,12 @@ export async function readGroupEmbedding(
   }
   let model;
   try {
-    model = embeddingModelFromJSON(parseJson(await store.readText(names.model), dir, names.model));
+    model = embeddingModelFromJSON(parseJson(store.readTextSync(names.model), dir, names.model));
   } catch (e) {
     if (e instanceof StoreError) throw corrupt(dir, names.model, e.message);
     throw e;
   }
-  const codes = bytesToFloat64(await store.readBytes(names.codes));
+  const codes = bytesToFloat64(store.readBytesSync(names.codes));
   const dim = modelCodeSize(model);
   const problems: string[] = [];
   if (model.space !== expected.space || summary.space !== expected.space) problems.push(`space ${model.space}/${summary.space} (expected ${expected.space})`);

@@ -3,8 +3,8 @@
  * the manifest (src/store/manifest.ts) with its size and sha256.
  */
 
-/** Players (id, name, birth date, bats, throws), level names and contracts. */
-export const PLAYERS_FILE = 'players.json';
+/** Players (id, name, birth date, bats, throws), level names and contracts (a columns file). */
+export const PLAYERS_FILE = 'players.bin';
 
 /** What every player did at the top level, season by season (src/store/outcomesFile.ts). */
 export const OUTCOMES_FILE = 'outcomes.json';
@@ -12,11 +12,12 @@ export const OUTCOMES_FILE = 'outcomes.json';
 /** The latest backtest of the prospect outlook, written beside the manifest after the build (outside it). */
 export const BACKTEST_FILE = 'backtest.json';
 
-/** The files of one position group: its JSON part, the raw and standardised matrices and its indexes. */
+/** The files of one position group: its JSON part, its rows (a columns file), the raw and standardised matrices and its indexes. */
 export const groupFileNames = (
   group: string,
-): { json: string; raw: string; z: string; index: string; partitionIndex: (i: number) => string } => ({
+): { json: string; rows: string; raw: string; z: string; index: string; partitionIndex: (i: number) => string } => ({
   json: `group-${group}.json`,
+  rows: `group-${group}.rows.bin`,
   raw: `group-${group}.raw.f32`,
   z: `group-${group}.z.f32`,
   index: `group-${group}.hnsw`,

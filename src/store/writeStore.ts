@@ -27,52 +27,103 @@ export interface StoreInput {
  * holding nothing but its listed files is replaced; a symbolic link is refused (checkStoreTarget).
  */
 export async function writeStore(dir: string, input: StoreInput): Promise<Manifest> {
-  const target = resolve(dir);
-  const fail = (what: string, cause?: unknown): StoreError =>
-    withCause(new StoreError('kindred.store.writeFailed', `cannot write the store at ${target}: ${what}`, { dir: target }), cause);
-
-  for (const name of input.files.keys()) {
-    const problem = fileNameProblem(name);
-    if (problem) throw fail(`file name ${JSON.stringify(name)} ${problem} (expected a flat file name)`);
-  }
-  let params: Record<string, unknown>;
+  const writer = await StoreWriter.begin(dir, [...input.files.keys()]);
   try {
-    params = manifestSchema.shape.params.parse(JSON.parse(JSON.stringify(input.params)));
+    for (const name of [...input.files.keys()].sort()) await writer.add(name, input.files.get(name) ?? '');
+    return await writer.commit(input.params);
   } catch (error) {
-    throw fail(`params are not JSON-serialisable (${describe(error)})`, error);
+    await writer.abort();
+    throw error;
   }
-  try {
-    await checkStoreTarget(target);
-  } catch (error) {
-    if (error instanceof StoreError) throw error;
-    throw fail(describe(error), error);
+}
+
+/**
+ * A store written file by file, so that a build need not hold every file in memory: `begin` checks
+ * the target (checkStoreTarget) and creates the sibling temp folder, `add` writes one file there
+ * (flushed) and keeps only its size and sha256, `commit` writes the manifest (files listed by name)
+ * and swaps the folder in as writeStore does; `abort` removes the temp folder. Failures are StoreError
+ * `kindred.store.writeFailed`; an existing store is left as it was until `commit` succeeds.
+ */
+export class StoreWriter {
+  readonly target: string;
+  readonly #temp: string;
+  readonly #backup: string;
+  readonly #files = new Map<string, FileEntry>();
+
+  private constructor(target: string, suffix: string) {
+    this.target = target;
+    this.#temp = `${target}.tmp-${suffix}`;
+    this.#backup = `${target}.old-${suffix}`;
   }
 
-  const suffix = `${process.pid}-${randomBytes(4).toString('hex')}`;
-  const temp = `${target}.tmp-${suffix}`;
-  try {
-    await mkdir(temp);
-    const files: Record<string, FileEntry> = {};
-    for (const name of [...input.files.keys()].sort()) {
-      const content = input.files.get(name) ?? '';
-      const bytes = typeof content === 'string' ? Buffer.from(content, 'utf8') : content;
-      await writeFlushed(join(temp, name), bytes);
-      files[name] = { sha256: sha256Hex(bytes), bytes: bytes.byteLength };
+  /** Checks the target and the names known in advance (more may be added), and creates the temp folder. */
+  static async begin(dir: string, names: readonly string[] = []): Promise<StoreWriter> {
+    const target = resolve(dir);
+    const writer = new StoreWriter(target, `${process.pid}-${randomBytes(4).toString('hex')}`);
+    for (const name of names) writer.#checkName(name);
+    try {
+      await checkStoreTarget(target);
+    } catch (error) {
+      if (error instanceof StoreError) throw error;
+      throw writer.#fail(describe(error), error);
     }
-    const manifest: Manifest = {
-      format: STORE_FORMAT,
-      version: STORE_FORMAT_VERSION,
-      createdAt: new Date().toISOString(),
-      params,
-      files,
-    };
-    await writeFlushed(join(temp, MANIFEST_NAME), Buffer.from(`${JSON.stringify(manifest, null, 2)}\n`, 'utf8'));
-    await swapIn(temp, target, `${target}.old-${suffix}`);
+    try {
+      await mkdir(writer.#temp);
+    } catch (error) {
+      throw writer.#fail(describe(error), error);
+    }
+    return writer;
+  }
+
+  #fail(what: string, cause?: unknown): StoreError {
+    return withCause(new StoreError('kindred.store.writeFailed', `cannot write the store at ${this.target}: ${what}`, { dir: this.target }), cause);
+  }
+
+  #checkName(name: string): void {
+    const problem = fileNameProblem(name);
+    if (problem) throw this.#fail(`file name ${JSON.stringify(name)} ${problem} (expected a flat file name)`);
+  }
+
+  /** Writes one data file (strings as UTF-8); the caller may drop `content` once this resolves. */
+  async add(name: string, content: Uint8Array | string): Promise<void> {
+    this.#checkName(name);
+    if (this.#files.has(name)) throw this.#fail(`file ${JSON.stringify(name)} is written twice`);
+    const bytes = typeof content === 'string' ? Buffer.from(content, 'utf8') : content;
+    this.#files.set(name, { sha256: sha256Hex(bytes), bytes: bytes.byteLength });
+    try {
+      await writeFlushed(join(this.#temp, name), bytes);
+    } catch (error) {
+      throw this.#fail(describe(error), error);
+    }
+  }
+
+  /** Writes the manifest and swaps the store in; returns the manifest. */
+  async commit(inputParams: Readonly<Record<string, unknown>>): Promise<Manifest> {
+    let params: Record<string, unknown>;
+    try {
+      params = manifestSchema.shape.params.parse(JSON.parse(JSON.stringify(inputParams)));
+    } catch (error) {
+      throw this.#fail(`params are not JSON-serialisable (${describe(error)})`, error);
+    }
+    const files: Record<string, FileEntry> = {};
+    for (const name of [...this.#files.keys()].sort()) {
+      const entry = this.#files.get(name);
+      if (entry) files[name] = entry;
+    }
+    const manifest: Manifest = { format: STORE_FORMAT, version: STORE_FORMAT_VERSION, createdAt: new Date().toISOString(), params, files };
+    try {
+      await writeFlushed(join(this.#temp, MANIFEST_NAME), Buffer.from(`${JSON.stringify(manifest, null, 2)}\n`, 'utf8'));
+      await swapIn(this.#temp, this.target, this.#backup);
+    } catch (error) {
+      if (error instanceof KindredError) throw error;
+      throw this.#fail(describe(error), error);
+    }
     return manifest;
-  } catch (error) {
-    await rm(temp, { recursive: true, force: true });
-    if (error instanceof KindredError) throw error;
-    throw fail(describe(error), error);
+  }
+
+  /** Removes the temp folder (after a failure; harmless after commit). */
+  async abort(): Promise<void> {
+    await rm(this.#temp, { recursive: true, force: true });
   }
 }
 

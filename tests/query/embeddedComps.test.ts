@@ -115,7 +115,10 @@ describe('openProfileStore with an embedding', () => {
     files.set('group-RP.json', JSON.stringify(group));
     const bad = join(dir, 'disagreeing');
     await writeStore(bad, { params: src.manifest.params, files });
-    await expect(openProfileStore(bad)).rejects.toThrow(StoreError);
-    await expect(openProfileStore(bad)).rejects.toThrow(/group-RP\.embedding\.json: does not match the group: code size/);
+    await expect(openProfileStore(bad, { load: 'eager' })).rejects.toThrow(StoreError);
+    await expect(openProfileStore(bad, { load: 'eager' })).rejects.toThrow(/group-RP\.embedding\.json: does not match the group: code size/);
+    // a lazy open refuses it when the group is first read
+    const lazy = await openProfileStore(bad);
+    expect(() => lazy.groups.get('RP')).toThrow(/group-RP\.embedding\.json: does not match the group: code size/);
   });
 });

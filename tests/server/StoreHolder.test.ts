@@ -52,9 +52,10 @@ describe('StoreHolder', () => {
     await cp(fullStore, dir, { recursive: true });
     const holder = await StoreHolder.open(dir);
     const before = holder.current;
-    const file = join(dir, 'players.json');
-    const text = await readFile(file, 'utf8');
-    await writeFile(file, text.replace(/"name":"/, '"name":"X'));
+    const file = join(dir, 'players.bin');
+    const bytes = await readFile(file);
+    bytes[bytes.length - 1] = (bytes[bytes.length - 1] ?? 0) ^ 1;
+    await writeFile(file, bytes);
     await expect(holder.reload()).rejects.toMatchObject({ code: 'kindred.store.corrupt' });
     expect(holder.current).toBe(before);
   });
@@ -91,7 +92,7 @@ describe('POST /api/reload', () => {
       const comps2 = json(await send(srv.url, compsPath, { headers: { Host: host } })) as { pool: { group_size: number } };
       expect(comps2.pool.group_size).toBe(groupSize(info2));
 
-      await rm(join(dir, 'players.json'));
+      await rm(join(dir, 'players.bin'));
       const failed = await send(srv.url, '/api/reload', { method: 'POST', headers: { Host: host } });
       expect(failed.status).toBe(503);
       expect(errorOf(failed).code).toMatch(/^kindred\.store\./);

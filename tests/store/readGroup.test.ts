@@ -13,6 +13,8 @@ import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { groupEmbeddingFileNames, groupFileNames } from '../../src/store/storeFileNames.ts';
 import { resealStore, swapStoreFiles } from '../helpers/resealStore.ts';
+import { decodeColumns, encodeColumns, type ColumnInput } from '../../src/store/columnsFile.ts';
+import { decodePlayersFile } from '../../src/store/playersFile.ts';
 
 let work: string;
 let built: string;
@@ -37,11 +39,22 @@ function copy(from: 'input' | 'pca' = 'input'): string {
   return dir;
 }
 
-function editJson(dir: string, name: string, edit: (json: { rows: { player: number[]; level: number[] } }) => void): void {
+/** Rewrites one i32 column of a group's rows file (group-<G>.rows.bin) and reseals the manifest. */
+function editRows(dir: string, group: 'OF' | 'C', column: 'player' | 'level', edit: (values: Int32Array) => void): void {
+  const name = groupFileNames(group).rows;
   const path = join(dir, name);
-  const json = JSON.parse(readFileSync(path, 'utf8'));
-  edit(json);
-  writeFileSync(path, JSON.stringify(json));
+  const cols = decodeColumns(readFileSync(path), name);
+  const columns: ColumnInput[] = [];
+  for (const c of ['player', 'season', 'level', 'sample', 'team', 'partition_rows'] as const) {
+    const values = Int32Array.from(cols.i32(c));
+    if (c === column) edit(values);
+    columns.push({ name: c, type: 'i32', values });
+  }
+  columns.push({ name: 'position', type: 'u8', values: cols.u8('position') });
+  columns.push({ name: 'age', type: 'f64', values: cols.f64('age') });
+  columns.push({ name: 'outs', type: 'f64', values: cols.f64('outs') });
+  columns.push({ name: 'team_name', type: 'strings', values: cols.strings('team_name') });
+  writeFileSync(path, encodeColumns(columns));
   resealStore(dir, [name]);
 }
 
@@ -58,7 +71,7 @@ describe('readGroup behind a rewritten manifest', () => {
     const sp = groupFileNames('SP');
     const rp = groupFileNames('RP');
     for (const kind of ['json', 'raw', 'z'] as const) swapStoreFiles(dir, sp[kind], rp[kind], true);
-    await expect(openProfileStore(dir)).rejects.toMatchObject({
+    await expect(openProfileStore(dir, { load: 'eager' })).rejects.toMatchObject({
       code: 'kindred.store.corrupt',
       message: expect.stringMatching(/group-SP\.json: holds group RP \(expected SP; files swapped\?\)/),
     });
@@ -69,7 +82,7 @@ describe('readGroup behind a rewritten manifest', () => {
     const names = groupFileNames('IF');
     expect(readFileSync(join(dir, names.raw)).length).toBe(readFileSync(join(dir, names.z)).length);
     swapStoreFiles(dir, names.raw, names.z, true);
-    await expect(openProfileStore(dir)).rejects.toMatchObject({
+    await expect(openProfileStore(dir, { load: 'eager' })).rejects.toMatchObject({
       code: 'kindred.store.corrupt',
       message: expect.stringMatching(/group-IF\.json: names group-IF\.raw\.f32 with sha256 [0-9a-f]{64}, but the store holds [0-9a-f]{64} \(files swapped\?\)/),
     });
@@ -81,7 +94,7 @@ describe('readGroup behind a rewritten manifest', () => {
       const sp = groupEmbeddingFileNames('SP')[kind];
       const rp = groupEmbeddingFileNames('RP')[kind];
       swapStoreFiles(dir, sp, rp, true);
-      await expect(openProfileStore(dir)).rejects.toMatchObject({
+      await expect(openProfileStore(dir, { load: 'eager' })).rejects.toMatchObject({
         code: 'kindred.store.corrupt',
         message: expect.stringMatching(/names group-(SP|RP)\.[a-z]+\.[a-z0-9]+ with sha256 [0-9a-f]{64}, but the store holds [0-9a-f]{64} \(files swapped\?\)/),
       });
@@ -90,11 +103,11 @@ describe('readGroup behind a rewritten manifest', () => {
 
   it('refuses a row naming a player past the players table', async () => {
     const dir = copy();
-    const players = (JSON.parse(readFileSync(join(dir, 'players.json'), 'utf8')) as { players: unknown[] }).players.length;
-    editJson(dir, groupFileNames('OF').json, (g) => {
-      g.rows.player[0] = players;
+    const players = decodePlayersFile(readFileSync(join(dir, 'players.bin')), 'players.bin').players.length;
+    editRows(dir, 'OF', 'player', (player) => {
+      player[0] = players;
     });
-    await expect(openProfileStore(dir)).rejects.toMatchObject({
+    await expect(openProfileStore(dir, { load: 'eager' })).rejects.toMatchObject({
       code: 'kindred.store.corrupt',
       message: expect.stringContaining(`row 0 names player ${players} (the store has ${players})`),
     });
@@ -102,10 +115,10 @@ describe('readGroup behind a rewritten manifest', () => {
 
   it('refuses a row naming a level past the level list', async () => {
     const dir = copy();
-    editJson(dir, groupFileNames('C').json, (g) => {
-      g.rows.level[1] = 99;
+    editRows(dir, 'C', 'level', (level) => {
+      level[1] = 99;
     });
-    await expect(openProfileStore(dir)).rejects.toMatchObject({
+    await expect(openProfileStore(dir, { load: 'eager' })).rejects.toMatchObject({
       code: 'kindred.store.corrupt',
       message: expect.stringMatching(/row 1 names level 99 \(the store has \d+\)/),
     });
