@@ -36,6 +36,11 @@ export interface QualityOptions {
   readonly compsOptions: CompsOptions;
   /** Only targets whose sample (PA or BF) lies in this range. */
   readonly sampleRange?: readonly [number, number];
+  /**
+   * The sample `sampleRange` is read from (default the row's own, `g.sample`): with profiles over windows,
+   * the target season's own sample, so that every window is scored on the same targets.
+   */
+  readonly sampleOf?: (g: StoredGroup, row: number) => number;
   readonly seed: number;
 }
 
@@ -114,7 +119,7 @@ function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: Q
     return state / 2 ** 32;
   };
   const candidates = poolRows.filter((r) => {
-    const s = g.sample[r] as number;
+    const s = o.sampleOf ? o.sampleOf(g, r) : (g.sample[r] as number);
     return !o.sampleRange || (s >= o.sampleRange[0] && s <= o.sampleRange[1]);
   });
   let sum = 0;

@@ -46,6 +46,7 @@ export type ErrorCode =
   | 'kindred.query.unknownDimension'
   | 'kindred.query.emptyPool'
   | 'kindred.query.badTarget'
+  | 'kindred.query.noWindow'
   // serving
   | 'kindred.serve.portInUse'
   | 'kindred.serve.listenFailed'

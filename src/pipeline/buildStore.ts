@@ -3,7 +3,7 @@ import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { readRoster, type ColumnMap } from '../ingest/readRoster.ts';
 import { writeRejects } from '../ingest/writeRejects.ts';
-import { buildProfiles, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
+import { buildProfiles, buildWindowProfiles, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
 import type { GroupFile } from '../store/groupFile.ts';
 import { encodeGroupFiles, type GroupIndexes } from '../store/encodeGroupFiles.ts';
 import { encodePlayersFile, playerIndexOf } from '../store/playersFile.ts';
@@ -22,6 +22,9 @@ import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } fro
 import { stageCharts } from './stageCharts.ts';
 import { computeOutcomes } from '../outlook/computeOutcomes.ts';
 
+/** The windows (in seasons) a build makes profiles over when none are asked for. */
+export const DEFAULT_BUILD_WINDOWS: readonly number[] = [1];
+
 export const DEFAULT_INDEX_PARAMS: IndexParams = { M: 16, efConstruction: 100, ef: 128, seed: 100 };
 
 export interface BuildOptions {
@@ -33,6 +36,12 @@ export interface BuildOptions {
   readonly index?: IndexParams;
   /** The learned embedding to rank comps in (default none: the weighted input space). */
   readonly embed?: EmbedSettingsInput;
+  /**
+   * The windows to build profiles over, in seasons (default [1]: single seasons). Each N >= 2 adds every
+   * group's profiles over windows of N seasons (buildWindowProfiles), in the input space, as group
+   * `<G>.w<N>`; queries reach them with `--window N`. 1 is always built.
+   */
+  readonly windows?: readonly number[];
   /**
    * Worker threads that build the HNSW indexes (default: the machine's cores); 1 builds them in this
    * thread. The store is byte for byte the same either way.
@@ -49,6 +58,8 @@ export interface BuildSummary {
   /** Position groups the roster's files leave empty, in words (Roster.notices). */
   readonly notices: readonly string[];
   readonly profiles: Readonly<Partial<Record<PositionGroup, number>>>;
+  /** Profiles over windows of N >= 2 seasons, per N and group (absent when only single seasons were built). */
+  readonly windows?: Readonly<Record<string, Readonly<Partial<Record<PositionGroup, number>>>>>;
   readonly skipped: ProfileSet['skipped'];
   readonly seconds: number;
   /** The ranking space, and per embedded group its code size and fitting time (absent for the input space). */
@@ -83,6 +94,8 @@ interface ReadRoster {
   /** The profiles by group; the build deletes each group once it is written, to let it be collected. */
   readonly groups: Map<PositionGroup, GroupProfiles>;
   readonly skipped: ProfileSet['skipped'];
+  /** Profiles over windows of N >= 2 seasons; each group is deleted once written. */
+  readonly windowSets: readonly { readonly size: number; readonly set: { readonly groups: Map<PositionGroup, GroupProfiles> } }[];
   readonly playerIndex: ReadonlyMap<string, number>;
   readonly levels: readonly string[];
   readonly playersFile: Uint8Array;
@@ -111,8 +124,11 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
   }
   progress('profiles', 0, 1);
   const profiles = buildProfiles(roster, options.profile ?? DEFAULT_PROFILE_OPTIONS);
+  const windowSizes = [...new Set(options.windows ?? DEFAULT_BUILD_WINDOWS)].filter((n) => n !== 1).sort((a, b) => a - b);
+  const windowSets = windowSizes.map((size) => ({ size, set: { groups: new Map(buildWindowProfiles(roster, options.profile ?? DEFAULT_PROFILE_OPTIONS, size, profiles).groups) } }));
   return {
     groups: new Map(profiles.groups),
+    windowSets,
     skipped: profiles.skipped,
     playerIndex: playerIndexOf(roster),
     levels: [...roster.levels],
@@ -138,6 +154,7 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
   const groupCount = pending.size;
   const indexParams = options.index ?? DEFAULT_INDEX_PARAMS;
   const counts: Partial<Record<PositionGroup, number>> = {};
+  const windowCounts: Record<string, Partial<Record<PositionGroup, number>>> = {};
   const embed = resolveEmbedSettings(options.embed ?? {});
   const charts = new Map<string, string>();
   const embedded: Partial<Record<PositionGroup, { dim: number; seconds: number }>> = {};
@@ -158,20 +175,25 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
   try {
     await writer.add(PLAYERS_FILE, read.playersFile);
     await writer.add(OUTCOMES_FILE, read.outcomesFile);
+    const work = [
+      ...[...pending.keys()].map((group) => ({ group, size: 1 })),
+      ...read.windowSets.flatMap(({ size, set }) => [...set.groups.keys()].map((group) => ({ group, size }))),
+    ];
     let done = 0;
-    for (const group of [...pending.keys()]) {
-      const g = pending.get(group);
+    for (const { group, size } of work) {
+      const g = size === 1 ? pending.get(group) : read.windowSets.find((w) => w.size === size)?.set.groups.get(group);
       if (!g) continue;
-      const names = groupFileNames(group);
+      const names = groupFileNames(group, size);
+      const label = size === 1 ? group : `${group} over ${size} seasons`;
       let e: EmbeddedGroup | null = null;
-      if (embed.method !== 'none' && g.meta.length >= MIN_EMBED_ROWS && g.dims.length >= 2) {
-        progress(`embedding ${group}`, done, groupCount);
+      if (size === 1 && embed.method !== 'none' && g.meta.length >= MIN_EMBED_ROWS && g.dims.length >= 2) {
+        progress(`embedding ${label}`, done, work.length);
         e = await embedProfiles(g, embed);
         for (const [name, content] of e.files) await writer.add(name, content);
         for (const [name, svg] of e.charts) charts.set(name, svg);
         embedded[group] = { dim: e.dim, seconds: e.seconds };
       }
-      progress(`index ${group}`, done, groupCount);
+      progress(`index ${label}`, done, work.length);
       let mainIndex: GroupFile['index'] = null;
       const partitions: GroupIndexes['partitions'][number][] = [];
       if (e) {
@@ -194,11 +216,16 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
         ...(e ? { embedding: { space: e.space, dim: e.dim, sha256: embeddingChecksums(group, e.files) } } : {}),
       });
       for (const [name, content] of groupFiles) await writer.add(name, content);
-      counts[group] = g.meta.length;
-      pending.delete(group);
+      if (size === 1) {
+        counts[group] = g.meta.length;
+        pending.delete(group);
+      } else {
+        (windowCounts[String(size)] ??= {})[group] = g.meta.length;
+        read.windowSets.find((w) => w.size === size)?.set.groups.delete(group);
+      }
       done++;
     }
-    progress('index', done, groupCount);
+    progress('index', done, work.length);
     await Promise.all(indexFiles);
     progress('writing store', 0, 1);
     const staged = await stageCharts(chartsFolderOf(storeDir), charts);
@@ -211,6 +238,7 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
         space: embed.method === 'none' ? 'input' : embed.method,
         ...(embed.method === 'none' ? {} : { embedding: settingsRecord(embed) }),
         groups: counts,
+        ...(read.windowSets.length > 0 ? { windows: windowCounts } : {}),
       });
     } catch (error) {
       await staged.discard();
@@ -232,6 +260,7 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
     rejectsPath,
     notices: read.notices,
     profiles: counts,
+    ...(Object.keys(windowCounts).length > 0 ? { windows: windowCounts } : {}),
     skipped,
     seconds: (performance.now() - started) / 1000,
     ...(embed.method === 'none' ? {} : { embedding: { space: embed.method, groups: embedded, chartsDir: chartsFolderOf(storeDir) } }),

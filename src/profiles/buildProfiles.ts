@@ -11,6 +11,7 @@ import { HITTER_DIMENSIONS } from './hitterDimensions.ts';
 import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
 import { leagueFip } from '../stats/leagueFip.ts';
 import type { PitchingSeason } from '../ingest/Roster.ts';
+import { windowKey, windowRoster } from './windowRoster.ts';
 
 /** The profiles of one position group, row-major n x d. */
 export interface GroupProfiles {
@@ -32,6 +33,15 @@ export interface GroupProfiles {
   readonly redundancy: Float64Array;
   /** Per dimension, league stratum key (`${season}|${level}`, plus `|${position}` for fielding) to the k used. */
   readonly shrinkage: ReadonlyMap<string, ReadonlyMap<string, ShrinkageUsed>>;
+  /** Present on profiles over several seasons (buildWindowProfiles): the window and each row's first season. */
+  readonly window?: WindowSpans;
+}
+
+/** The seasons a group's window rows span: row r holds seasons first[r] to its season (meta[r].season). */
+export interface WindowSpans {
+  /** Seasons per window (at least 2). */
+  readonly size: number;
+  readonly first: Int32Array;
 }
 
 export interface ProfileOptions {
@@ -105,6 +115,32 @@ export function buildProfiles(roster: Roster, options: ProfileOptions = DEFAULT_
     groups.set(group, assembleGroup(group, rows, meta, cols, options.standardise));
   }
   return { groups, skipped: seasons.skipped };
+}
+
+/**
+ * Profiles over windows of `window` seasons (windowRoster: each line combined with the same player's
+ * lines at its level in the seasons before it), built by the same steps as buildProfiles: the rates
+ * recomputed and regressed on the combined counts, standardised among the windows ending at the same
+ * season and level. The default weights are those of the single seasons (`single`, project choice):
+ * overlapping windows share seasons, so their season-to-season correlation would overstate reliability.
+ * `window` 1 is buildProfiles itself.
+ */
+export function buildWindowProfiles(roster: Roster, options: ProfileOptions, window: number, single: ProfileSet): ProfileSet {
+  if (window === 1) return single;
+  const wr = windowRoster(roster, window);
+  const built = buildProfiles(wr.roster, options);
+  const groups = new Map<PositionGroup, GroupProfiles>();
+  for (const [group, g] of built.groups) {
+    const one = single.groups.get(group);
+    const first = Int32Array.from(g.meta, (m) => wr.firstSeason.get(windowKey(m.playerId, m.season, m.level)) ?? m.season);
+    groups.set(group, {
+      ...g,
+      reliability: one ? one.reliability : g.reliability,
+      redundancy: one ? one.redundancy : g.redundancy,
+      window: { size: window, first },
+    });
+  }
+  return { groups, skipped: built.skipped };
 }
 
 function leagueKey(m: SeasonMeta, scope: 'group' | 'position'): string {

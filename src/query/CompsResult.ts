@@ -29,10 +29,12 @@ export interface Comp {
   readonly player_id: string;
   readonly name: string;
   readonly season: number;
+  /** With `--window N` (N >= 2): the first and last season the comp's window holds (the last is `season`). */
+  readonly seasons?: readonly [number, number];
   readonly level: string;
   readonly position: Position;
   readonly age: number | null;
-  /** Playing time of the comp's season: plate appearances (hitters) or batters faced (pitchers). */
+  /** Playing time of the comp's season (of his window with `--window`): plate appearances (hitters) or batters faced (pitchers). */
   readonly sample: number;
   readonly sample_unit: 'PA' | 'BF';
   /** Innings pitched in the comp's season, in the trade's thirds notation ("123.1" is 123 1/3); null for hitters. */
@@ -57,6 +59,9 @@ export interface QueryEcho {
   readonly player_id: string | null;
   readonly name: string | null;
   readonly season: number | null;
+  /** With `--window N` (N >= 2): the seasons per window, and the first and last season the target's window holds. */
+  readonly window?: number;
+  readonly seasons?: readonly [number, number];
   readonly level: string | null;
   readonly position: Position;
   readonly group: PositionGroup;

@@ -43,6 +43,7 @@ export function describeComp(q: PreparedQuery, s: ScoredRow, rank: number, setti
     player_id: player?.playerId ?? '',
     name: player?.name ?? '',
     season: valueAt(g.season, s.row),
+    ...(g.window ? { seasons: [valueAt(g.window.first, s.row), valueAt(g.season, s.row)] as const } : {}),
     level: store.levels[valueAt(g.level, s.row)] ?? '',
     position: g.position[s.row] ?? 'DH',
     age: Number.isNaN(age) ? null : age,

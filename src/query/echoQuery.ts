@@ -2,6 +2,7 @@ import type { PoolFilter } from './PoolFilter.ts';
 import { familyTotals } from '../profiles/familyWeights.ts';
 import type { PreparedQuery } from './prepareQuery.ts';
 import { round } from '../stats/round.ts';
+import { valueAt } from './valueAt.ts';
 import type { PoolEcho, QueryEcho } from './CompsResult.ts';
 import { describePool } from './describePool.ts';
 
@@ -19,6 +20,8 @@ export function echoQuery(q: PreparedQuery, k: number, method: QueryEcho['method
     player_id: player?.playerId ?? null,
     name: player?.name ?? null,
     season: t.season,
+    ...(g.window ? { window: g.window.size } : {}),
+    ...(g.window && t.row >= 0 ? { seasons: [valueAt(g.window.first, t.row), valueAt(g.season, t.row)] as const } : {}),
     level: t.level,
     position: t.position,
     group: t.group,

@@ -1,5 +1,6 @@
 import type { CheaperResult } from '../jobs/CheaperResult.ts';
 import { formatUsd } from './formatUsd.ts';
+import { seasonSpan } from './seasonSpan.ts';
 import { plainTable } from './plainTable.ts';
 import { playingTimeCells, playingTimeHeads } from './playingTime.ts';
 
@@ -8,7 +9,7 @@ export function cheaperTable(result: CheaperResult): string {
   const q = result.query;
   const s = result.pool.salary;
   const lines: string[] = [];
-  const who = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
+  const who = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${seasonSpan(q)} ${q.level ?? ''} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
   lines.push(`Cheaper comps for ${who}; salary ${formatUsd(s.target_salary_usd)}`);
   const rule = s.rule === 'max-share' && s.share !== null ? `${Math.round(s.share * 100)}% of his salary` : '--max-salary';
   lines.push(`Pool: ${s.under_limit.toLocaleString('en-US')} ${q.group} player-seasons paid up to ${formatUsd(s.limit_usd)} (${rule})`);
@@ -29,7 +30,7 @@ export function cheaperTable(result: CheaperResult): string {
   );
   for (const c of result.comps) {
     t.push([
-      String(c.rank), `${c.name} (${c.player_id})`, String(c.season), c.level, c.position, ...playingTimeCells(c), c.likeness.toFixed(0),
+      String(c.rank), `${c.name} (${c.player_id})`, seasonSpan(c), c.level, c.position, ...playingTimeCells(c), c.likeness.toFixed(0),
       formatUsd(c.salary_usd), c.value_score === null ? '-' : c.value_score.toFixed(1), c.frontier ? 'yes' : c.above_likeness_floor ? '' : 'low',
     ]);
   }

@@ -3,6 +3,7 @@ import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { CompsResult } from '../query/CompsResult.ts';
 import { formatValue } from './formatValue.ts';
 import { playingTimeCells, playingTimeHeads } from './playingTime.ts';
+import { seasonSpan } from './seasonSpan.ts';
 
 const PLAIN = {
   top: '', 'top-mid': '', 'top-left': '', 'top-right': '',
@@ -14,8 +15,9 @@ const PLAIN = {
 /** A one-line description of the query target. */
 export function describeTarget(result: CompsResult): string {
   const q = result.query;
-  const who = q.kind === 'player' ? `${q.name} (${q.player_id}), ${q.season} ${q.level} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
-  const pool = `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} player-seasons in the pool`;
+  const who = q.kind === 'player' ? `${q.name} (${q.player_id}), ${seasonSpan(q)} ${q.level} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
+  const rows = q.window === undefined ? 'player-seasons' : `windows of ${q.window} seasons (his last ${q.window} at a level, events added up)`;
+  const pool = `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} ${rows} in the pool`;
   return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space\nPool: ${result.pool.summary}\n${describeShares(result)}`;
 }
 
@@ -50,7 +52,7 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     list.push([
       String(c.rank),
       `${c.name}\n${c.player_id}`,
-      String(c.season),
+      seasonSpan(c),
       c.level,
       c.position,
       c.age === null ? '-' : String(c.age),

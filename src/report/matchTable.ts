@@ -1,6 +1,7 @@
 import type { DimensionInfo } from '../profiles/Dimension.ts';
 import type { MatchResult } from '../jobs/MatchResult.ts';
 import { formatValue } from './formatValue.ts';
+import { seasonSpan } from './seasonSpan.ts';
 import { plainTable } from './plainTable.ts';
 
 /** One candidate against a target as a terminal table: likeness, pool standing, then every dimension. */
@@ -8,9 +9,9 @@ export function matchTable(result: MatchResult, dims: readonly DimensionInfo[]):
   const q = result.query;
   const c = result.candidate;
   const lines: string[] = [];
-  const target = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''} ${q.position}` : `hand-built ${q.position} profile`;
+  const target = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${seasonSpan(q)} ${q.level ?? ''} ${q.position}` : `hand-built ${q.position} profile`;
   const time = c.ip === null ? `${c.sample} ${c.sample_unit}` : `${c.sample} ${c.sample_unit}, ${c.ip} IP`;
-  lines.push(`${c.name} (${c.player_id}), ${c.season} ${c.level} ${c.position}${c.age !== null ? `, age ${c.age}` : ''}; ${time}`);
+  lines.push(`${c.name} (${c.player_id}), ${seasonSpan(c)} ${c.level} ${c.position}${c.age !== null ? `, age ${c.age}` : ''}; ${time}`);
   lines.push(`against ${target}`);
   lines.push('');
   lines.push(`Likeness ${c.likeness.toFixed(0)} (100 identical, about 37 unrelated); ${Math.round(c.coverage * 100)}% of the target profile compared`);

@@ -1,6 +1,7 @@
 import type { ProspectResult } from '../jobs/ProspectResult.ts';
 import type { QuantileSummary } from '../outlook/Outlook.ts';
 import { peakSummaryOf } from '../outlook/summariseOutlook.ts';
+import { seasonSpan } from './seasonSpan.ts';
 import { plainTable } from './plainTable.ts';
 import { playingTimeCells, playingTimeHeads } from './playingTime.ts';
 
@@ -40,7 +41,7 @@ export function prospectTable(result: ProspectResult): string {
   const hitter = 'peak_ops_plus' in o;
   const peakLabel = hitter ? 'Peak OPS+' : 'Best FIP-';
   const lines: string[] = [];
-  lines.push(`Prospect comps for ${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}`);
+  lines.push(`Prospect comps for ${q.name ?? ''} (${q.player_id ?? ''}), ${seasonSpan(q)} ${q.level ?? ''} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}`);
   for (const w of result.warnings ?? []) lines.push(`Note: ${w}`);
   if (q.path_seasons > 1) lines.push(`Path matched: ${q.path.map((s) => `${s.season} ${s.level}${s.age !== null ? ` (${s.age})` : ''}`).reverse().join(' -> ')}`);
   lines.push(
@@ -63,7 +64,7 @@ export function prospectTable(result: ProspectResult): string {
       t.push([
         `${c.rank}${c.censored ? '*' : ''}`,
         `${c.name} (${c.player_id})`,
-        String(c.season),
+        seasonSpan(c),
         c.level,
         c.age === null ? '-' : String(c.age),
         ...playingTimeCells(c),

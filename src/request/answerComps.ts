@@ -1,4 +1,5 @@
 import { findComps } from '../query/findComps.ts';
+import { windowView } from '../query/windowView.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import type { CompsResult } from '../query/CompsResult.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
@@ -6,7 +7,8 @@ import type { JobRequest } from './JobRequest.ts';
 import { targetFrom } from './targetFrom.ts';
 
 /** The comps job: ranked comps for the request's target in its pool. */
-export function answerComps(store: ProfileStore, req: JobRequest): CompsResult {
+export function answerComps(stored: ProfileStore, req: JobRequest): CompsResult {
+  const store = windowView(stored, req.need('window'));
   const target = targetFrom(store, req);
   return findComps(store, target, compsOptionsFrom(req, store, target));
 }

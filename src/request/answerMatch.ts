@@ -1,6 +1,7 @@
 import { ParameterError } from '../errors/ParameterError.ts';
 import { matchPlayers, type MatchOptions } from '../jobs/matchPlayers.ts';
 import type { MatchResult } from '../jobs/MatchResult.ts';
+import { windowView } from '../query/windowView.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { resolvePlayer } from '../query/resolvePlayer.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
@@ -19,7 +20,8 @@ export function matchOptionsFrom(req: JobRequest, store: ProfileStore, target: T
 }
 
 /** The match job: one candidate against the target, likeness, percentile in the pool and every dimension. */
-export function answerMatch(store: ProfileStore, req: JobRequest): MatchResult {
+export function answerMatch(stored: ProfileStore, req: JobRequest): MatchResult {
+  const store = windowView(stored, req.need('window'));
   const target = targetFrom(store, req);
   const options = matchOptionsFrom(req, store, target);
   const candidate = req.get('candidate');

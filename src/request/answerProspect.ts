@@ -1,6 +1,7 @@
 import { findProspectComps, type ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import type { ProspectResult } from '../jobs/ProspectResult.ts';
+import { windowView } from '../query/windowView.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
@@ -20,7 +21,8 @@ export type StoredBacktest = { readonly file: BacktestFile | null; readonly reas
  * The prospect job: earlier players at his level and age, and what became of them, with the outlook
  * calibrated on the roster's own history when the store holds a matching backtest (calibrateOutlook).
  */
-export function answerProspect(store: ProfileStore, outcomes: Outcomes, req: JobRequest, backtest: StoredBacktest): ProspectResult {
+export function answerProspect(stored: ProfileStore, outcomes: Outcomes, req: JobRequest, backtest: StoredBacktest): ProspectResult {
+  const store = windowView(stored, req.need('window'));
   const target = targetFrom(store, req);
   const options = prospectOptionsFrom(req, store, target);
   return calibrateOutlook(store, outcomes, target, findProspectComps(store, outcomes, target, options), options, backtest);

@@ -24,6 +24,7 @@ export interface RequestValues {
   position: Position;
   want: string;
   batch: string;
+  window: number;
   seasonB: number;
   levelB: string;
   poolLevel: string[];
@@ -127,6 +128,10 @@ export const PARAMETERS: { readonly [K in ParameterKey]: Parameter<RequestValues
   batch: {
     name: 'batch', value: 'file', help: 'CSV of targets (player_id, season, level): one JSON line per target (CSV rows with {format} csv)', parse: v.text, jobs: TARGET_JOBS, only: 'cli',
     helpFor: { match: 'CSV of candidates (player_id, season, level) against the one target: one JSON line each (CSV rows with {format} csv)' },
+  },
+  window: {
+    name: 'window', value: 'n', parse: v.wholeUpTo(v.MAX_WINDOW), default: 1, jobs: TARGET_JOBS,
+    help: 'profiles over his last N seasons at the level (events added up), compared with other players\u2019 windows of N seasons ending at any season; 1: single seasons (a store holds the windows kindred build --windows made)',
   },
   seasonB: { name: 'season-b', value: 'year', help: 'the candidate season (default: his season most alike the target)', parse: v.season, jobs: ['match'] },
   levelB: { name: 'level-b', value: 'level', help: 'the candidate level (default: his highest that season)', parse: v.text, jobs: ['match'] },

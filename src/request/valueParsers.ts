@@ -13,6 +13,9 @@ export const MAX_K = 1000;
 /** Largest per-dimension multiplier (a project choice: 1000 already makes one dimension all there is). */
 export const MAX_WEIGHT = 1000;
 
+/** Most seasons one profile window may hold (a project choice: a longer window mixes a player's ages). */
+export const MAX_WINDOW = 5;
+
 export function positiveInt(value: string): number {
   const n = Number(value);
   if (!/^\d+$/.test(value.trim()) || !Number.isSafeInteger(n) || n < 1) throw new BadValue(`expected a whole number of 1 or more, got "${value}"`);

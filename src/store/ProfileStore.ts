@@ -57,6 +57,8 @@ export interface StoredGroup {
   readonly partitions: readonly StoredPartition[];
   /** The learned space comps are ranked in, when the store was built with one (the index then holds its codes). */
   readonly embedding?: StoredEmbedding;
+  /** Profiles over windows of several seasons: the seasons per window and each row's first season (its last is `season`). */
+  readonly window?: { readonly size: number; readonly first: Int32Array };
 }
 
 /** A profile row: the group and the row in it. */
@@ -82,6 +84,8 @@ export interface ProfileStore {
   /** Salary by player index and season. */
   readonly salaries: ReadonlyMap<number, ReadonlyMap<number, number>>;
   readonly groups: ReadonlyMap<PositionGroup, StoredGroup>;
+  /** Profiles over windows of N >= 2 seasons, by N then group (built with `kindred build --windows`); see windowView. */
+  readonly windows: ReadonlyMap<number, ReadonlyMap<PositionGroup, StoredGroup>>;
   /**
    * What every player did at the top level (outcomes.json), decoded on the first call. A store built
    * before outcomes were kept has none: StoreError `kindred.store.missing`, asking for a rebuild.

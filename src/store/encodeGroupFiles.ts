@@ -26,7 +26,7 @@ export function encodeGroupFiles(
   levels: readonly string[],
   indexes: GroupIndexes,
 ): Map<string, Uint8Array | string> {
-  const names = groupFileNames(g.group);
+  const names = groupFileNames(g.group, g.window?.size ?? 1);
   const levelIdx = new Map(levels.map((l, i) => [l, i]));
   const strata: GroupFile['strata'] = {};
   for (const [dim, map] of g.strata) {
@@ -53,6 +53,7 @@ export function encodeGroupFiles(
     index: indexes.index,
     partitions: indexes.partitions.map((p) => ({ dims: [...p.dims], rows: p.rows.length, index: p.index })),
     ...(indexes.embedding ? { embedding: indexes.embedding } : {}),
+    ...(g.window ? { window: { size: g.window.size, first: [...g.window.first] } } : {}),
   };
   const teamNames: string[] = [];
   const teamIdx = new Map<string, number>();

@@ -73,6 +73,11 @@ export const groupFileSchema = z.strictObject({
       sha256: z.strictObject({ summary: sha256Text, model: sha256Text, codes: sha256Text }),
     })
     .optional(),
+  /**
+   * Present on profiles over windows of several seasons (`group-<G>.w<N>.json`): the seasons per window
+   * and each row's first season (its last is `rows.season`).
+   */
+  window: z.strictObject({ size: z.number().int().min(2), first: z.array(z.number().int()) }).optional(),
 });
 
 export type GroupFile = z.infer<typeof groupFileSchema>;

@@ -1,3 +1,4 @@
+import { z } from 'zod';
 import { StoreError } from '../errors/KindredError.ts';
 import { Outcomes } from '../outlook/Outcomes.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
@@ -62,6 +63,13 @@ function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
     POSITION_GROUPS.filter((g) => groupFileNames(g).json in store.manifest.files),
     (group) => readWholeGroup(readGroup(store, group, refs)),
   );
+  const windows = new Map<number, ReadonlyMap<PositionGroup, StoredGroup>>();
+  for (const size of storedWindows(store.manifest.params)) {
+    windows.set(size, new LazyGroups(
+      POSITION_GROUPS.filter((g) => groupFileNames(g, size).json in store.manifest.files),
+      (group) => readWholeGroup(readGroup(store, group, refs, size)),
+    ));
+  }
   const outcomes = once((): Outcomes => {
     if (!(OUTCOMES_FILE in store.manifest.files)) {
       throw new StoreError('kindred.store.missing', `store at ${store.dir} has no ${OUTCOMES_FILE} (built by an older kindred); rebuild it with kindred build`, {
@@ -97,6 +105,7 @@ function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
       return salaries();
     },
     groups,
+    windows,
     outcomes,
   };
 }
@@ -116,6 +125,7 @@ function readWholeGroup(g: StoredGroup): StoredGroup {
 /** Reads every part of an opened store now (the eager open): every group and the outcomes. */
 function touchAll(profile: ProfileStore): void {
   for (const g of profile.groups.values()) void g.n;
+  for (const sized of profile.windows.values()) for (const g of sized.values()) void g.n;
   if (OUTCOMES_FILE in profile.opened.manifest.files) profile.outcomes();
 }
 
@@ -176,3 +186,12 @@ class LazyGroups implements ReadonlyMap<PositionGroup, StoredGroup> {
     for (const [key, value] of this.entries()) callback(value, key, this);
   }
 }
+
+/** The window sizes (N >= 2) a manifest's `params.windows` lists. */
+function storedWindows(params: Readonly<Record<string, unknown>>): number[] {
+  const parsed = windowsParamSchema.safeParse(params['windows']);
+  return parsed.success ? Object.keys(parsed.data).map(Number).filter((n) => n >= 2).sort((a, b) => a - b) : [];
+}
+
+/** `params.windows` of a manifest: per window size, the rows per group. */
+const windowsParamSchema = z.record(z.string().regex(/^[1-9][0-9]*$/), z.record(z.string(), z.number()));

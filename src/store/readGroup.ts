@@ -30,12 +30,18 @@ export function once<T>(compute: () => T): () => T {
  * before the native reader sees it). Every file is verified against the manifest when read, once.
  * Any mismatch is StoreError `kindred.store.corrupt`, thrown by the call or getter that reads the file.
  */
-export function readGroup(store: OpenStore, group: PositionGroup, refs: { readonly players: number; readonly levels: number }): StoredGroup {
-  const names = groupFileNames(group);
+export function readGroup(
+  store: OpenStore,
+  group: PositionGroup,
+  refs: { readonly players: number; readonly levels: number },
+  window = 1,
+): StoredGroup {
+  const names = groupFileNames(group, window);
   const where = `${store.dir}/${names.json}`;
   const bad = (what: string): Error => corruptFile(where, what);
   const gf = parseStoreJson(store.readTextSync(names.json), groupFileSchema, where);
   if (gf.group !== group) throw bad(`holds group ${gf.group} (expected ${group}; files swapped?)`);
+  if ((gf.window?.size ?? 1) !== window) throw bad(`holds windows of ${gf.window?.size ?? 1} seasons (expected ${window}; files swapped?)`);
   const d = gf.dims.length;
   const n = gf.n;
   if (gf.redundancy.length !== d || gf.reliability.length !== d) throw bad(`sizes do not match (${n} rows x ${d} dimensions)`);
@@ -62,6 +68,11 @@ export function readGroup(store: OpenStore, group: PositionGroup, refs: { readon
   const positionCode = cols.u8('position', n);
   const age = cols.f64('age', n);
   const sample = cols.i32('sample', n);
+  if (gf.window) {
+    const { size, first } = gf.window;
+    const outsideWindow = first.findIndex((f, r) => !(f <= (season[r] ?? -Infinity) && f > (season[r] ?? Infinity) - size));
+    if (first.length !== n || outsideWindow >= 0) throw bad(`window row ${outsideWindow} does not end at its season within ${size} seasons`);
+  }
   const outs = cols.f64('outs', n);
   const team = cols.i32('team', n);
   const teamNames = cols.strings('team_name');
@@ -163,5 +174,6 @@ export function readGroup(store: OpenStore, group: PositionGroup, refs: { readon
     },
     partitions,
     ...(embedding ? { embedding } : {}),
+    ...(gf.window ? { window: { size: gf.window.size, first: Int32Array.from(gf.window.first) } } : {}),
   };
 }

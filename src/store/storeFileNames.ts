@@ -12,17 +12,25 @@ export const OUTCOMES_FILE = 'outcomes.json';
 /** The latest backtest of the prospect outlook, written beside the manifest after the build (outside it). */
 export const BACKTEST_FILE = 'backtest.json';
 
-/** The files of one position group: its JSON part, its rows (a columns file), the raw and standardised matrices and its indexes. */
+/**
+ * The files of one position group: its JSON part, its rows (a columns file), the raw and standardised
+ * matrices and its indexes. Profiles over windows of N >= 2 seasons are the group `<G>.w<N>`
+ * (`group-IF.w3.json`, ...).
+ */
 export const groupFileNames = (
   group: string,
-): { json: string; rows: string; raw: string; z: string; index: string; partitionIndex: (i: number) => string } => ({
-  json: `group-${group}.json`,
-  rows: `group-${group}.rows.bin`,
-  raw: `group-${group}.raw.f32`,
-  z: `group-${group}.z.f32`,
-  index: `group-${group}.hnsw`,
-  partitionIndex: (i: number) => `group-${group}.p${i}.hnsw`,
-});
+  window = 1,
+): { json: string; rows: string; raw: string; z: string; index: string; partitionIndex: (i: number) => string } => {
+  const name = window === 1 ? group : `${group}.w${window}`;
+  return {
+    json: `group-${name}.json`,
+    rows: `group-${name}.rows.bin`,
+    raw: `group-${name}.raw.f32`,
+    z: `group-${name}.z.f32`,
+    index: `group-${name}.hnsw`,
+    partitionIndex: (i: number) => `group-${name}.p${i}.hnsw`,
+  };
+};
 
 /** The files of a group's learned space: summary, model weights and every row's code. */
 export const groupEmbeddingFileNames = (group: string): { summary: string; model: string; codes: string } => ({

@@ -33,6 +33,7 @@ export function filtersForm(info: StoreInfo): FiltersForm {
   const weights = h('input', { id: 'opt-weights', type: 'text', placeholder: 'e.g. obp=2,run_speed_ft_s=0', spellcheck: 'false' });
   const coverage = h('input', { id: 'opt-min-coverage', type: 'number', min: '0', max: '1', step: '0.05', value: '0.5' });
   const allSeasons = h('input', { id: 'opt-all-seasons', type: 'checkbox' });
+  const window = h('input', { id: 'opt-window', type: 'number', min: '1', max: '5', value: '1', title: 'profiles over his last N seasons at a level (a store built with kindred build --windows)' });
   const element = h(
     'fieldset',
     { class: 'filters' },
@@ -47,6 +48,7 @@ export function filtersForm(info: StoreInfo): FiltersForm {
     h('div', { class: 'field' }, h('label', { for: weights.id, class: 'field-label' }, 'Weights'), weights),
     h('div', { class: 'field' }, h('label', { for: coverage.id, class: 'field-label' }, 'Min coverage'), coverage),
     h('div', { class: 'field' }, h('label', { class: 'check' }, allSeasons, 'several seasons of one player')),
+    h('div', { class: 'field' }, h('label', { for: window.id, class: 'field-label' }, 'Seasons per profile'), window),
   );
   const value = (id: string): string => {
     const el = element.querySelector(`#${id}`);
@@ -73,6 +75,7 @@ export function filtersForm(info: StoreInfo): FiltersForm {
       set('weights', weights.value.trim());
       set('min-coverage', coverage.value.trim());
       if (allSeasons.checked) p.set('all-seasons', 'true');
+      if (window.value.trim() !== '1') set('window', window.value.trim());
       return p;
     },
     setDefaults(value: number, minCoverage: number): void {

@@ -19,6 +19,7 @@ const FIELD_LABELS: Readonly<Record<string, string>> = {
   preset: 'Weighting',
   weights: 'Weights',
   'min-coverage': 'Min coverage',
+  window: 'Seasons per profile',
   horizon: 'Follow-up',
   path: 'Seasons matched',
   'max-salary': 'Max salary',

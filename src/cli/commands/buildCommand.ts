@@ -1,7 +1,8 @@
-import { Command } from 'commander';
+import { Command, InvalidArgumentError } from 'commander';
 import cliProgress from 'cli-progress';
 import type { CliIo } from '../CliIo.ts';
-import { buildStore, type BuildSummary } from '../../pipeline/buildStore.ts';
+import { buildStore, DEFAULT_BUILD_WINDOWS, type BuildSummary } from '../../pipeline/buildStore.ts';
+import { MAX_WINDOW } from '../../request/valueParsers.ts';
 import { loadColumnMap } from '../../ingest/loadColumnMap.ts';
 import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { z } from 'zod';
@@ -34,7 +35,18 @@ const buildOptionsSchema = z.object({
   embedInput: z.enum(['z', 'weighted']),
   drivers: z.number(),
   backtest: z.boolean(),
+  windows: z.array(z.number()).optional(),
 });
+
+/** `--windows`: a comma list of window sizes, each a whole number from 1 to MAX_WINDOW. */
+function windowList(value: string): number[] {
+  const parts = value.split(',').map((p) => p.trim());
+  const sizes = parts.map(Number);
+  if (parts.some((p) => !/^\d+$/.test(p)) || sizes.some((n) => n < 1 || n > MAX_WINDOW)) {
+    throw new InvalidArgumentError(`expected window sizes from 1 to ${MAX_WINDOW} separated by commas, e.g. 1,3, got "${value}"`);
+  }
+  return sizes;
+}
 
 /** The build summary: rows read and rejected per file, profiles per group, time. */
 export function formatBuildSummary(s: BuildSummary): string {
@@ -44,6 +56,9 @@ export function formatBuildSummary(s: BuildSummary): string {
   lines.push(`Rows rejected: ${s.rejected.toLocaleString('en-US')}${s.rejectsPath ? ` (every one with its reason in ${s.rejectsPath})` : ''}`);
   const groups = Object.entries(s.profiles).map(([g, n]) => `${g} ${n.toLocaleString('en-US')}`);
   lines.push(`Profiles: ${groups.join(', ')}`);
+  for (const [size, counts] of Object.entries(s.windows ?? {})) {
+    lines.push(`Profiles over ${size} seasons: ${Object.entries(counts).map(([g, n]) => `${g} ${n.toLocaleString('en-US')}`).join(', ')}`);
+  }
   for (const notice of s.notices) lines.push(`Note: ${notice}`);
   const k = s.skipped;
   if (s.embedding) {
@@ -64,7 +79,8 @@ export function buildCommand(io: CliIo): Command {
     .option('--lenient', 'skip bad rows (each written with its reason to a rejects file) instead of stopping', false)
     .option('--columns <map.json>', 'map your export\u2019s file and column names to the canonical ones')
     .option('--rejects <file>', 'where --lenient writes skipped rows (default <store>.rejects.csv)')
-    .option('--no-backtest', 'skip the backtest of the prospect outlook (then shown uncalibrated)');
+    .option('--no-backtest', 'skip the backtest of the prospect outlook (then shown uncalibrated)')
+    .option('--windows <list>', `profiles over windows of these many seasons, for queries with --window N, e.g. 1,3 (1: single seasons, always built; default ${DEFAULT_BUILD_WINDOWS.join(',')})`, windowList);
   return addEmbedOptions(cmd).action(async (rosterDir: string, raw: unknown) => {
       const parsed = buildOptionsSchema.safeParse(raw);
       if (!parsed.success) throw new UsageError(`bad build options: ${parsed.error.issues[0]?.message ?? ''}`);
@@ -84,6 +100,7 @@ export function buildCommand(io: CliIo): Command {
           ...(columnMap ? { columnMap } : {}),
           ...(o.rejects !== undefined ? { rejectsPath: o.rejects } : {}),
           embed: embedSettingsFrom(o),
+          ...(o.windows !== undefined ? { windows: o.windows } : {}),
           onProgress: (stage, done, total) => {
             if (bar) {
               bar.setTotal(Math.max(total, done, 1));

@@ -3,6 +3,7 @@ import type { CliIo } from '../CliIo.ts';
 import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
+import { windowView } from '../../query/windowView.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { resolvePlayer } from '../../query/resolvePlayer.ts';
@@ -32,7 +33,7 @@ export function matchCommand(io: CliIo, setExit: (code: number) => void): Comman
     const withWant = cmd.getOptionValue('want') !== undefined;
     if (withWant && second !== undefined) throw new UsageError('with --want give only the candidate (player-b)');
     const req = requestFrom(cmd, 'match', withWant ? { candidate: first } : { player: first, candidate: second });
-    const store = await openProfileStore(req.need('store'));
+    const store = windowView(await openProfileStore(req.need('store')), req.need('window'));
     const format = req.need('format');
     const batch = req.get('batch');
     if (batch !== undefined) {

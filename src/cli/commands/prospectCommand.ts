@@ -3,6 +3,7 @@ import type { CliIo } from '../CliIo.ts';
 import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
+import { windowView } from '../../query/windowView.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProspectResult } from '../../jobs/ProspectResult.ts';
 import { readBacktestFile } from '../../outlook/backtestStore.ts';
@@ -26,7 +27,7 @@ export function prospectCommand(io: CliIo, setExit: (code: number) => void): Com
   addRequestOptions(cmd, 'prospect');
   cmd.action(async (player: string | undefined) => {
     const req = requestFrom(cmd, 'prospect', { player });
-    const store = await openProfileStore(req.need('store'));
+    const store = windowView(await openProfileStore(req.need('store')), req.need('window'));
     const outcomes = store.outcomes();
     const backtest = await readBacktestFile(store);
     const format = req.need('format');

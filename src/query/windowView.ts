@@ -1,0 +1,61 @@
+import { QueryError } from '../errors/KindredError.ts';
+import type { PositionGroup } from '../profiles/positionGroup.ts';
+import type { ProfileStore, StoredGroup, StoredRowRef } from '../store/ProfileStore.ts';
+
+/**
+ * The store as a query over windows of `window` seasons sees it: the same players, levels, salaries and
+ * outcomes, with every position group replaced by its profiles over windows (built with
+ * `kindred build --windows`), so each job finds targets, pools and comps among windows unchanged: a
+ * player's window ending at the asked season is compared with other players' windows ending at any
+ * season. `window` 1 is the store itself (single seasons). A window the store was not built with is
+ * QueryError `kindred.query.noWindow`, naming the windows it has.
+ *
+ * @example
+ * windowView(store, 3).groups.get('IF')?.window?.size; // => 3 (a store built with --windows 1,3)
+ */
+export function windowView(store: ProfileStore, window: number): ProfileStore {
+  if (window === 1) return store;
+  const groups = store.windows.get(window);
+  if (!groups) {
+    const built = [1, ...store.windows.keys()].join(', ');
+    throw new QueryError('kindred.query.noWindow', `the store holds no profiles over ${window} seasons (it has windows of ${built}); rebuild it with kindred build --windows ${built}, ${window}`, {
+      window,
+      built,
+    });
+  }
+  const rows = rowsByPlayer(groups);
+  return {
+    dir: store.dir,
+    opened: store.opened,
+    params: store.params,
+    levels: store.levels,
+    players: store.players,
+    playerById: store.playerById,
+    get salaries() {
+      return store.salaries;
+    },
+    rowsOf: (player: number): readonly StoredRowRef[] => rows().get(player) ?? [],
+    groups,
+    windows: store.windows,
+    outcomes: () => store.outcomes(),
+  };
+}
+
+/** Each player's window rows in every group, gathered on first use (groups in their stored order). */
+function rowsByPlayer(groups: ReadonlyMap<PositionGroup, StoredGroup>): () => ReadonlyMap<number, readonly StoredRowRef[]> {
+  let kept: Map<number, StoredRowRef[]> | undefined;
+  return () => {
+    if (kept) return kept;
+    const out = new Map<number, StoredRowRef[]>();
+    for (const [group, g] of groups) {
+      for (let row = 0; row < g.n; row++) {
+        const p = g.player[row] ?? -1;
+        let list = out.get(p);
+        if (!list) out.set(p, (list = []));
+        list.push({ group, row });
+      }
+    }
+    kept = out;
+    return out;
+  };
+}

@@ -1,0 +1,92 @@
+import { mkdtemp } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { runCli } from '../helpers/runCli.ts';
+import { compsResultSchema } from './compsContract.ts';
+import { simulateLeague } from '../../src/sim/simulateLeague.ts';
+import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
+import { openProfileStore } from '../../src/store/openProfileStore.ts';
+
+let single: string;
+let windowed: string;
+/** A hitter with at least three MLB seasons, and his third one. */
+let hitter: { id: string; season: number };
+
+beforeAll(async () => {
+  const dir = await mkdtemp(join(tmpdir(), 'kindred-window-cli-'));
+  const league = simulateLeague({ seed: 77, firstSeason: 2010, lastSeason: 2026, targetPlayerSeasons: 3000 });
+  await writeLeagueCsv(league, join(dir, 'roster'));
+  single = join(dir, 'single');
+  windowed = join(dir, 'windowed');
+  expect((await runCli('build', join(dir, 'roster'), '--store', single, '--no-backtest')).code).toBe(0);
+  const built = await runCli('build', join(dir, 'roster'), '--store', windowed, '--no-backtest', '--windows', '1,3');
+  expect(built.code).toBe(0);
+  expect(built.stderr).toMatch(/Profiles over 3 seasons: C \d/);
+  const store = await openProfileStore(single);
+  const g = store.groups.get('IF');
+  if (!g) throw new Error('no infielders');
+  const mlb = store.levels.indexOf('MLB');
+  const seasons = new Map<number, number[]>();
+  for (let r = 0; r < g.n; r++) if (g.level[r] === mlb) seasons.set(g.player[r] as number, [...(seasons.get(g.player[r] as number) ?? []), g.season[r] as number]);
+  const [player, list] = [...seasons].find(([, s]) => s.length >= 4) ?? [-1, []];
+  hitter = { id: store.players[player]?.playerId ?? '', season: [...list].sort((a, b) => a - b)[2] ?? 0 };
+});
+
+describe('kindred comps --window', () => {
+  it('--window 1 (and no --window) answers byte for byte as a store built without windows, in every format', async () => {
+    for (const format of ['table', 'json', 'csv']) {
+      const before = await runCli('comps', hitter.id, '--store', single, '--season', String(hitter.season), '--level', 'MLB', '--format', format);
+      expect(before.code).toBe(0);
+      const now = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--format', format, '--window', '1');
+      expect(now.stdout).toBe(before.stdout);
+      const plain = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--format', format);
+      expect(plain.stdout).toBe(before.stdout);
+    }
+  });
+
+  it('--window 3 compares his window ending at the asked season with windows ending at any season, each with the seasons it spans (JSON)', async () => {
+    const out = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--format', 'json', '--window', '3', '--k', '15');
+    expect(out.code).toBe(0);
+    const r = compsResultSchema.parse(JSON.parse(out.stdout));
+    expect(r.query.window).toBe(3);
+    expect(r.query.seasons?.[1]).toBe(hitter.season);
+    // his third MLB season: the window holds the two before it, and never a season after it
+    expect(r.query.seasons?.[0]).toBe(hitter.season - 2);
+    expect(r.comps.length).toBe(15);
+    for (const c of r.comps) {
+      const [first, last] = c.seasons ?? [NaN, NaN];
+      expect(last).toBe(c.season);
+      expect(first).toBeLessThanOrEqual(c.season);
+      expect(c.season - first).toBeLessThanOrEqual(2);
+    }
+    expect(new Set(r.comps.map((c) => c.season)).size).toBeGreaterThan(1);
+  });
+
+  it('shows each comp\u2019s window in the table (e.g. 2019-21) and in the CSV (first_season beside season)', async () => {
+    const table = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--window', '3');
+    expect(table.stdout).toMatch(/windows of 3 seasons/);
+    expect(table.stdout).toMatch(/ \d{4}-\d{2} +MLB /);
+    const csv = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--window', '3', '--format', 'csv');
+    const [head, first] = csv.stdout.split('\n');
+    const cols = (head ?? '').split(',');
+    expect(cols.slice(0, 4)).toEqual(['target_player_id', 'target_first_season', 'target_season', 'target_level']);
+    const cells = (first ?? '').split(',');
+    expect(Number(cells[cols.indexOf('first_season')])).toBeLessThanOrEqual(Number(cells[cols.indexOf('season')]));
+    expect(Number(cells[1])).toBe(hitter.season - 2);
+  });
+
+  it('refuses a window the store was not built with, naming the windows it has (kindred.query.noWindow)', async () => {
+    const out = await runCli('comps', hitter.id, '--store', windowed, '--window', '2', '--format', 'json');
+    expect(out.code).toBe(1);
+    expect(out.stderr).toMatch(/no profiles over 2 seasons \(it has windows of 1, 3\)/);
+    const bad = await runCli('comps', hitter.id, '--store', windowed, '--window', '9');
+    expect(bad.code).toBe(2);
+  });
+
+  it('serves the other jobs over windows too: match and cheaper name the window', async () => {
+    const cheaper = await runCli('cheaper', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--window', '3', '--format', 'json', '--max-share', '1');
+    expect(cheaper.code).toBe(0);
+    expect(cheaper.stdout).toMatch(/"window": 3/);
+  });
+});
