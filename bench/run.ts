@@ -14,7 +14,7 @@ const BENCHES: readonly { name: string; file: string; args: readonly string[]; w
   { name: 'quality', file: 'compsQuality.bench.ts', args: ['30000'], what: 'comps quality: plain z-scores against the default weights' },
   { name: 'quality', file: 'poolQuality.bench.ts', args: ['30000', '4', '30'], what: 'comps quality by pool: the whole group, his level, the default pool rules (position, levels within one, half his playing time), with adjacent positions' },
   { name: 'quality', file: 'shrinkageQuality.bench.ts', args: ['30000', '120'], what: 'comps quality by case (top-level hitters 400+ PA, SP 500+ BF, RP 150+ BF): fixed-table against fitted shrinkage' },
-  { name: 'quality', file: 'windowQuality.bench.ts', args: ['30000', '120'], what: 'comps quality by profile window (1, 2, 3 seasons) for MLB hitters, SP and RP' },
+  { name: 'quality', file: 'windowQuality.bench.ts', args: ['30000', '120'], what: 'comps quality by profile window (1, 2, 3 seasons) for top-level hitters, SP and RP' },
   { name: 'index', file: 'index.bench.ts', args: [], what: 'HNSW against brute force on random vectors' },
   { name: 'embed', file: 'embed.bench.ts', args: [], what: 'autoencoder training time at 100,000 rows' },
   { name: 'embed-quality', file: 'embedQuality.bench.ts', args: ['30000', 'none,pca,autoencoder'], what: 'comps quality in the input, PCA and autoencoder spaces' },

