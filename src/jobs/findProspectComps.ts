@@ -3,6 +3,7 @@ import { ParameterError } from '../errors/ParameterError.ts';
 import { isPitcherGroup } from '../profiles/positionGroup.ts';
 import { describeComp } from '../query/describeComp.ts';
 import { echoPool, echoQuery } from '../query/echoQuery.ts';
+import { describePool } from '../query/describePool.ts';
 import { DEFAULT_COMPS_OPTIONS, type CompsOptions } from '../query/findComps.ts';
 import { likeness, UNRELATED_LIKENESS } from '../query/likeness.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
@@ -294,7 +295,12 @@ export function findProspectComps(store: ProfileStore, outcomes: Outcomes, targe
         return { season: st.season, level: store.levels[st.level] ?? '', age: Number.isNaN(a) ? null : a };
       }),
     },
-    pool: { ...prospectPoolEcho(q, pool, target, season, asOf, horizon, censoredRows), likeness_floor: round(UNRELATED_LIKENESS, 1), below_likeness_floor: belowFloor },
+    pool: {
+      ...prospectPoolEcho(q, pool, target, season, asOf, horizon, censoredRows),
+      summary: describePool({ ...options.comps.filter, levels: [target.level ?? ''], seasonTo: season - 1, ageMin: pool.ageMin, ageMax: pool.ageMax }, null, target.group),
+      likeness_floor: round(UNRELATED_LIKENESS, 1),
+      below_likeness_floor: belowFloor,
+    },
     comps,
     warnings: establishedWarning(store, g, target, season),
     outlook: {

@@ -48,7 +48,6 @@ export function prospectTable(result: ProspectResult): string {
     `Pool: ${result.pool.eligible.toLocaleString('en-US')} ${q.group} player-seasons at ${r.level}, ages ${r.age_min}-${r.age_max}, before ${r.seasons_before}` +
       ` (${result.pool.complete_window.toLocaleString('en-US')} with ${o.horizon_seasons} seasons of follow-up, ${result.pool.censored.toLocaleString('en-US')} censored)`,
   );
-  lines.push(`Pool rules: ${result.pool.summary}`);
   lines.push('');
   if (result.comps.length === 0) {
     lines.push('No comps: nobody earlier at this level and age shares enough of the profile (see --min-coverage, --path).');

@@ -4,8 +4,8 @@ import { fileURLToPath } from 'node:url';
 import type { CliIo } from '../CliIo.ts';
 import { buildStore } from '../../pipeline/buildStore.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
-import { DEFAULT_COMPS_OPTIONS, findComps } from '../../query/findComps.ts';
-import { playerTarget } from '../../query/playerTarget.ts';
+import { answerComps } from '../../request/answerComps.ts';
+import { JobRequest } from '../../request/JobRequest.ts';
 import { compsTable } from '../../report/compsTable.ts';
 import { storeBacktest } from './storeBacktest.ts';
 import { formatBuildSummary } from './buildCommand.ts';
@@ -52,7 +52,9 @@ export function demoCommand(io: CliIo): Command {
         io.stderr.write('The demo roster has no catcher at the top level.\n');
         return;
       }
-      const result = findComps(store, playerTarget(store, at), DEFAULT_COMPS_OPTIONS);
+      // answered as `kindred comps <id>` is: the request's default pool (his position, levels within one, half his PA)
+      const featured = store.players[store.groups.get(at.group)?.player[at.row] ?? -1]?.playerId ?? '';
+      const result = answerComps(store, new JobRequest('comps', { player: featured, season: store.groups.get(at.group)?.season[at.row] ?? 0, level: store.levels[store.groups.get(at.group)?.level[at.row] ?? -1] ?? '' }));
       io.stdout.write('\n' + compsTable(result, store.groups.get('C')?.dims ?? []));
       const id = result.query.player_id ?? '';
       io.stdout.write(
