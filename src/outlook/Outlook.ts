@@ -66,6 +66,8 @@ export interface CalibratedOutlook {
   /** How the figures were made, in words (the pool, the probability map, the ranges). */
   readonly method: string;
   readonly reached_top_level: number;
+  /** The share of outcomes each calibrated range is meant to hold (0.8: from p10 to p90). */
+  readonly range_coverage: number;
   /**
    * p10 / p50 / p90 of the peak OPS+ (hitters) or best FIP- (pitchers), adjusted to 80% coverage, and
    * `coverage`: the share of realised values such ranges held in the backtest (null without one).

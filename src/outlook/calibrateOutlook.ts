@@ -9,6 +9,7 @@ import type { ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from './Outcomes.ts';
 import type { CalibratedOutlook } from './Outlook.ts';
 import type { ProspectResult } from '../jobs/ProspectResult.ts';
+import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 
 const r1 = (x: number): number | null => (Number.isFinite(x) ? Number(x.toFixed(1)) : null);
 
@@ -60,9 +61,10 @@ export function calibrateOutlook(
       `pool: his level, age +/- 1, earlier seasons (playing time is not a pool band: on the benched leagues a band of x2 did not help); ` +
       `probability: logistic map (Platt 1999) starting from the level-and-age base rate, moved by the comps' share shrunk toward it ` +
       `(prior weight ${fit.choice.shrink} against ${result.outlook.comps_effective} effective comps) and by his playing time for his level (log ${kind === 'hitter' ? 'PA' : 'BF'}), ` +
-      `fitted on ${fit.training} earlier forecasts of this roster; ranges: comps' and base rate's p10-p90 of ${peakName} and top-level seasons ` +
+      `fitted on ${fit.training} earlier forecasts of this roster; ranges: the comps' and base rate's central ${Math.round(100 * (OUTLOOK_CONSTANTS.quantiles[2] - OUTLOOK_CONSTANTS.quantiles[0]))}% of ${peakName} and top-level seasons ` +
       `adjusted by split conformal prediction (Lei et al. 2018) to ${Math.round((1 - fit.choice.alpha) * 100)}% coverage`,
     reached_top_level: Number(c.reached.toFixed(3)),
+    range_coverage: Number((1 - fit.choice.alpha).toFixed(3)),
     peak: { p10: r1(c.peak.p10), p50: r1(c.peak.p50), p90: r1(c.peak.p90), coverage: summary.peak_coverage.value },
     top_level_seasons: { p10: r1(c.seasons.p10), p50: r1(c.seasons.p50), p90: r1(c.seasons.p90), coverage: summary.seasons_coverage.value },
     backtest: {

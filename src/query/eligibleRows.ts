@@ -1,5 +1,14 @@
 import type { PoolFilter } from './PoolFilter.ts';
-import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
+import type { ProfileStore, StoredGroup, StoredPlayer } from '../store/ProfileStore.ts';
+
+/** What the pool filters read of a store: the level order and the players' hands. */
+export interface PoolStore {
+  readonly levels: ProfileStore['levels'];
+  readonly players: readonly Pick<StoredPlayer, 'bats' | 'throws'>[];
+}
+
+/** What the pool filters read of a group's rows. */
+export type PoolRows = Pick<StoredGroup, 'n' | 'player' | 'season' | 'level' | 'age' | 'position' | 'sample'>;
 
 /**
  * The pool as a mask over a group's rows: 1 where the row passes every filter and is not one of the
@@ -7,8 +16,8 @@ import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
  * unknown bats or throws fails a bats or throws filter.
  */
 export function eligibleRows(
-  store: ProfileStore,
-  g: StoredGroup,
+  store: PoolStore,
+  g: PoolRows,
   filter: PoolFilter,
   excludePlayers: ReadonlySet<number>,
 ): { mask: Uint8Array; count: number } {
@@ -70,10 +79,10 @@ function isEmptyFilter(f: PoolFilter): boolean {
   );
 }
 
-const byPlayerCache = new WeakMap<StoredGroup, Map<number, number[]>>();
+const byPlayerCache = new WeakMap<PoolRows, Map<number, number[]>>();
 
 /** A group's rows per player, built once per loaded group. */
-function rowsByPlayer(g: StoredGroup): Map<number, number[]> {
+function rowsByPlayer(g: PoolRows): Map<number, number[]> {
   let m = byPlayerCache.get(g);
   if (!m) {
     m = new Map();

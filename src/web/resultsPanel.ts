@@ -3,6 +3,9 @@ import type { DimensionInfo } from '../request/apiContract.ts';
 import { fetchMap } from './api.ts';
 import { h } from './dom.ts';
 import { download, toCsv } from './exportTable.ts';
+import { compsCsvRecords } from '../report/compsCsv.ts';
+import { formatCount, formatPercent, formatWhole } from '../text/numberFormats.ts';
+import type { CsvValue } from '../text/stringifyCsv.ts';
 import { gradeChartSpec } from './gradeChartSpec.ts';
 import { poolMapSpec, type Highlight } from './poolMapSpec.ts';
 import { renderChart } from './renderChart.ts';
@@ -11,9 +14,11 @@ import type { TopLevelSpec } from 'vega-lite';
 /** A column the table shows and exports beside the common ones (salary, outcome...). */
 export interface ExtraColumn {
   readonly title: string;
+  /** Its column in the CSV download (snake_case, as the CLI's CSV names it). */
+  readonly csv: string;
   /** The value as exported (CSV) and, unless `shown` says otherwise, as shown. */
-  readonly value: (comp: Comp, index: number) => string | number | null;
-  readonly shown?: (value: string | number) => string;
+  readonly value: (comp: Comp, index: number) => string | number | boolean | null;
+  readonly shown?: (value: string | number | boolean) => string;
 }
 
 /** What a view adds to the common results: columns, a sentence, its own chart, the answer to export. */
@@ -33,7 +38,6 @@ export interface ResultsPanel {
   clear(message: string): void;
 }
 
-const fmt = (v: number | null, digits: number): string => (v === null ? '—' : v.toFixed(digits));
 
 /** The results of any comps-like job: summary, table, grade chart of the chosen comp, pool map, exports. */
 export function resultsPanel(fileStem: () => string): ResultsPanel {
@@ -63,17 +67,12 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
   );
   let current: { result: CompsResult; extra: readonly ExtraColumn[]; raw: unknown } | null = null;
 
-  const header = (extra: readonly ExtraColumn[]): string[] => [
-    'rank', 'player_id', 'name', 'season', 'level', 'position', 'age', 'sample', 'sample_unit', 'ip', 'likeness', 'distance', 'coverage', ...extra.map((c) => c.title), 'alike', 'apart',
-  ];
-  const cells = (c: Comp, i: number, extra: readonly ExtraColumn[]): (string | number | null)[] => [
-    c.rank, c.player_id, c.name, c.season, c.level, c.position, c.age, c.sample, c.sample_unit, c.ip, c.likeness, c.distance, c.coverage, ...extra.map((x) => x.value(c, i)), c.alike.join(' '), c.apart.join(' '),
-  ];
 
   csvButton.addEventListener('click', () => {
     if (!current) return;
     const { result, extra } = current;
-    download(`${fileStem()}.csv`, 'text/csv', toCsv(header(extra), result.comps.map((c, i) => cells(c, i, extra))));
+    const columns = extra.map((x) => ({ name: x.csv, value: (c: Comp, i: number): CsvValue => x.value(c, i) }));
+    download(`${fileStem()}.csv`, 'text/csv', toCsv(compsCsvRecords(result, columns)));
   });
   jsonButton.addEventListener('click', () => {
     if (!current) return;
@@ -113,7 +112,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
       const who = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''}, ${q.position}` : `a hand-built ${q.position} profile`;
       summary.replaceChildren(
         options.headline !== undefined ? h('p', {}, h('strong', {}, options.headline)) : h('p', {}, h('strong', {}, `${result.comps.length} comps`), ` for ${who}`),
-        h('p', { class: 'meta' }, `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} player-seasons in the pool · searched ${q.method === 'hnsw' ? 'with the index' : 'exactly'}`),
+        h('p', { class: 'meta' }, `${formatCount(result.pool.eligible)} of ${formatCount(result.pool.group_size)} ${q.group} player-seasons in the pool · searched ${q.method === 'hnsw' ? 'with the index' : 'exactly'}`),
         h('p', { class: 'meta', id: 'pool-rules' }, `Pool: ${result.pool.summary}`),
         ...(options.note ? [h('p', { class: 'note', id: 'result-note' }, options.note)] : []),
       );
@@ -132,10 +131,10 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
           h('td', {}, c.level),
           h('td', {}, c.position),
           h('td', { class: 'num' }, c.age === null ? '—' : String(c.age)),
-          h('td', { class: 'num' }, String(c.sample)),
+          h('td', { class: 'num' }, formatCount(c.sample)),
           ...(pitchers ? [h('td', { class: 'num' }, c.ip ?? '—')] : []),
-          h('td', { class: 'num likeness' }, h('span', { class: 'bar-track' }, bar), fmt(c.likeness, 1)),
-          h('td', { class: 'num' }, `${Math.round(c.coverage * 100)}%`),
+          h('td', { class: 'num likeness' }, h('span', { class: 'bar-track' }, bar), formatWhole(c.likeness)),
+          h('td', { class: 'num' }, formatPercent(c.coverage)),
           ...extra.map((x) => {
             const v = x.value(c, i);
             return h('td', { class: typeof v === 'number' ? 'num' : '' }, v === null ? '—' : x.shown ? x.shown(v) : String(v));

@@ -10,6 +10,7 @@ import type { FiltersForm } from './filtersForm.ts';
 import type { PlayerPicker } from './playerPicker.ts';
 import type { ResultsPanel } from './resultsPanel.ts';
 import type { TargetBuilder } from './targetBuilder.ts';
+import { formatCount, formatDecimal, formatPercent, formatSigned, formatUsd, formatWhole } from '../text/numberFormats.ts';
 
 /** What every view can use: the shared controls and results panel, and the store's summary. */
 export interface ViewContext {
@@ -114,7 +115,8 @@ const outlookBox = h(
   h('div', { class: 'field' }, h('label', { class: 'check' }, censored, 'also list comps whose follow-up is not over')),
 );
 
-const yesNo = (b: boolean): string => (b ? 'yes' : 'no');
+/** A flag as the page shows it (the CSV keeps true or false). */
+const shownFlag = (v: string | number | boolean): string => (v === true ? 'yes' : v === false ? 'no' : String(v));
 const isProspectComp = (c: Comp): c is ProspectComp => 'outcome' in c && 'censored' in c;
 const prospectOf = (c: Comp): ProspectComp | undefined => (isProspectComp(c) ? c : undefined);
 
@@ -137,21 +139,21 @@ const prospectView: ViewDef = {
     const result = await fetchProspect(p);
     const m = peakMeasure(result);
     const o = result.outlook;
-    const pct = (v: number | null): string => (v === null ? 'n/a' : `${Math.round(v * 100)}%`);
+    const pct = formatPercent;
     const c = o.calibrated;
     const bt = c?.backtest;
     const calibrated = c && bt
-      ? ` Calibrated on this roster's history: ${pct(c.reached_top_level)}. On this roster, outlooks replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''} scored a Brier skill of ${bt.skill_vs_level_age.value ?? 'n/a'} against the level-and-age base rate, and their p10-p90 held the realised peak ${pct(c.peak.coverage)} and the top-level seasons ${pct(c.top_level_seasons.coverage)} of the time (nominal 80%).`
+      ? ` Calibrated on this roster's history: ${pct(c.reached_top_level)} reach the top level; ${m.label} ${c.peak.p10 === null || c.peak.p90 === null ? 'unknown' : `${formatWhole(c.peak.p10)} to ${formatWhole(c.peak.p90)}`}, a range meant to hold ${pct(c.range_coverage)} of outcomes. Replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''}, such ranges held ${pct(c.peak.coverage)} of realised values, with a Brier skill of ${formatSigned(bt.skill_vs_level_age.value, 2)} against the level-and-age base rate.`
       : ` No calibrated outlook: ${o.calibration_note ?? 'no backtest stored'}.`;
     const warned = (result.warnings ?? []).map((w) => `${w} `).join('');
-    const note = `${warned}Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_top_level)} reached the top level, against a base rate of ${pct(o.baseline.reached_top_level)} for ${o.baseline.player_seasons} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
+    const note = `${warned}Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_top_level)} reached the top level, against a base rate of ${pct(o.baseline.reached_top_level)} for ${formatCount(o.baseline.player_seasons)} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
       note,
       extra: [
-        { title: 'reached top level', value: (c) => (prospectOf(c) ? yesNo(prospectOf(c)?.outcome.reached_top_level ?? false) : null) },
-        { title: 'top-level seasons', value: (c) => prospectOf(c)?.outcome.top_level_seasons ?? null },
-        { title: m.label, value: (c) => { const pc = prospectOf(c); return pc ? peakOf(pc) : null; } },
-        { title: 'follow-up over', value: (c) => { const pc = prospectOf(c); return pc ? yesNo(!pc.censored) : null; } },
+        { title: 'reached top level', csv: 'reached_top_level', value: (c) => prospectOf(c)?.outcome.reached_top_level ?? null, shown: shownFlag },
+        { title: 'top-level seasons', csv: 'top_level_seasons', value: (c) => prospectOf(c)?.outcome.top_level_seasons ?? null },
+        { title: m.label, csv: 'peak_ops_plus' in result.outlook ? 'peak_ops_plus' : 'peak_fip_minus', value: (c) => { const pc = prospectOf(c); return pc ? peakOf(pc) : null; }, shown: (v) => (typeof v === 'number' ? formatWhole(v) : String(v)) },
+        { title: 'follow-up over', csv: 'censored', value: (c) => prospectOf(c)?.censored ?? null, shown: (v) => shownFlag(v === false) },
       ],
       chart: { title: 'What became of the comps', spec: outcomeChartSpec(result), label: 'outcome distribution of the comps against the base rate' },
     });
@@ -163,7 +165,7 @@ const maxShare = input('opt-max-share', 'or share', { type: 'number', min: '0', 
 const salaryBox = h('fieldset', { class: 'salary' }, h('legend', {}, 'Salary limit'), maxSalary.field, maxShare.field, h('p', { class: 'hint' }, 'Leave both empty for half his salary.'));
 const isCheaperComp = (c: Comp): c is CheaperComp => 'salary_usd' in c && 'frontier' in c;
 const cheaperOf = (c: Comp): CheaperComp | undefined => (isCheaperComp(c) ? c : undefined);
-const usd = (v: number): string => `$${Math.round(v).toLocaleString('en-US')}`;
+const usd = formatUsd;
 
 const cheaperView: ViewDef = {
   id: 'cheaper',
@@ -182,13 +184,13 @@ const cheaperView: ViewDef = {
     if (maxShare.el.value.trim() !== '') p.set('max-share', maxShare.el.value.trim());
     const result = await fetchCheaper(p);
     const s = result.pool.salary;
-    const note = `Salary limit ${usd(s.limit_usd)}${s.target_salary_usd !== null ? ` (his salary ${usd(s.target_salary_usd)})` : ''}: ${s.under_limit} player-seasons under it, ${s.over_limit} over, ${s.without_salary} without a known salary.`;
+    const note = `Salary limit ${usd(s.limit_usd)}${s.target_salary_usd !== null ? ` (his salary ${usd(s.target_salary_usd)})` : ''}: ${formatCount(s.under_limit)} player-seasons under it, ${formatCount(s.over_limit)} over, ${formatCount(s.without_salary)} without a known salary.`;
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
       note,
       extra: [
-        { title: 'salary (USD)', value: (c) => cheaperOf(c)?.salary_usd ?? null, shown: (v) => (typeof v === 'number' ? usd(v) : v) },
-        { title: 'value (0-100)', value: (c) => cheaperOf(c)?.value_score ?? null },
-        { title: 'frontier', value: (c) => { const cc = cheaperOf(c); return cc ? yesNo(cc.frontier) : null; } },
+        { title: 'salary (USD)', csv: 'salary_usd', value: (c) => cheaperOf(c)?.salary_usd ?? null, shown: (v) => (typeof v === 'number' ? usd(v) : String(v)) },
+        { title: 'value (0-100)', csv: 'value_score', value: (c) => cheaperOf(c)?.value_score ?? null, shown: (v) => (typeof v === 'number' ? formatDecimal(v, 1) : String(v)) },
+        { title: 'frontier', csv: 'frontier', value: (c) => cheaperOf(c)?.frontier ?? null, shown: shownFlag },
       ],
       chart: { title: 'Likeness against salary (the value frontier joined)', spec: frontierChartSpec(result), label: 'likeness against salary of the cheaper comps' },
     });
@@ -220,14 +222,14 @@ const matchView: ViewDef = {
     const result = await fetchMatch(p);
     const c = result.candidate;
     const comps: Comp[] = [c, ...(result.closest && result.closest.player_id !== c.player_id ? [result.closest] : [])];
-    const note = `${c.name} (${c.season} ${c.level}) is ${c.likeness.toFixed(1)} alike: more alike than ${c.percentile === null ? 'n/a' : `${c.percentile.toFixed(0)}%`} of the pool's ${c.pool_players} players${c.in_pool ? '' : ' (his season is outside the pool filters)'}.${result.closest ? ` The closest in the pool is ${result.closest.name} (${result.closest.likeness.toFixed(1)}).` : ''}`;
+    const note = `${c.name} (${c.season} ${c.level}) is ${formatWhole(c.likeness)} alike: more alike than ${c.percentile === null ? 'n/a' : `${formatWhole(c.percentile)}%`} of the pool's ${formatCount(c.pool_players)} players${c.in_pool ? '' : ' (his season is outside the pool filters)'}.${result.closest ? ` The closest in the pool is ${result.closest.name} (${formatWhole(result.closest.likeness)}).` : ''}`;
     await ctx.results.show({ query: result.query, pool: result.pool, comps }, ctx.dimsByGroup.get(result.query.group) ?? [], {
       raw: result,
       headline: `${result.query.name ?? 'The target profile'} against ${c.name}`,
       note,
       extra: [
-        { title: 'role', value: (x) => (candidateOf(x) ? 'candidate' : 'closest in pool') },
-        { title: 'percentile', value: (x) => candidateOf(x)?.percentile ?? null },
+        { title: 'role', csv: 'role', value: (x) => (candidateOf(x) ? 'candidate' : 'closest in pool') },
+        { title: 'percentile', csv: 'percentile', value: (x) => candidateOf(x)?.percentile ?? null },
       ],
     });
   },

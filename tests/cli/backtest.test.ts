@@ -63,7 +63,7 @@ describe('kindred backtest', () => {
     expect(json.outlook.calibrated?.backtest.cuts.length).toBeGreaterThan(0);
     expect(json.outlook.calibrated?.method).toMatch(/split conformal/);
     const table = await runCli('prospect', prospectId, '--store', sim.storeDir);
-    expect(table.stdout).toMatch(/On this roster, hitter outlooks replayed at/);
+    expect(table.stdout).toMatch(/Replay: [\d,]+ hitter prospects, \d+% reached the top level/);
     expect(table.stdout).toMatch(/not what this one will do/);
     // another horizon than the backtest's: shown uncalibrated, with the reason
     const other = JSON.parse((await runCli('prospect', prospectId, '--store', sim.storeDir, '--horizon', '4', '--format', 'json')).stdout) as { outlook: { calibrated: unknown; calibration_note: string } };

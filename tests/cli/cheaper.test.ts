@@ -91,13 +91,19 @@ describe('kindred cheaper <player>', () => {
     expect(out.stdout).toMatch(/\$[\d,]+ +[\d.]+ +yes/);
   });
 
-  it('--format csv gives a shortlist with readable headers and plain salaries', async () => {
+  it('--format csv keeps the comps CSV convention, with plain whole-dollar salaries, the value score and the frontier flags', async () => {
     const out = await runCli('cheaper', star.id, '--season', String(star.season), '--store', store, '--format', 'csv', '--k', '4', '--recent', 'all');
     expect(out.code).toBe(0);
     const rows: string[][] = parse(out.stdout);
-    expect(rows[0]).toEqual(expect.arrayContaining(['Player', 'Salary (USD)', 'Value score (0-100)', 'Playing time', 'Playing time unit', 'Value frontier']));
-    const col = rows[0]?.indexOf('Salary (USD)') ?? -1;
+    const comps: string[][] = parse((await runCli('comps', star.id, '--season', String(star.season), '--store', store, '--format', 'csv', '--k', '1')).stdout);
+    const head = rows[0] ?? [];
+    const own = ['salary_usd', 'value_score', 'likeness_per_million', 'frontier', 'above_likeness_floor'];
+    // the comps columns in the same order, the salary columns before alike and apart
+    expect(head.filter((h) => !own.includes(h))).toEqual(comps[0]);
+    expect(head.slice(head.indexOf('coverage') + 1, head.indexOf('alike'))).toEqual(own);
+    const col = head.indexOf('salary_usd');
     expect(rows.slice(1).every((r) => /^\d+$/.test(r[col] ?? ''))).toBe(true);
+    expect(rows.slice(1).every((r) => ['true', 'false'].includes(r[head.indexOf('frontier')] ?? ''))).toBe(true);
     expect(rows).toHaveLength(5);
   });
 

@@ -49,7 +49,7 @@ describe('kindred prospect <player>', () => {
     const out = await runCli('prospect', hitter, '--store', store);
     expect(out.code).toBe(0);
     expect(out.stdout).toMatch(/^Prospect comps for .*\(p\d+\), \d{4} High /);
-    expect(out.stdout).toMatch(/Outlook: what the \d+ comps did in the next 6 seasons/);
+    expect(out.stdout).toMatch(/What the \d+ comps did in the 6 seasons after theirs/);
     expect(out.stdout).toMatch(/Reached the top level +\d+% +\d+%/);
     expect(out.stdout).toMatch(/Peak OPS\+/);
     expect(out.stdout).toMatch(/not what this one will do/);
@@ -74,9 +74,9 @@ describe('kindred prospect <player>', () => {
     expect(head).toMatch(/ Age +PA +Like +Cov /);
     const first = r.comps[0];
     if (!first) throw new Error('no comps');
-    // the name cell may wrap: the row is the line holding the id and the one before it
+    // the id is on the line under the comp's row
     const lines = out.stdout.split('\n');
-    const at = lines.findIndex((l) => l.includes(`(${first.player_id})`));
+    const at = lines.findIndex((l) => l.trim().startsWith(first.player_id));
     const row = `${lines[at - 1] ?? ''} ${lines[at] ?? ''} `;
     expect(row).toContain(` ${first.sample} `);
     expect(row).toContain(` ${Math.round(first.coverage * 100)}% `);

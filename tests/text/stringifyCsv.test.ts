@@ -8,4 +8,7 @@ describe('stringifyCsv(records)', () => {
     const back: string[][] = parse(text);
     expect(back).toEqual([['name', 'note', 'HR'], ['\'=HYPERLINK("x","y")', 'a,"b"', '12'], ["'@SUM(A1)", '', '-3']]);
   });
+  it('writes flags as true and false, the way the page writes them', () => {
+    expect(stringifyCsv([['frontier', 'censored'], [true, false]])).toBe('frontier,censored\ntrue,false\n');
+  });
 });

@@ -163,8 +163,10 @@ describe('the comps view', () => {
     const [csvDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-csv')]);
     expect(csvDownload.suggestedFilename()).toBe('kindred-comps.csv');
     const csv = await readFile(await csvDownload.path(), 'utf8');
-    const lines = csv.trimEnd().split('\r\n');
-    expect(lines[0]).toBe('rank,player_id,name,season,level,position,age,sample,sample_unit,ip,likeness,distance,coverage,alike,apart');
+    const lines = csv.trimEnd().split('\n');
+    // the CLI's CSV convention, values included: each dimension's value, grade and share after alike and apart
+    expect(lines[0]?.startsWith('target_player_id,target_season,target_level,rank,player_id,name,season,level,position,age,sample,sample_unit,ip,likeness,distance,coverage,alike,apart,')).toBe(true);
+    expect(lines[0]).toContain(',obp,obp_grade,obp_share,');
     expect(lines.length).toBe(6);
 
     const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
@@ -174,7 +176,7 @@ describe('the comps view', () => {
     expect(exported.pool.filters).toMatchObject({ levels: ['Elite', 'Top'], age_min: 22, age_max: 30, positions: [exported.query.position] });
     expect(exported.pool.filters.min_sample).toBe(exported.pool.sample_floor?.min);
     expect(await page.textContent('#pool-rules')).toBe(`Pool: ${exported.pool.summary}`);
-    expect(lines.slice(1).map((l) => l.split(',')[1])).toEqual(exported.comps.map((c) => c.player_id));
+    expect(lines.slice(1).map((l) => l.split(',')[4])).toEqual(exported.comps.map((c) => c.player_id));
   });
 
   it('shows a refused parameter in page language (its field\'s label, no flag, no code) and clears the previous chart caption', async () => {
@@ -269,8 +271,8 @@ describe('the cheaper comps view', () => {
     expect(await page.textContent('#result-note')).toContain('Salary limit $2,000,000');
     expect(await page.locator('#extra-chart svg .mark-symbol.role-mark path').count()).toBe(expected.comps.length);
     const [csvDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-csv')]);
-    const header = (await readFile(await csvDownload.path(), 'utf8')).split('\r\n')[0];
-    expect(header).toBe('rank,player_id,name,season,level,position,age,sample,sample_unit,ip,likeness,distance,coverage,salary (USD),value (0-100),frontier,alike,apart');
+    const header = (await readFile(await csvDownload.path(), 'utf8')).split('\n')[0];
+    expect(header).toContain(',likeness,distance,coverage,salary_usd,value_score,frontier,alike,apart,');
     await page.screenshot({ path: join(ARTIFACTS, 'cheaper.png'), fullPage: true });
   });
 });

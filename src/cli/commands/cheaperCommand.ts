@@ -16,7 +16,7 @@ import type { OutputFormat } from '../../request/valueParsers.ts';
 /** Writes one cheaper-comps result in the chosen format. */
 export function writeCheaper(io: CliIo, store: ProfileStore, result: CheaperResult, format: OutputFormat): void {
   if (format === 'json') io.stdout.write(JSON.stringify(result, null, 2) + '\n');
-  else if (format === 'csv') io.stdout.write(cheaperCsv(result, store.groups.get(result.query.group)?.dims ?? []));
+  else if (format === 'csv') io.stdout.write(cheaperCsv(result));
   else io.stdout.write(cheaperTable(result));
 }
 
@@ -36,7 +36,7 @@ export function cheaperCommand(io: CliIo, setExit: (code: number) => void): Comm
         await runBatch(
           io, batch, format,
           (t) => answerCheaper(store, req.with({ player: t.playerId, season: t.season, level: t.level })),
-          (r) => cheaperCsv(r, store.groups.get(r.query.group)?.dims ?? []),
+          (r) => cheaperCsv(r),
         ),
       );
       return;
