@@ -1,6 +1,6 @@
 import { stringifyCsv } from '../text/stringifyCsv.ts';
 import type { CheaperComp, CheaperResult } from '../jobs/CheaperResult.ts';
-import { compsCsvRecords, type CsvExtraColumn } from './compsCsv.ts';
+import { compsCsvRecords, type CsvExtraColumn } from './compsCsvRecords.ts';
 
 /** The cheaper comps' own CSV columns: salary as a whole number of US dollars, the value score, likeness per $1M, the frontier flags. */
 export const CHEAPER_CSV_COLUMNS: readonly CsvExtraColumn<CheaperComp>[] = [

@@ -3,7 +3,7 @@ import type { DimensionInfo } from '../request/apiContract.ts';
 import { fetchMap } from './api.ts';
 import { h } from './dom.ts';
 import { download, toCsv } from './exportTable.ts';
-import { compsCsvRecords } from '../report/compsCsv.ts';
+import { compsCsvRecords } from '../report/compsCsvRecords.ts';
 import { formatCount, formatPercent, formatWhole } from '../text/numberFormats.ts';
 import type { CsvValue } from '../text/stringifyCsv.ts';
 import { gradeChartSpec } from './gradeChartSpec.ts';

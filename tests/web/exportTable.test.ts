@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { csvCell, toCsv } from '../../src/web/exportTable.ts';
-import { compsCsv, compsCsvRecords } from '../../src/report/compsCsv.ts';
+import { compsCsv } from '../../src/report/compsCsv.ts';
+import { compsCsvRecords } from '../../src/report/compsCsvRecords.ts';
 import { stringifyCsv } from '../../src/text/stringifyCsv.ts';
 import type { CompsResult } from '../../src/query/CompsResult.ts';
 
