@@ -89,7 +89,8 @@ beforeAll(async () => {
   browser = await chromium.launch({ executablePath: found.executablePath, args: [...found.args] });
   context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 1000 } });
   page = await context.newPage();
-  page.setDefaultTimeout(10_000);
+  // 30 s: under a full suite on 2 cores an answer drawn on the page took more than 10 s once.
+  page.setDefaultTimeout(30_000);
   page.on('console', (m) => {
     if (m.type() === 'error') problems.push(`console: ${m.text()}`);
   });
