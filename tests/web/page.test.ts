@@ -214,6 +214,9 @@ describe('the build-a-target view', () => {
     await page.locator('#want-grade-k_pct').fill('40');
     await page.fill('#opt-k', '10');
     await page.click('#run');
+    // The view's summary names the hand-built profile only once this answer is drawn (a table from the
+    // view shown before may still be on the page until then).
+    await page.waitForFunction(() => document.querySelector('#summary')?.textContent?.includes('hand-built SS profile') === true);
     await page.waitForSelector('#comps-table tbody tr');
     await page.waitForSelector('#map-chart svg');
     const expected = await api(`/api/comps?want=${encodeURIComponent('k_pct=40g,obp=65g,iso=.180')}&position=SS&pool-level=Elite,Top&age=22-30`);
