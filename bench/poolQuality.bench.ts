@@ -23,20 +23,13 @@ import { DEFAULT_REACH, poolRules } from '../src/query/poolDefaults.ts';
 import type { PoolFilter } from '../src/query/PoolFilter.ts';
 import type { Target } from '../src/query/Target.ts';
 import type { PositionGroup } from '../src/profiles/positionGroup.ts';
+import { TALENTS_SHOWN } from './lib/compsQuality.ts';
 
 const GROUPS: PositionGroup[] = ['C', 'IF', 'OF', 'SP', 'RP'];
 const POOLS = ['group', 'level', 'default', 'adjacent'] as const;
 type Pool = (typeof POOLS)[number];
 const K = 10;
 
-const TALENTS_SHOWN: Record<PositionGroup, readonly string[] | null> = {
-  C: null,
-  IF: ['contact', 'power', 'eye', 'speed', 'glove', 'arm'],
-  OF: ['contact', 'power', 'eye', 'speed', 'glove', 'arm'],
-  DH: ['contact', 'power', 'eye', 'speed'],
-  SP: null,
-  RP: null,
-};
 
 function poolFilter(store: ProfileStore, g: StoredGroup, target: Target, pool: Pool): PoolFilter {
   if (pool === 'group') return {};

@@ -14,7 +14,8 @@ import { quantileSorted } from '../../src/stats/quantile.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 
-const TALENTS_SHOWN: Record<PositionGroup, readonly string[] | null> = {
+/** The simulator talents a group's comps are scored on (null: every talent of the kind). */
+export const TALENTS_SHOWN: Record<PositionGroup, readonly string[] | null> = {
   C: null,
   IF: ['contact', 'power', 'eye', 'speed', 'glove', 'arm'],
   OF: ['contact', 'power', 'eye', 'speed', 'glove', 'arm'],
