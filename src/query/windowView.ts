@@ -17,8 +17,11 @@ export function windowView(store: ProfileStore, window: number): ProfileStore {
   if (window === 1) return store;
   const groups = store.windows.get(window);
   if (!groups) {
-    const built = [1, ...store.windows.keys()].join(', ');
-    throw new QueryError('kindred.query.noWindow', `the store holds no profiles over ${window} seasons (it has windows of ${built}); rebuild it with kindred build --windows ${built}, ${window}`, {
+    const have = [1, ...store.windows.keys()].sort((a, b) => a - b);
+    const built = have.join(', ');
+    // the command line's list takes no spaces (one shell word): --windows 1,2,3
+    const rebuild = [...have, window].sort((a, b) => a - b).join(',');
+    throw new QueryError('kindred.query.noWindow', `the store holds no profiles over ${window} seasons (it has windows of ${built}); rebuild it with kindred build --windows ${rebuild}`, {
       window,
       built,
     });

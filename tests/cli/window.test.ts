@@ -83,6 +83,11 @@ describe('kindred comps --window', () => {
     const out = await runCli('comps', hitter.id, '--store', windowed, '--window', '2', '--format', 'json');
     expect(out.code).toBe(1);
     expect(out.stderr).toMatch(/no profiles over 2 seasons \(it has windows of 1, 3\)/);
+    // the rebuild it suggests is one shell word, sizes in order, as kindred build --windows parses it
+    expect(out.stderr).toMatch(/rebuild it with kindred build --windows 1,2,3(\s|$)/);
+    const suggested = /--windows (\S+)/.exec(out.stderr)?.[1] ?? '';
+    const rebuilt = await runCli('build', join(windowed, '..', 'roster'), '--store', join(windowed, '..', 'suggested'), '--no-backtest', '--windows', suggested);
+    expect(rebuilt.code).toBe(0);
     const bad = await runCli('comps', hitter.id, '--store', windowed, '--window', '9');
     expect(bad.code).toBe(2);
   });
