@@ -40,15 +40,26 @@ const POOLS: Record<string, Partial<ProspectOptions>> = {
   ...(process.env['KINDRED_BENCH_POOLS'] === '1' ? { 'PA/BF band x2': { sampleBand: 2 }, 'band x2 + level path': { sampleBand: 2, levelPath: true } } : {}),
 };
 const D = DEFAULT_CALIBRATION;
+/** The default's name in the tables below. */
+const DEFAULT_MAP = 'chosen per roster (default)';
+/** The former default: the first candidates, fixed. */
+const FIXED: CalibrationChoice = { ...D, candidates: [], peakCandidates: [] };
 const MAPS: Record<string, CalibrationChoice> = {
-  'logistic: comps, PA (default)': D,
-  'logistic: comps only': { ...D, features: ['comps'] },
-  'isotonic on shrunk comps share': { ...D, method: 'isotonic', features: ['comps'] },
-  'logistic: + age for the level, level path': { ...D, features: ['comps', 'sample', 'age', 'path'] },
-  'logistic: + his own profile (ridge 40)': { ...D, features: ['comps', 'sample', 'profile'], ridge: 40 },
-  'default + peak by ridge on comps and profile (40)': { ...D, peak: 'regression', peakFeatures: ['comps', 'profile'], ridge: 40 },
-  'default + scaled conformal score': { ...D, peak: 'scaled' },
+  [DEFAULT_MAP]: D,
+  'fixed: logistic on comps and PA, blended peak (former default)': FIXED,
+  'fixed: logistic on comps only': { ...FIXED, features: ['comps'] },
+  'fixed: isotonic on shrunk comps share': { ...FIXED, method: 'isotonic', features: ['comps'] },
+  'fixed: + age for the level, level path': { ...FIXED, features: ['comps', 'sample', 'age', 'path'] },
+  'fixed: + promotion in the season, PA over all levels': { ...FIXED, features: ['comps', 'seasonSample', 'climb'] },
+  'fixed: + his own profile (ridge 40)': { ...FIXED, features: ['comps', 'sample', 'profile'], ridge: 40 },
+  'fixed: + his own profile (ridge 100)': { ...FIXED, features: ['comps', 'sample', 'profile'], ridge: 100 },
+  'fixed: + his own profile (ridge 250)': { ...FIXED, features: ['comps', 'sample', 'profile'], ridge: 250 },
+  'fixed: peak by ridge on comps and profile (40)': { ...FIXED, peak: 'regression', peakFeatures: ['comps', 'profile'] },
+  'fixed: scaled conformal score': { ...FIXED, peak: 'scaled' },
+  'chosen per roster, probability map only (peak blended)': { ...D, peakCandidates: [] },
 };
+const ONLY = process.env['KINDRED_BENCH_MAPS']?.split('|');
+if (ONLY) for (const name of Object.keys(MAPS)) if (!ONLY.some((o) => name.includes(o)) && name !== DEFAULT_MAP) delete MAPS[name];
 const AIMS = { skill: { atLeast: 0.15 }, rho: { atLeast: 0.6 }, cover: { within: [0.75, 0.85] } } as const;
 
 const f = (x: number, d = 3): string => (Number.isFinite(x) ? x.toFixed(d) : '-');
@@ -97,16 +108,17 @@ for (const spec of benchLeagues(playerSeasons).filter((s) => wanted.includes(s.n
       });
       const secs = (performance.now() - t) / 1000;
       for (const [mapName, choice] of Object.entries(MAPS)) {
-        if (poolName !== 'level+age (default)' && mapName !== 'logistic: comps, PA (default)') continue;
-        const usedChoice: CalibrationChoice = poolName === 'level+age (default)' ? choice : { ...choice, features: ['comps', 'matched', 'sample'] };
+        if (poolName !== 'level+age (default)' && mapName !== DEFAULT_MAP) continue;
+        const usedChoice: CalibrationChoice = poolName === 'level+age (default)' ? choice : { ...FIXED, features: ['comps', 'matched', 'sample'] };
         const b = runBacktest(rows, outcomes.lastSeason, { horizon: 6, calibration: usedChoice, rounds: 300 });
         console.log(`  pool ${poolName}, map ${mapName}: cuts ${b.cuts.join(',') || 'none'} (${rows.length} forecasts in ${secs.toFixed(0)} s)`);
         if (b.tooShort) console.log(`    ${b.tooShort}`);
         for (const k of b.kinds) {
           console.log(`    ${line(k)}`);
           add(`${poolName} | ${mapName} | ${k.kind}`, k);
-          if (poolName === 'level+age (default)' && mapName === 'logistic: comps, PA (default)') {
+          if (poolName === 'level+age (default)' && mapName === DEFAULT_MAP) {
             console.log(`      ${aimed(spec.name, k)}`);
+            console.log(`      chosen at each cut: ${k.cuts.map((c) => `${c.cut} ${c.features.includes('profile') ? 'with profile' : 'plain'}, peak ${c.peak}`).join('; ')}`);
             const o = oracle(rows, b.cuts, k.kind, league, store);
             console.log(`      unreachable true-talent reference (the simulator's ceiling value, same rolling origin): skill vs lvl-age ${f(o.skill)}, rho of ceiling with peak ${f(o.rho, 2)}`);
             const list = oracles.get(k.kind) ?? [];
@@ -156,7 +168,7 @@ for (const [key, list] of table) {
   console.log(`  ${key}: leagues ${list.length}`);
   console.log(`    skill vs lvl-age ${ms(list.map((x) => x.skill))}; vs matched ${ms(list.map((x) => x.skillM))}`);
   console.log(`    rho ${ms(list.map((x) => x.rho))}; peak cover ${ms(list.map((x) => x.cover))}; seasons cover ${ms(list.map((x) => x.coverS))}`);
-  if (key.startsWith('level+age (default) | logistic: comps, PA (default) | ')) {
+  if (key.startsWith(`level+age (default) | ${DEFAULT_MAP} | `)) {
     const kind = key.slice(key.lastIndexOf('|') + 2);
     const skill = mean(list.map((x) => x.skill));
     const rho = mean(list.map((x) => x.rho));

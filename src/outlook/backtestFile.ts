@@ -9,9 +9,9 @@ import { z } from 'zod';
 
 export { BACKTEST_FILE } from '../store/storeFileNames.ts';
 export const BACKTEST_FORMAT = 'kindred-backtest';
-export const BACKTEST_VERSION = 2;
+export const BACKTEST_VERSION = 3;
 
-const feature = z.enum(['comps', 'matched', 'sample', 'age', 'path', 'profile']);
+const feature = z.enum(['comps', 'matched', 'sample', 'seasonSample', 'climb', 'age', 'path', 'profile']);
 const interval = z.strictObject({ value: z.number().nullable(), low: z.number().nullable(), high: z.number().nullable() });
 
 export const kindSummarySchema = z.strictObject({
@@ -30,12 +30,18 @@ export const kindSummarySchema = z.strictObject({
   peak_coverage: interval,
   peak_coverage_before_adjustment: z.number().nullable(),
   seasons_coverage: interval,
-  cuts: z.array(z.strictObject({ cut: z.number().int(), training: z.number().int(), targets: z.number().int(), reached: z.number().int() })),
+  cuts: z.array(z.strictObject({ cut: z.number().int(), training: z.number().int(), targets: z.number().int(), reached: z.number().int(), features: z.array(feature), peak: z.enum(['blend', 'scaled', 'regression']) })),
 });
 
 export const fittedSchema = z.strictObject({
   kind: z.enum(['hitter', 'pitcher']),
   training: z.number().int(),
+  /** The probability map and peak model kept for this kind (chosen among the calibration's candidates). */
+  features: z.array(feature),
+  ridge: z.number(),
+  peak: z.enum(['blend', 'scaled', 'regression']),
+  peak_features: z.array(feature),
+  peak_ridge: z.number(),
   coefficients: z.array(z.number()).nullable(),
   overall: z.number(),
   peak_widening: z.number().nullable(),
@@ -48,6 +54,8 @@ export const fittedSchema = z.strictObject({
   overall_peak: z.number(),
   /** [level index, mean log(1 + sample)] and [level index, mean age] of the training forecasts. */
   sample_centre: z.array(z.tuple([z.number().int(), z.number()])),
+  /** [level index, mean log(1 + PA or BF over all his levels that season)]. */
+  season_sample_centre: z.array(z.tuple([z.number().int(), z.number()])),
   age_centre: z.array(z.tuple([z.number().int(), z.number()])),
   profile_dims: z.array(z.string()),
 });
@@ -66,6 +74,7 @@ export const backtestFileSchema = z.strictObject({
     peak: z.enum(['blend', 'scaled', 'regression']),
     peak_features: z.array(feature),
     ridge: z.number(),
+    peak_ridge: z.number(),
   }),
   cuts: z.array(z.number().int()),
   too_short: z.string().nullable(),

@@ -4,7 +4,8 @@ import { KindredError } from '../errors/KindredError.ts';
 import type { PositionGroup } from '../profiles/positionGroup.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { BACKTEST_FILE, BACKTEST_FORMAT, BACKTEST_VERSION, backtestFileSchema, type BacktestFile, type KindSummary } from './backtestFile.ts';
-import { DEFAULT_CALIBRATION, fitCalibration, type CalibrationChoice, type FittedCalibration } from './calibrateForecast.ts';
+import { DEFAULT_CALIBRATION, type CalibrationChoice, type FittedCalibration } from './calibrateForecast.ts';
+import { fitSelectedCalibration } from './selectCalibration.ts';
 import { collectForecasts } from './collectForecasts.ts';
 import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from './Outcomes.ts';
@@ -49,7 +50,7 @@ export function kindSummary(k: KindBacktest): KindSummary {
     peak_coverage: iv(k.peakCoverage),
     peak_coverage_before_adjustment: num(k.peakCoverageRaw),
     seasons_coverage: iv(k.seasonsCoverage),
-    cuts: k.cuts.map((c) => ({ ...c })),
+    cuts: k.cuts.map((c) => ({ ...c, features: [...c.features] })),
   };
 }
 
@@ -79,7 +80,7 @@ export function backtestStore(store: ProfileStore, outcomes: Outcomes, options: 
   const fitted = new Map<OutcomeKind, FittedCalibration>();
   for (const kind of ['hitter', 'pitcher'] as const) {
     const mine = rows.filter((r) => r.kind === kind && r.truth !== null);
-    if (mine.length >= (options.minTraining ?? 100)) fitted.set(kind, fitCalibration(mine, choice));
+    if (mine.length >= (options.minTraining ?? 100)) fitted.set(kind, fitSelectedCalibration(mine, choice, horizon));
   }
   const file: BacktestFile = {
     format: BACKTEST_FORMAT,
@@ -87,7 +88,7 @@ export function backtestStore(store: ProfileStore, outcomes: Outcomes, options: 
     store_created_at: store.opened.manifest.createdAt,
     horizon,
     k: prospect.comps.k,
-    calibration: { method: choice.method, features: [...choice.features], shrink: choice.shrink, alpha: choice.alpha, peak: choice.peak, peak_features: [...choice.peakFeatures], ridge: choice.ridge },
+    calibration: { method: choice.method, features: [...choice.features], shrink: choice.shrink, alpha: choice.alpha, peak: choice.peak, peak_features: [...choice.peakFeatures], ridge: choice.ridge, peak_ridge: choice.peakRidge },
     cuts: [...result.cuts],
     too_short: result.tooShort,
     seconds: Number(((performance.now() - started) / 1000).toFixed(1)),
@@ -95,6 +96,11 @@ export function backtestStore(store: ProfileStore, outcomes: Outcomes, options: 
     fitted: [...fitted].map(([kind, f]) => ({
       kind,
       training: f.training,
+      features: [...f.choice.features],
+      ridge: f.choice.ridge,
+      peak: f.choice.peak,
+      peak_features: [...f.choice.peakFeatures],
+      peak_ridge: f.choice.peakRidge,
       coefficients: f.logistic ? [...f.logistic.coefficients] : null,
       overall: f.overall,
       peak_widening: Number.isFinite(f.peakWidening) ? f.peakWidening : null,
@@ -105,6 +111,7 @@ export function backtestStore(store: ProfileStore, outcomes: Outcomes, options: 
       peak_residual: Number.isFinite(f.peakResidual[0]) && Number.isFinite(f.peakResidual[1]) ? [f.peakResidual[0], f.peakResidual[1]] : null,
       overall_peak: f.overallPeak,
       sample_centre: [...f.sampleCentre],
+      season_sample_centre: [...f.seasonSampleCentre],
       age_centre: [...f.ageCentre],
       profile_dims: [...f.profileDims],
     })),
@@ -150,7 +157,9 @@ export function fittedFromFile(file: BacktestFile, kind: OutcomeKind): FittedCal
   const f = file.fitted.find((x) => x.kind === kind);
   if (!f) return null;
   const cal = file.calibration;
-  const choice: CalibrationChoice = { method: cal.method, features: [...cal.features], shrink: cal.shrink, alpha: cal.alpha, peak: cal.peak, peakFeatures: [...cal.peak_features], ridge: cal.ridge };
+  const choice: CalibrationChoice = {
+    method: cal.method, features: [...f.features], shrink: cal.shrink, alpha: cal.alpha, peak: f.peak, peakFeatures: [...f.peak_features], ridge: f.ridge, peakRidge: f.peak_ridge,
+  };
   return {
     choice,
     training: f.training,
@@ -165,6 +174,7 @@ export function fittedFromFile(file: BacktestFile, kind: OutcomeKind): FittedCal
     overall: f.overall,
     overallPeak: f.overall_peak,
     sampleCentre: new Map(f.sample_centre),
+    seasonSampleCentre: new Map(f.season_sample_centre),
     ageCentre: new Map(f.age_centre),
     profileDims: f.profile_dims,
   };

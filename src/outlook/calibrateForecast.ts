@@ -16,7 +16,7 @@ import { applyIsotonicMap, fitIsotonicMap, type IsotonicMap } from '../stats/iso
  * - path: two 0/1 terms, at the same level the season before (repeating it), and without a profile the season before;
  * - profile: his own standardised profile, one term per dimension (missing: 0, the stratum mean).
  */
-export type CalibrationFeature = 'comps' | 'matched' | 'sample' | 'age' | 'path' | 'profile';
+export type CalibrationFeature = 'comps' | 'matched' | 'sample' | 'seasonSample' | 'climb' | 'age' | 'path' | 'profile';
 
 export interface CalibrationChoice {
   /** Map of the features to a probability: a fitted logistic (Platt 1999) or, on the comps feature alone, PAV isotonic (Zadrozny and Elkan 2002). */
@@ -37,12 +37,50 @@ export interface CalibrationChoice {
    */
   readonly peak: 'blend' | 'scaled' | 'regression';
   readonly peakFeatures: readonly CalibrationFeature[];
-  /** Ridge penalty of both models on their slopes (features are on a unit-ish scale). */
+  /** Ridge penalty of the probability map on its slopes (features are on a unit-ish scale). */
+  readonly ridge: number;
+  /** Ridge penalty of the `regression` peak model on its slopes. */
+  readonly peakRidge: number;
+  /**
+   * Probability maps to choose from on each roster (selectCalibration: fitted on the earlier training
+   * seasons, scored on the later ones); empty or absent: `features` and `ridge` as given.
+   */
+  readonly candidates?: readonly CalibrationCandidate[];
+  /** Peak models to choose from the same way (scored by the mean absolute error of the p50); empty or absent: as given. */
+  readonly peakCandidates?: readonly PeakCandidate[];
+}
+
+/** One candidate probability map: the logistic's features and its ridge. */
+export interface CalibrationCandidate {
+  readonly features: readonly CalibrationFeature[];
   readonly ridge: number;
 }
 
+/** One candidate peak model. */
+export interface PeakCandidate {
+  readonly peak: CalibrationChoice['peak'];
+  readonly peakFeatures: readonly CalibrationFeature[];
+  readonly peakRidge: number;
+}
+
+/**
+ * The default (bench/outlook.bench.ts, docs/jobs.md): on each roster, the probability map is chosen
+ * between the comps' share and playing time alone and the same with his own profile (ridge 40 or 100),
+ * and the peak between the blended ranges and a ridge regression on comps and profile, by how each did
+ * on that roster's later training seasons (selectCalibration). `features`, `ridge` and `peak` name the
+ * first candidates, used when a roster is too short to choose.
+ */
 export const DEFAULT_CALIBRATION: CalibrationChoice = {
-  method: 'logistic', features: ['comps', 'sample'], shrink: 5, alpha: 0.2, peak: 'blend', peakFeatures: ['comps'], ridge: 2,
+  method: 'logistic', features: ['comps', 'sample'], shrink: 5, alpha: 0.2, peak: 'blend', peakFeatures: ['comps'], ridge: 2, peakRidge: 40,
+  candidates: [
+    { features: ['comps', 'sample'], ridge: 2 },
+    { features: ['comps', 'sample', 'profile'], ridge: 40 },
+    { features: ['comps', 'sample', 'profile'], ridge: 100 },
+  ],
+  peakCandidates: [
+    { peak: 'blend', peakFeatures: ['comps'], peakRidge: 40 },
+    { peak: 'regression', peakFeatures: ['comps', 'profile'], peakRidge: 40 },
+  ],
 };
 
 /** Training forecasts need a level-and-age base rate resting on at least this many player-seasons. */
@@ -70,6 +108,7 @@ export interface FittedCalibration {
   readonly overallPeak: number;
   /** Means by level index in training: log(1 + sample), and age (the centres of those features). */
   readonly sampleCentre: ReadonlyMap<number, number>;
+  readonly seasonSampleCentre: ReadonlyMap<number, number>;
   readonly ageCentre: ReadonlyMap<number, number>;
   /** Dimension names of the profile feature, in order. */
   readonly profileDims: readonly string[];
@@ -111,6 +150,7 @@ interface Centres {
   readonly overall: number;
   readonly overallPeak: number;
   readonly sampleCentre: ReadonlyMap<number, number>;
+  readonly seasonSampleCentre: ReadonlyMap<number, number>;
   readonly ageCentre: ReadonlyMap<number, number>;
   readonly profileDims: readonly string[];
 }
@@ -125,6 +165,8 @@ function featuresOf(r: RawForecast, features: readonly CalibrationFeature[], tar
         break;
       case 'matched': out.push(target === 'reach' ? logit(baseShare(r, k.overall)) - anchorOf(r, k.overall) : 0); break;
       case 'sample': out.push(Math.log1p(r.sample) - (k.sampleCentre.get(r.level) ?? Math.log1p(r.sample))); break;
+      case 'seasonSample': out.push(Math.log1p(r.seasonSample) - (k.seasonSampleCentre.get(r.level) ?? Math.log1p(r.seasonSample))); break;
+      case 'climb': out.push(r.climbed ? 1 : 0); break;
       case 'age': out.push(finiteOr(r.age - (k.ageCentre.get(r.level) ?? r.age), 0)); break;
       case 'path': out.push(r.levelBefore === r.level ? 1 : 0, r.levelBefore < 0 ? 1 : 0); break;
       case 'profile': for (const name of k.profileDims) out.push(finiteOr(r.profile[name] ?? NaN, 0)); break;
@@ -178,6 +220,7 @@ export function fitCalibration(rows: readonly RawForecast[], choice: Calibration
   const centres: Centres = {
     overall, overallPeak,
     sampleCentre: meanBy(known, (r) => Math.log1p(r.sample)),
+    seasonSampleCentre: meanBy(known, (r) => Math.log1p(r.seasonSample)),
     ageCentre: meanBy(known, (r) => r.age),
     profileDims: uses('profile') ? [...new Set(known.flatMap((r) => Object.keys(r.profile)))].sort() : [],
   };
@@ -204,14 +247,14 @@ export function fitCalibration(rows: readonly RawForecast[], choice: Calibration
   if (choice.peak === 'regression' && peaks.length > 0) {
     const xs = peaks.map((r) => featuresOf(r, choice.peakFeatures, 'peak', choice, centres));
     const ys = peaks.map((r) => (r.truth?.peak ?? 0) - peakAnchorOf(r, overallPeak));
-    peakModel = fitRidge(xs, ys, choice.ridge);
+    peakModel = fitRidge(xs, ys, choice.peakRidge);
     // cross-fitted residuals (each row's from a fit without its fold), so the quantiles are out of sample
     const residuals: number[] = [];
     for (let fold = 0; fold < FOLDS; fold++) {
       const inFold = (i: number): boolean => i % FOLDS === fold;
       const train = xs.map((_, i) => i).filter((i) => !inFold(i));
       if (train.length === 0) continue;
-      const m = fitRidge(train.map((i) => xs[i] as number[]), train.map((i) => ys[i] as number), choice.ridge);
+      const m = fitRidge(train.map((i) => xs[i] as number[]), train.map((i) => ys[i] as number), choice.peakRidge);
       xs.forEach((x, i) => { if (inFold(i)) residuals.push((ys[i] as number) - ridgePrediction(m, x)); });
     }
     // two one-sided split-conformal quantiles at alpha / 2 each (Lei et al. 2018; Romano et al. 2019, asymmetric form)
@@ -231,6 +274,7 @@ export function fitCalibration(rows: readonly RawForecast[], choice: Calibration
     overall,
     overallPeak,
     sampleCentre: centres.sampleCentre,
+    seasonSampleCentre: centres.seasonSampleCentre,
     ageCentre: centres.ageCentre,
     profileDims: centres.profileDims,
   };

@@ -7,7 +7,7 @@ import { calibrateForecast } from './calibrateForecast.ts';
 import { rawForecastOf, rowOutcomes } from './collectForecasts.ts';
 import type { ProspectOptions } from '../jobs/findProspectComps.ts';
 import type { Outcomes } from './Outcomes.ts';
-import type { CalibratedOutlook } from './Outlook.ts';
+import type { CalibratedOutlook, Outlook } from './Outlook.ts';
 import type { ProspectResult } from '../jobs/ProspectResult.ts';
 import { OUTLOOK_CONSTANTS } from './outlookConstants.ts';
 
@@ -19,7 +19,6 @@ const cache = new WeakMap<object, Float64Array>();
 /** The settings a stored backtest was made with must be those of the query for its calibration to apply; else why not. */
 function mismatch(file: BacktestFile, options: ProspectOptions): string | null {
   if (file.horizon !== options.horizon) return `the backtest used --horizon ${file.horizon}`;
-  if (file.k !== options.comps.k) return `the backtest used --k ${file.k}`;
   if (options.path !== 1) return 'the backtest matched single seasons (no --path)';
   const f = options.comps.filter;
   if (f.bats || f.throws || f.positions || f.seasonFrom !== undefined || f.seasonTo !== undefined || f.ageMin !== undefined || f.ageMax !== undefined) return 'the backtest used no pool filters';
@@ -28,12 +27,13 @@ function mismatch(file: BacktestFile, options: ProspectOptions): string | null {
 
 /**
  * Adds `outlook.calibrated` to a prospect result: the stored calibration of his kind (kindred build's
- * backtest, fitted on every forecast of the roster with a known follow-up) applied to this outlook, with
+ * backtest, fitted on every forecast of the roster with a known follow-up) applied to `asBacktested`,
+ * the outlook from as many comps as the backtest used (the result's own when its `k` is the same), with
  * the backtest figures of his kind beside it. When the store has no usable backtest, or it was made with
  * other settings, `calibrated` is null and `calibration_note` says why.
  */
 export function calibrateOutlook(
-  store: ProfileStore, outcomes: Outcomes, target: Target, result: ProspectResult, options: ProspectOptions,
+  store: ProfileStore, outcomes: Outcomes, target: Target, result: ProspectResult, asBacktested: Outlook, options: ProspectOptions,
   backtest: { file: BacktestFile | null; reason: string | null },
 ): ProspectResult {
   const none = (note: string): ProspectResult => ({ ...result, outlook: { ...result.outlook, calibrated: null, calibration_note: note } });
@@ -53,14 +53,17 @@ export function calibrateOutlook(
     reached = rowOutcomes(g, outcomes, kind, options.horizon);
     cache.set(g, reached);
   }
-  const raw = rawForecastOf(g, target.group, target.row, result.outlook, outcomes, options.horizon, reached);
+  const raw = rawForecastOf(g, target.group, target.row, asBacktested, outcomes, options.horizon, reached);
   const c = calibrateForecast(fit, raw, options.horizon);
   const peakName = kind === 'hitter' ? 'peak OPS+' : 'best FIP-';
   const calibrated: CalibratedOutlook = {
     method:
       `pool: his level, age +/- 1, earlier seasons (playing time is not a pool band: on the benched leagues a band of x2 did not help); ` +
       `probability: logistic map (Platt 1999) starting from the level-and-age base rate, moved by the comps' share shrunk toward it ` +
-      `(prior weight ${fit.choice.shrink} against ${result.outlook.comps_effective} effective comps) and by his playing time for his level (log ${kind === 'hitter' ? 'PA' : 'BF'}), ` +
+      `(prior weight ${fit.choice.shrink} against ${asBacktested.comps_effective} effective of his ${file.k} closest comps) and by his playing time for his level (log ${kind === 'hitter' ? 'PA' : 'BF'})` +
+      (fit.choice.features.includes('profile')
+        ? `, and by his own standardised profile (one term per dimension, ridge ${fit.choice.ridge}: chosen over the map without it by how both did on this roster's later seasons), `
+        : ', ') +
       `fitted on ${fit.training} earlier forecasts of this roster; ranges: the comps' and base rate's central ${Math.round(100 * (OUTLOOK_CONSTANTS.quantiles[2] - OUTLOOK_CONSTANTS.quantiles[0]))}% of ${peakName} and top-level seasons ` +
       `adjusted by split conformal prediction (Lei et al. 2018) to ${Math.round((1 - fit.choice.alpha) * 100)}% coverage`,
     reached_top_level: Number(c.reached.toFixed(3)),

@@ -30,6 +30,10 @@ export interface RawForecast {
   readonly sample: number;
   /** His highest level in his group the season before (-1: no profile that season). */
   readonly levelBefore: number;
+  /** Whether he also played at a lower level in his group that season (promoted during it). */
+  readonly climbed: boolean;
+  /** PA or BF over all his levels in his group that season. */
+  readonly seasonSample: number;
   /** His standardised profile that season (as built at the end of it), by dimension name; missing dimensions absent. */
   readonly profile: Readonly<Record<string, number>>;
   readonly comps: {
@@ -126,7 +130,7 @@ export function rawForecastOf(
   return {
     kind, group, player: g.player[row] as number, row, season,
     level: g.level[row] as number, age: g.age[row] as number, sample: g.sample[row] as number,
-    levelBefore: highestLevelBefore(g, row), profile: profileOf(g, row),
+    levelBefore: highestLevelBefore(g, row), ...seasonAcrossLevels(g, row), profile: profileOf(g, row),
     comps: { used: o.comps_used, effective: o.comps_effective, share: nan(o.reached_top_level), peak: spreadOf(peakSummaryOf(o)), seasons: spreadOf(o.top_level_seasons) },
     matched: { n: o.baseline.player_seasons, share: nan(o.baseline.reached_top_level), peak: spreadOf(peakSummaryOf(o.baseline)), seasons: spreadOf(o.baseline.top_level_seasons) },
     levelAge: levelAgeRate(g, row, Math.min(season, o.as_of_season), horizon, reachedOf),
@@ -174,6 +178,25 @@ function highestLevelBefore(g: StoredGroup, row: number): number {
     highest.set(g.season, m);
   }
   return m.get((g.player[row] as number) * 10000 + (g.season[row] as number) - 1) ?? -1;
+}
+
+/** Lowest level and PA or BF summed over levels of each player-season of a group, keyed player * 10000 + season. */
+const across = new WeakMap<Int32Array, Map<number, { lowest: number; sample: number }>>();
+function seasonAcrossLevels(g: StoredGroup, row: number): { climbed: boolean; seasonSample: number } {
+  let m = across.get(g.season);
+  if (!m) {
+    m = new Map();
+    for (let i = 0; i < g.n; i++) {
+      const key = (g.player[i] as number) * 10000 + (g.season[i] as number);
+      const e = m.get(key);
+      const level = g.level[i] as number, sample = g.sample[i] as number;
+      if (e) m.set(key, { lowest: Math.min(e.lowest, level), sample: e.sample + sample });
+      else m.set(key, { lowest: level, sample });
+    }
+    across.set(g.season, m);
+  }
+  const e = m.get((g.player[row] as number) * 10000 + (g.season[row] as number));
+  return { climbed: e !== undefined && e.lowest < (g.level[row] as number), seasonSample: e?.sample ?? (g.sample[row] as number) };
 }
 
 function profileOf(g: StoredGroup, row: number): Record<string, number> {

@@ -1,6 +1,7 @@
 import { bootstrapInterval } from '../stats/bootstrapInterval.ts';
 import { brierScore } from '../stats/brierScore.ts';
-import { calibrateForecast, DEFAULT_CALIBRATION, fitCalibration, MIN_BASE_PLAYERS, type CalibrationChoice, type FittedCalibration } from './calibrateForecast.ts';
+import { calibrateForecast, DEFAULT_CALIBRATION, MIN_BASE_PLAYERS, type CalibrationChoice, type CalibrationFeature, type FittedCalibration } from './calibrateForecast.ts';
+import { fitSelectedCalibration } from './selectCalibration.ts';
 import type { RawForecast } from './collectForecasts.ts';
 import { intervalCoverage } from '../stats/intervalCoverage.ts';
 import { murphyDecomposition, type MurphyBin } from '../stats/murphyDecomposition.ts';
@@ -30,6 +31,9 @@ export interface CutCount {
   readonly training: number;
   readonly targets: number;
   readonly reached: number;
+  /** The features of the probability map and the peak model the cut's calibration used (chosen on its training forecasts). */
+  readonly features: readonly CalibrationFeature[];
+  readonly peak: CalibrationChoice['peak'];
 }
 
 /** One forecast scored at its cut: what the calibrated outlook said and what happened. */
@@ -118,16 +122,16 @@ export function runBacktest(rows: readonly RawForecast[], lastSeason: number, op
       if (cut + horizon > lastSeason) continue;
       const training = trainingFor(mine, cut, horizon);
       if (training.length < minTraining) continue;
-      const fit = fitCalibration(training, choice);
+      const fit = fitSelectedCalibration(training, choice, horizon);
       const targets = mine.filter((r) => r.season === cut && r.truth !== null);
       let reached = 0;
       for (const r of targets) {
         const t = r.truth;
         if (t === null) continue;
         if (t.reached) reached++;
-        scored.push(scoreOne(fit, r, cut, horizon, choice));
+        scored.push(scoreOne(fit, r, cut, horizon));
       }
-      counts.push({ cut, training: training.length, targets: targets.length, reached });
+      counts.push({ cut, training: training.length, targets: targets.length, reached, features: fit.choice.features, peak: fit.choice.peak });
     }
     if (scored.length > 0) kinds.push(summariseKind(kind, scored, counts, options.rounds ?? 500));
   }
@@ -137,13 +141,12 @@ export function runBacktest(rows: readonly RawForecast[], lastSeason: number, op
   return { horizon, cuts: [...new Set(kinds.flatMap((k) => k.cuts.map((c) => c.cut)))].sort((a, b) => a - b), calibration: choice, kinds, tooShort };
 }
 
-function scoreOne(fit: FittedCalibration, r: RawForecast, cut: number, horizon: number, choice: CalibrationChoice): ScoredForecast {
+function scoreOne(fit: FittedCalibration, r: RawForecast, cut: number, horizon: number): ScoredForecast {
   const c = calibrateForecast(fit, r, horizon);
   const t = r.truth;
   if (t === null) throw new RangeError('internal: scoring a forecast without truth');
   const rawLo = Number.isFinite(r.comps.peak.p10) ? r.comps.peak.p10 : r.matched.peak.p10;
   const rawHi = Number.isFinite(r.comps.peak.p90) ? r.comps.peak.p90 : r.matched.peak.p90;
-  void choice;
   return {
     cut,
     reachedForecast: c.reached,

@@ -12,7 +12,14 @@ const f = (x: number | null, digits = 3): string => (x === null ? '-' : x.toFixe
 const iv = (w: { value: number | null; low: number | null; high: number | null }, digits = 2): string =>
   `${f(w.value, digits)} (95% ${f(w.low, digits)} to ${f(w.high, digits)})`;
 
-function kindLines(k: KindSummary, coverage: string): string[] {
+/** A probability map and peak model in words: what moves the outlook away from the base rate. */
+export function mapInWords(features: readonly string[], peak: string): string {
+  const words: Record<string, string> = { comps: "comps' share", sample: 'playing time', seasonSample: 'playing time', climb: 'promotion in the season', age: 'age for the level', path: 'level path', profile: 'his own profile' };
+  const parts = [...new Set(features.map((f) => words[f] ?? f))];
+  return `${parts.join(', ') || 'base rate only'}; peak ${peak === 'regression' ? 'by regression on comps and profile' : "from the comps' and base rate's ranges"}`;
+}
+
+function kindLines(k: KindSummary, coverage: string, kept: BacktestFile['fitted'][number] | undefined): string[] {
   const who = k.kind === 'hitter' ? 'Hitters' : 'Pitchers';
   const peak = k.kind === 'hitter' ? 'peak OPS+' : 'best FIP-';
   return [
@@ -24,6 +31,8 @@ function kindLines(k: KindSummary, coverage: string): string[] {
     `  The ${coverage} range of the ${peak} held the realised one ${iv(k.peak_coverage)} of the time (the comps' own range: ${f(k.peak_coverage_before_adjustment, 2)})`,
     `  The ${coverage} range of top-level seasons held the count ${iv(k.seasons_coverage)} of the time`,
     `  Per cut (season: training forecasts / scored prospects / reached): ${k.cuts.map((c) => `${c.cut}: ${c.training}/${c.targets}/${c.reached}`).join(', ')}`,
+    `  Chosen at each cut on its own earlier seasons: ${k.cuts.map((c) => `${c.cut}: ${mapInWords(c.features, c.peak)}`).join('; ')}`,
+    ...(kept ? [`  Kept for new outlooks (fitted on all ${kept.training.toLocaleString('en-US')} forecasts with a known follow-up): ${mapInWords(kept.features, kept.peak)}`] : []),
   ];
 }
 
@@ -44,7 +53,7 @@ export function backtestTable(file: BacktestFile, kinds: readonly ('hitter' | 'p
     lines.push(`This roster is too short for a backtest: ${file.too_short}.`);
     return lines.flatMap((l) => (l === '' ? [l] : wrapKeepingIndent(l))).join('\n') + '\n';
   }
-  for (const k of file.kinds.filter((x) => kinds.includes(x.kind))) lines.push(...kindLines(k, `${Math.round(100 * (1 - file.calibration.alpha))}%`), '');
+  for (const k of file.kinds.filter((x) => kinds.includes(x.kind))) lines.push(...kindLines(k, `${Math.round(100 * (1 - file.calibration.alpha))}%`, file.fitted.find((x) => x.kind === k.kind)), '');
   lines.push('Skill: 1 - Brier / Brier of the reference (0: no better; above 0: better). Intervals: percentile bootstrap over forecasts.');
   lines.push('These figures describe how outlooks did for earlier players of this roster, not what any one prospect will do.');
   lines.push(`(${file.seconds} s)`);

@@ -20,10 +20,15 @@ export type StoredBacktest = { readonly file: BacktestFile | null; readonly reas
 /**
  * The prospect job: earlier players at his level and age, and what became of them, with the outlook
  * calibrated on the roster's own history when the store holds a matching backtest (calibrateOutlook).
+ * The calibrated outlook rests on as many comps as the backtest used, whatever `--k` lists: when they
+ * differ, the comps are found a second time with the backtest's number.
  */
 export function answerProspect(stored: ProfileStore, outcomes: Outcomes, req: JobRequest, backtest: StoredBacktest): ProspectResult {
   const store = windowView(stored, req.need('window'));
   const target = targetFrom(store, req);
   const options = prospectOptionsFrom(req, store, target);
-  return calibrateOutlook(store, outcomes, target, findProspectComps(store, outcomes, target, options), options, backtest);
+  const result = findProspectComps(store, outcomes, target, options);
+  const k = backtest.file?.k ?? options.comps.k;
+  const asBacktested = k === options.comps.k ? result : findProspectComps(store, outcomes, target, { ...options, comps: { ...options.comps, k } });
+  return calibrateOutlook(store, outcomes, target, result, asBacktested.outlook, options, backtest);
 }

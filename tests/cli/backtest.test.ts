@@ -65,6 +65,11 @@ describe('kindred backtest', () => {
     const table = await runCli('prospect', prospectId, '--store', sim.storeDir);
     expect(table.stdout).toMatch(/Replay: [\d,]+ hitter prospects, \d+% reached the top level/);
     expect(table.stdout).toMatch(/not what this one will do/);
+    // fewer comps listed than the backtest used: still calibrated, on the backtest's number of comps, and the same
+    const five = JSON.parse((await runCli('prospect', prospectId, '--store', sim.storeDir, '--k', '5', '--format', 'json')).stdout) as typeof json & { comps: unknown[] };
+    expect(five.comps).toHaveLength(5);
+    expect(five.outlook.calibrated?.reached_top_level).toBe(json.outlook.calibrated?.reached_top_level);
+    expect(five.outlook.calibrated?.method).toMatch(/of his 25 closest comps/);
     // another horizon than the backtest's: shown uncalibrated, with the reason
     const other = JSON.parse((await runCli('prospect', prospectId, '--store', sim.storeDir, '--horizon', '4', '--format', 'json')).stdout) as { outlook: { calibrated: unknown; calibration_note: string } };
     expect(other.outlook.calibrated).toBeNull();
