@@ -56,6 +56,7 @@ export function calibrateOutlook(
   const raw = rawForecastOf(g, target.group, target.row, asBacktested, outcomes, options.horizon, reached);
   const c = calibrateForecast(fit, raw, options.horizon);
   const peakName = kind === 'hitter' ? 'peak OPS+' : 'best FIP-';
+  const central = Math.round(100 * (OUTLOOK_CONSTANTS.quantiles[2] - OUTLOOK_CONSTANTS.quantiles[0]));
   const calibrated: CalibratedOutlook = {
     method:
       `pool: his level, age +/- 1, earlier seasons (playing time is not a pool band: on the benched leagues a band of x2 did not help); ` +
@@ -64,7 +65,10 @@ export function calibrateOutlook(
       (fit.choice.features.includes('profile')
         ? `, and by his own standardised profile (one term per dimension, ridge ${fit.choice.ridge}: chosen over the map without it by how both did on this roster's later seasons), `
         : ', ') +
-      `fitted on ${fit.training} earlier forecasts of this roster; ranges: the comps' and base rate's central ${Math.round(100 * (OUTLOOK_CONSTANTS.quantiles[2] - OUTLOOK_CONSTANTS.quantiles[0]))}% of ${peakName} and top-level seasons ` +
+      `fitted on ${fit.training.toLocaleString('en-US')} earlier forecasts of this roster; ranges: ` +
+      (fit.choice.peak === 'regression'
+        ? `${peakName} by a ridge regression on the comps' ${peakName} and his own profile (chosen over the comps' range by how both did on this roster's later seasons), its range from cross-fitted residuals; top-level seasons from the comps' and base rate's central ${central}%; both `
+        : `the comps' and base rate's central ${central}% of ${peakName} and top-level seasons `) +
       `adjusted by split conformal prediction (Lei et al. 2018) to ${Math.round((1 - fit.choice.alpha) * 100)}% coverage`,
     reached_top_level: Number(c.reached.toFixed(3)),
     range_coverage: Number((1 - fit.choice.alpha).toFixed(3)),
