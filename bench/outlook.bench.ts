@@ -10,9 +10,11 @@
  * level-and-age base rate and against the matched base rate, Murphy reliability and resolution,
  * Spearman of the peak p50 with the realised peak, p10-p90 coverage of the peak (after and before the
  * conformal adjustment) and of top-level seasons, each main figure against its aim (bench/lib/aim.ts). Then
- * the alternatives the defaults were chosen from (pool with a playing-time band, level path; calibration
- * maps and features: age for the level, level path, his own profile, a ridge peak model), the
- * true-talent reference, and mean and spread over leagues. The aims (issue 9): skill vs the
+ * the alternatives the defaults were chosen from (pool with a playing-time band, level path; fixed
+ * calibration maps and features: age for the level, level path, promotion during the season, his own
+ * profile at three ridges, a ridge peak model; the default chooses among some of them per roster), the
+ * true-talent reference, and mean and spread over leagues. `KINDRED_BENCH_MAPS='a|b'` keeps only the
+ * maps whose names contain a or b (and the default). The aims (issue 9): skill vs the
  * level-and-age base rate >= 0.15, Spearman of the peak p50 >= 0.60, peak p10-p90 coverage 0.75-0.85.
  */
 import { aim } from './lib/aim.ts';
