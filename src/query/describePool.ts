@@ -14,10 +14,10 @@ export function describePool(f: PoolFilter, floor: SampleFloor | null, group: Po
   const parts: string[] = [];
   parts.push(f.positions ? f.positions.join(', ') : `every ${group} position`);
   parts.push(f.levels ? `at ${f.levels.join(', ')}` : 'every level');
-  if (f.seasonFrom !== undefined || f.seasonTo !== undefined) {
-    parts.push(f.seasonFrom === f.seasonTo ? `season ${f.seasonFrom ?? ''}` : `seasons ${f.seasonFrom ?? '...'}-${f.seasonTo ?? '...'}`);
-  }
-  if (f.ageMin !== undefined || f.ageMax !== undefined) parts.push(`ages ${f.ageMin ?? '...'}-${f.ageMax ?? '...'}`);
+  const seasons = span(f.seasonFrom, f.seasonTo);
+  if (seasons !== null) parts.push(f.seasonFrom === f.seasonTo ? `season ${seasons}` : `seasons ${seasons}`);
+  const ages = span(f.ageMin, f.ageMax);
+  if (ages !== null) parts.push(f.ageMin === f.ageMax ? `age ${ages}` : `ages ${ages}`);
   if (f.bats) parts.push(`bats ${f.bats.join('/')}`);
   if (f.throws) parts.push(`throws ${f.throws.join('/')}`);
   const unit = isPitcherGroup(group) ? 'BF' : 'PA';
@@ -26,4 +26,12 @@ export function describePool(f: PoolFilter, floor: SampleFloor | null, group: Po
     parts.push(`${f.minSample} ${unit} or more${of}`);
   } else parts.push(`any ${unit}`);
   return parts.join('; ');
+}
+
+/** A range in words: "2015-2020", "from 2015", "to 2020", "2018" (null when open at both ends). */
+function span(from: number | undefined, to: number | undefined): string | null {
+  if (from === undefined && to === undefined) return null;
+  if (from === undefined) return `to ${to ?? ''}`;
+  if (to === undefined) return `from ${from}`;
+  return from === to ? String(from) : `${from}-${to}`;
 }

@@ -10,7 +10,7 @@ import { PALETTE } from './palette.ts';
 export function frontierChartSpec(r: CheaperResult): TopLevelSpec {
   const points = r.comps.map((c) => ({ name: c.name, season: c.season, salary: c.salary_usd / 1e6, likeness: c.likeness, frontier: c.frontier ? 'on the frontier' : 'off the frontier' }));
   const x = { field: 'salary', type: 'quantitative' as const, title: 'salary that season (USD millions)', scale: { zero: true } };
-  const y = { field: 'likeness', type: 'quantitative' as const, title: 'likeness (0-100)', scale: { zero: false } };
+  const y = { field: 'likeness', type: 'quantitative' as const, title: 'likeness (0-100)', scale: { zero: false }, axis: { format: 'd', tickMinStep: 1 } };
   return {
     width: 380,
     height: 240,
@@ -36,7 +36,7 @@ export function frontierChartSpec(r: CheaperResult): TopLevelSpec {
           color: { field: 'frontier', type: 'nominal', scale: { domain: ['on the frontier', 'off the frontier'], range: [PALETTE.comp, PALETTE.target] }, title: null },
           shape: { field: 'frontier', type: 'nominal', scale: { domain: ['on the frontier', 'off the frontier'], range: ['diamond', 'circle'] }, title: null },
           fill: { field: 'frontier', type: 'nominal', scale: { domain: ['on the frontier', 'off the frontier'], range: [PALETTE.comp, 'transparent'] }, legend: null },
-          tooltip: [{ field: 'name' }, { field: 'season' }, { field: 'salary', title: 'salary (USD millions)', format: '.2f' }, { field: 'likeness' }],
+          tooltip: [{ field: 'name' }, { field: 'season' }, { field: 'salary', title: 'salary (USD millions)', format: '.2f' }, { field: 'likeness', format: '.0f' }],
         },
       },
     ],

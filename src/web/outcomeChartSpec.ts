@@ -13,9 +13,16 @@ export function peakOf(c: ProspectResult['comps'][number]): number | null {
 }
 
 /**
+ * How the outcome chart states its range: the band between the 10th and 90th percentiles holds the
+ * middle 80% of the values (8 in 10), the tick is the median.
+ */
+export const OUTCOME_RANGE_WORDS = 'band: where the middle 8 in 10 of them fell; tick: the middle one';
+
+/**
  * What became of the comps: left, the share who reached the top level in the window, the comps
  * (weighted by likeness) against the base rate of every player-season at that level and age; right,
- * each comp's peak value as a dot, with the comps' and the base rate's p10-p90 span and median.
+ * each comp's peak value as a dot, with the band holding the middle 80% of the comps' and of the
+ * base rate's values (10th to 90th percentile) and a tick at the median.
  */
 export function outcomeChartSpec(r: ProspectResult): TopLevelSpec {
   const m = peakMeasure(r);
@@ -64,7 +71,7 @@ export function outcomeChartSpec(r: ProspectResult): TopLevelSpec {
       {
         width: 300,
         height: { step: 26 },
-        title: { text: `${m.label} of those who qualified (p10, median, p90)`, fontSize: 11, anchor: 'start' },
+        title: { text: `${m.label} of those who qualified`, subtitle: OUTCOME_RANGE_WORDS, fontSize: 11, subtitleFontSize: 10, anchor: 'start' },
         layer: [
           {
             data: { values: spans },
@@ -74,7 +81,7 @@ export function outcomeChartSpec(r: ProspectResult): TopLevelSpec {
           {
             data: { values: spans },
             mark: { type: 'tick', thickness: 2, size: 18 },
-            encoding: { y, x: { field: 'p50', type: 'quantitative' }, color: colour, tooltip: [{ field: 'who' }, { field: 'p10' }, { field: 'p50', title: 'median' }, { field: 'p90' }] },
+            encoding: { y, x: { field: 'p50', type: 'quantitative' }, color: colour, tooltip: [{ field: 'who' }, { field: 'p10', title: 'low end of the band' }, { field: 'p50', title: 'middle' }, { field: 'p90', title: 'high end of the band' }] },
           },
           {
             data: { values: dots },

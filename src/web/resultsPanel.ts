@@ -111,7 +111,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
       const q = result.query;
       const who = q.kind === 'player' ? `${q.name ?? ''} (${q.player_id ?? ''}), ${q.season ?? ''} ${q.level ?? ''}, ${q.position}` : `a hand-built ${q.position} profile`;
       summary.replaceChildren(
-        options.headline !== undefined ? h('p', {}, h('strong', {}, options.headline)) : h('p', {}, h('strong', {}, `${result.comps.length} comps`), ` for ${who}`),
+        options.headline !== undefined ? h('p', {}, h('strong', {}, options.headline)) : h('p', {}, h('strong', {}, `${formatCount(result.comps.length)} ${result.comps.length === 1 ? 'comp' : 'comps'}`), ` for ${who}`),
         h('p', { class: 'meta' }, `${formatCount(result.pool.eligible)} of ${formatCount(result.pool.group_size)} ${q.group} player-seasons in the pool · searched ${q.method === 'hnsw' ? 'with the index' : 'exactly'}`),
         h('p', { class: 'meta', id: 'pool-rules' }, `Pool: ${result.pool.summary}`),
         ...(options.note ? [h('p', { class: 'note', id: 'result-note' }, options.note)] : []),
@@ -152,6 +152,9 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
         });
         return tr;
       });
+      // each cell names its column, for the narrow layout where a row reflows as a card (style.css)
+      const titles = Array.from(head.children).map((th) => th.textContent ?? '');
+      for (const tr of body) for (const [j, td] of Array.from(tr.children).entries()) td.setAttribute('data-label', titles[j] ?? '');
       table.replaceChildren(h('thead', {}, head), h('tbody', {}, ...body));
       if (result.comps.length === 0) table.append(h('tbody', {}, h('tr', {}, h('td', { colspan: String(head.children.length) }, 'No comp passes the filters.'))));
       csvButton.disabled = false;

@@ -150,10 +150,10 @@ const prospectView: ViewDef = {
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
       note,
       extra: [
-        { title: 'reached top level', csv: 'reached_top_level', value: (c) => prospectOf(c)?.outcome.reached_top_level ?? null, shown: shownFlag },
-        { title: 'top-level seasons', csv: 'top_level_seasons', value: (c) => prospectOf(c)?.outcome.top_level_seasons ?? null },
-        { title: m.label, csv: 'peak_ops_plus' in result.outlook ? 'peak_ops_plus' : 'peak_fip_minus', value: (c) => { const pc = prospectOf(c); return pc ? peakOf(pc) : null; }, shown: (v) => (typeof v === 'number' ? formatWhole(v) : String(v)) },
-        { title: 'follow-up over', csv: 'censored', value: (c) => prospectOf(c)?.censored ?? null, shown: (v) => shownFlag(v === false) },
+        { title: 'Reached top level', csv: 'reached_top_level', value: (c) => prospectOf(c)?.outcome.reached_top_level ?? null, shown: shownFlag },
+        { title: 'Top-level seasons', csv: 'top_level_seasons', value: (c) => prospectOf(c)?.outcome.top_level_seasons ?? null },
+        { title: m.label.charAt(0).toUpperCase() + m.label.slice(1), csv: 'peak_ops_plus' in result.outlook ? 'peak_ops_plus' : 'peak_fip_minus', value: (c) => { const pc = prospectOf(c); return pc ? peakOf(pc) : null; }, shown: (v) => (typeof v === 'number' ? formatWhole(v) : String(v)) },
+        { title: 'Follow-up over', csv: 'censored', value: (c) => prospectOf(c)?.censored ?? null, shown: (v) => shownFlag(v === false) },
       ],
       chart: { title: 'What became of the comps', spec: outcomeChartSpec(result), label: 'outcome distribution of the comps against the base rate' },
     });
@@ -188,9 +188,9 @@ const cheaperView: ViewDef = {
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
       note,
       extra: [
-        { title: 'salary (USD)', csv: 'salary_usd', value: (c) => cheaperOf(c)?.salary_usd ?? null, shown: (v) => (typeof v === 'number' ? usd(v) : String(v)) },
-        { title: 'value (0-100)', csv: 'value_score', value: (c) => cheaperOf(c)?.value_score ?? null, shown: (v) => (typeof v === 'number' ? formatDecimal(v, 1) : String(v)) },
-        { title: 'frontier', csv: 'frontier', value: (c) => cheaperOf(c)?.frontier ?? null, shown: shownFlag },
+        { title: 'Salary (USD)', csv: 'salary_usd', value: (c) => cheaperOf(c)?.salary_usd ?? null, shown: (v) => (typeof v === 'number' ? usd(v) : String(v)) },
+        { title: 'Value (0-100)', csv: 'value_score', value: (c) => cheaperOf(c)?.value_score ?? null, shown: (v) => (typeof v === 'number' ? formatDecimal(v, 1) : String(v)) },
+        { title: 'On the frontier', csv: 'frontier', value: (c) => cheaperOf(c)?.frontier ?? null, shown: shownFlag },
       ],
       chart: { title: 'Likeness against salary (the value frontier joined)', spec: frontierChartSpec(result), label: 'likeness against salary of the cheaper comps' },
     });
@@ -228,8 +228,8 @@ const matchView: ViewDef = {
       headline: `${result.query.name ?? 'The target profile'} against ${c.name}`,
       note,
       extra: [
-        { title: 'role', csv: 'role', value: (x) => (candidateOf(x) ? 'candidate' : 'closest in pool') },
-        { title: 'percentile', csv: 'percentile', value: (x) => candidateOf(x)?.percentile ?? null },
+        { title: 'Role', csv: 'role', value: (x) => (candidateOf(x) ? 'candidate' : 'closest in pool') },
+        { title: 'Percentile', csv: 'percentile', value: (x) => candidateOf(x)?.percentile ?? null },
       ],
     });
   },

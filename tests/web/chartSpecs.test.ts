@@ -16,7 +16,7 @@ import type { CheaperResult } from '../../src/jobs/CheaperResult.ts';
 import type { ProspectResult } from '../../src/jobs/ProspectResult.ts';
 import type { PoolMap } from '../../src/server/poolMap.ts';
 import { gradeChartSpec } from '../../src/web/gradeChartSpec.ts';
-import { outcomeChartSpec } from '../../src/web/outcomeChartSpec.ts';
+import { OUTCOME_RANGE_WORDS, outcomeChartSpec } from '../../src/web/outcomeChartSpec.ts';
 import { frontierChartSpec } from '../../src/web/frontierChartSpec.ts';
 import { poolMapSpec } from '../../src/web/poolMapSpec.ts';
 import { buildDemoStore, tempDir } from '../server/serverFixture.ts';
@@ -83,7 +83,11 @@ describe('chart specs of the page', () => {
     const r = await get<ProspectResult>('/api/prospect?player=p000002');
     const spec = outcomeChartSpec(r);
     expect(validate(spec)).toEqual([]);
-    expect(await drawn(spec)).toContain('<svg');
+    const svg = await drawn(spec);
+    expect(svg).toContain('<svg');
+    // the range is stated as a band with its coverage in words, not as a table of percentiles
+    expect(svg).toContain(OUTCOME_RANGE_WORDS);
+    expect(svg).not.toMatch(/p10|p90|percentile/i);
   });
 
   it('value frontier chart of a cheaper answer is valid vega-lite and draws', async () => {
@@ -91,5 +95,12 @@ describe('chart specs of the page', () => {
     const spec = frontierChartSpec(r);
     expect(validate(spec)).toEqual([]);
     expect(await drawn(spec)).toContain('<svg');
+  });
+
+  it('value frontier chart labels likeness in whole numbers, even for one comp (no "60.400000")', async () => {
+    const r = await get<CheaperResult>('/api/cheaper?want=obp%3D60g%2Ciso%3D55g&position=2B&max-salary=1500000');
+    const one: CheaperResult = { ...r, comps: r.comps.slice(0, 1).map((c) => ({ ...c, likeness: 60.4 })) };
+    const labels = [...(await drawn(frontierChartSpec(one))).matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1] ?? '');
+    expect(labels.filter((t) => /^\d+\.\d{3,}$/.test(t))).toEqual([]);
   });
 });

@@ -57,6 +57,20 @@ function uniquePlayer(group: 'IF' | 'SP' | 'C', accept: (row: number) => boolean
   throw new Error(`no ${group} player to pick`);
 }
 
+/** A young infielder at the second-highest level of the demo league, for the prospect outlook. */
+function prospectTarget(): ReturnType<typeof uniquePlayer> {
+  const g = store.groups.get('IF');
+  const high = store.levels.indexOf('High');
+  return uniquePlayer('IF', (i) => g?.level[i] === high && (g?.age[i] ?? 0) >= 19 && (g?.age[i] ?? 99) <= 22 && (g?.season[i] ?? 0) >= 2018);
+}
+
+/** A top-level infielder paid more than $3M, for cheaper comps. */
+function cheaperTarget(): ReturnType<typeof uniquePlayer> {
+  const g = store.groups.get('IF');
+  const top = store.levels.indexOf('Top');
+  return uniquePlayer('IF', (i) => g?.level[i] === top && (store.salaries.get(g.player[i] as number)?.get(g.season[i] as number) ?? 0) > 3e6);
+}
+
 /** Types part of a name into a picker, picks the player and his season. */
 async function pick(prefix: string, who: { name: string; part: string; season: number; level: string }): Promise<void> {
   await page.fill(`#${prefix}-input`, who.part);
@@ -231,9 +245,7 @@ describe('the build-a-target view', () => {
 describe('the prospect view', () => {
   it('shows the comps at his level and age, what became of them, and the outcome chart', async () => {
     await openView('prospect');
-    const g = store.groups.get('IF');
-    const aa = store.levels.indexOf('High');
-    const who = uniquePlayer('IF', (i) => g?.level[i] === aa && (g?.age[i] ?? 0) >= 19 && (g?.age[i] ?? 99) <= 22 && (g?.season[i] ?? 0) >= 2018);
+    const who = prospectTarget();
     await pick('player', who);
     expect(await page.inputValue('#opt-k')).toBe('25');
     // the page shows, and so sends, the server's own least coverage for prospect comps (0.25, not the comps 0.5)
@@ -253,7 +265,7 @@ describe('the prospect view', () => {
       return !censored && typeof o === 'object' && o !== null && (('peak_ops_plus' in o && o.peak_ops_plus !== null) || ('peak_fip_minus' in o && o.peak_fip_minus !== null));
     }).length;
     expect(await page.locator('#extra-chart svg .mark-symbol.role-mark path').count()).toBe(peaks);
-    expect(await page.locator('#comps-table thead th').allTextContents()).toContain('reached top level');
+    expect(await page.locator('#comps-table thead th').allTextContents()).toContain('Reached top level');
     await page.screenshot({ path: join(ARTIFACTS, 'prospect.png'), fullPage: true });
   });
 });
@@ -261,9 +273,7 @@ describe('the prospect view', () => {
 describe('the cheaper comps view', () => {
   it('lists comps under a salary limit with the value frontier chart', async () => {
     await openView('cheaper');
-    const g = store.groups.get('IF');
-    const top = store.levels.indexOf('Top');
-    const who = uniquePlayer('IF', (i) => g?.level[i] === top && (store.salaries.get(g.player[i] as number)?.get(g.season[i] as number) ?? 0) > 3e6);
+    const who = cheaperTarget();
     await pick('player', who);
     await page.fill('#opt-max-salary', '2,000,000');
     await page.click('#run');
@@ -303,6 +313,75 @@ describe('the one-to-one view', () => {
     const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
     expect(JSON.parse(await readFile(await jsonDownload.path(), 'utf8'))).toEqual(expected);
     await page.screenshot({ path: join(ARTIFACTS, 'match.png'), fullPage: true });
+  });
+});
+
+/** Runs the prospect outlook or cheaper comps of their target and waits for that job's own answer (its note). */
+async function runWidest(job: 'prospect' | 'cheaper'): Promise<void> {
+  await openView(job);
+  await pick('player', job === 'prospect' ? prospectTarget() : cheaperTarget());
+  if (job === 'cheaper') await page.fill('#opt-max-salary', '2,000,000');
+  await page.click('#run');
+  await page.waitForFunction((word) => document.querySelector('#result-note')?.textContent?.startsWith(word) === true && document.querySelector('#comps-table tbody tr') !== null, job === 'prospect' ? 'Outlook over' : 'Salary limit');
+}
+
+/** Widths of the window, the page, the table's box and the table, and where the controls and results sit. */
+async function layout(): Promise<{ window: number; page: number; box: number; table: number; tableRight: number; boxRight: number; controlsBottom: number; resultsTop: number; cardRows: number }> {
+  return page.evaluate(() => {
+    const box = document.querySelector('.table-wrap');
+    const table = document.querySelector('#comps-table');
+    const controls = document.querySelector('#controls');
+    const results = document.querySelector('#results-slot');
+    if (!box || !table || !controls || !results) throw new Error('the page lacks its table or controls');
+    const rows = Array.from(document.querySelectorAll('#comps-table tbody tr'));
+    return {
+      window: document.documentElement.clientWidth,
+      page: document.documentElement.scrollWidth,
+      box: box.clientWidth,
+      table: box.scrollWidth,
+      tableRight: table.getBoundingClientRect().right,
+      boxRight: box.getBoundingClientRect().right,
+      controlsBottom: controls.getBoundingClientRect().bottom,
+      resultsTop: results.getBoundingClientRect().top,
+      cardRows: rows.filter((tr) => getComputedStyle(tr).display === 'grid').length,
+    };
+  });
+}
+
+describe('the page at 1366 px and 820 px wide', () => {
+  afterAll(async () => {
+    await page.setViewportSize({ width: 1400, height: 1000 });
+  });
+
+  it('shows the widest tables (prospect outlook, cheaper comps) whole beside the controls at 1366 px', async () => {
+    await page.setViewportSize({ width: 1366, height: 900 });
+    for (const job of ['prospect', 'cheaper'] as const) {
+      await runWidest(job);
+      const m = await layout();
+      // nothing cut: the table is no wider than its box, and the page no wider than the window
+      expect(m.table, job).toBeLessThanOrEqual(m.box);
+      expect(m.tableRight, job).toBeLessThanOrEqual(m.boxRight + 0.5);
+      expect(m.page, job).toBeLessThanOrEqual(m.window);
+      // two columns: the results start beside the controls, above their bottom
+      expect(m.resultsTop, job).toBeLessThan(m.controlsBottom);
+      expect(m.cardRows, job).toBe(0);
+      await page.screenshot({ path: join(ARTIFACTS, `${job}-1366.png`), fullPage: true });
+    }
+  });
+
+  it('reflows at 820 px: the controls above the results, each comp a card of labelled cells, nothing wider than the window', async () => {
+    await page.setViewportSize({ width: 820, height: 1000 });
+    for (const job of ['prospect', 'cheaper'] as const) {
+      await runWidest(job);
+      const m = await layout();
+      expect(m.controlsBottom, job).toBeLessThanOrEqual(m.resultsTop);
+      expect(m.table, job).toBeLessThanOrEqual(m.box);
+      expect(m.page, job).toBeLessThanOrEqual(m.window);
+      const rows = await page.locator('#comps-table tbody tr').count();
+      expect(m.cardRows, job).toBe(rows);
+      expect(await page.locator('#comps-table tbody tr').first().locator('td').nth(1).getAttribute('data-label')).toBe('Name');
+      await page.screenshot({ path: join(ARTIFACTS, `${job}-820.png`), fullPage: true });
+    }
   });
 });
 
