@@ -16,9 +16,6 @@ export function defaultSeasonSpan(now: Date = new Date()): SeasonSpan {
   return { from: 1860, to: now.getUTCFullYear() + 1 };
 }
 
-/** The default order of levels, low to high, used when a roster has no levels.csv. */
-export const DEFAULT_LEVELS: readonly string[] = ['Rk', 'A', 'A+', 'AA', 'AAA', 'MLB'];
-
 /**
  * What the season files are checked against: the players of players.csv
  * (and the lines of those rejected there) and the known levels.
@@ -32,16 +29,14 @@ export class RosterLookups {
     private readonly rejectedPlayers: ReadonlyMap<string, number>,
     private readonly playersFile: string,
     readonly levels: readonly string[],
-    levelsFile: string | undefined,
+    /** Undefined when the roster has no readable levels.csv: its problem is reported once, levels are not checked. */
+    private readonly levelsFile: string | undefined,
     private readonly seasons: SeasonSpan = defaultSeasonSpan(),
     /** False when players.csv could not be read (its problem is reported once; ids are not checked against it). */
     private readonly playersReadable = true,
   ) {
     this.levelSet = new Set(levels);
-    const source = levelsFile === undefined
-      ? 'the default order; list your own levels low to high in levels.csv'
-      : `the levels of ${levelsFile}`;
-    this.levelsExpected = `a known level: one of ${levels.join(', ')} (${source})`;
+    this.levelsExpected = `a known level: one of ${levels.join(', ')} (the levels of ${levelsFile ?? 'levels.csv'})`;
   }
 
   /** Reads a player_id that must be in players.csv. */
@@ -79,7 +74,7 @@ export class RosterLookups {
   /** Reads a level that must be in the known order. */
   level(row: RowReader, col: Column): string {
     const level = row.text(col);
-    if (level === '' || this.levelSet.has(level)) return level;
+    if (level === '' || this.levelsFile === undefined || this.levelSet.has(level)) return level;
     row.report('kindred.input.badValue', col, level, this.levelsExpected);
     return level;
   }

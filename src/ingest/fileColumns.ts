@@ -27,7 +27,7 @@ export const ROSTER_FILES: readonly RosterFile[] = [
 ];
 
 /** Files a roster folder must have; the others are read as empty when absent. */
-export const REQUIRED_FILES: ReadonlySet<RosterFile> = new Set<RosterFile>(['players.csv', 'batting.csv']);
+export const REQUIRED_FILES: ReadonlySet<RosterFile> = new Set<RosterFile>(['levels.csv', 'players.csv', 'batting.csv']);
 
 /** The column table of a file (as a plain table, for code that works on any file). */
 export function tableOf(file: RosterFile): ColumnTable {

@@ -1,17 +1,21 @@
 import { LEVELS_COLUMNS } from './levelsColumns.ts';
 import { RecordReader } from './RecordReader.ts';
-import { DEFAULT_LEVELS, KeyLines } from './RosterLookups.ts';
+import { KeyLines } from './RosterLookups.ts';
 import { readTable, type TableOptions } from './readTable.ts';
 
 export interface LevelsRead {
   readonly levels: readonly string[];
-  /** The file the order came from, undefined for the default order. */
+  /** The file the order came from, undefined when the roster has none (reported as a missing file). */
   readonly file: string | undefined;
   readonly rows: number;
   readonly ignored: readonly string[];
 }
 
-/** Reads levels.csv (levelsColumns.ts: one column `level`, rows low to high), or gives the default order without it. */
+/**
+ * Reads levels.csv (levelsColumns.ts: one column `level`, rows low to high). There is no built-in
+ * order: every roster declares its own levels, and its last (highest) level is the top level every
+ * job speaks of. Without the file, readTable reports it missing and no level is known.
+ */
 export async function readLevels(options: TableOptions): Promise<LevelsRead> {
   const levels: string[] = [];
   const keys = new KeyLines('level');
@@ -26,7 +30,7 @@ export async function readLevels(options: TableOptions): Promise<LevelsRead> {
       if (ctx.settle()) levels.push(reader.record(fields).level);
     };
   });
-  if (!read.present) return { levels: DEFAULT_LEVELS, file: undefined, rows: 0, ignored: [] };
+  if (!read.present) return { levels: [], file: undefined, rows: 0, ignored: [] };
   if (levels.length === 0 && read.rows === 0) {
     options.log.fileProblem({
       code: 'kindred.input.badValue', file: read.fileName, line: 2, column: 0, field: 'level', value: '',

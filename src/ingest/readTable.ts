@@ -60,7 +60,7 @@ export async function readTable<F extends RosterFile>(
         : ` (the column map's name for ${file})`;
       log.fileProblem({
         code: 'kindred.input.missingFile', file: fileName, line: 0, column: 0, field: '', value: path,
-        expected: `a file ${fileName} in the roster folder${renamed}`,
+        expected: `a file ${fileName} in the roster folder${file === 'levels.csv' ? ' declaring the roster’s levels under the header level, one a row, lowest first (the last is the top level)' : ''}${renamed}`,
       });
     } else if (columnMap.files[file] !== undefined || columnMap.columns[file] !== undefined) {
       const key = columnMap.files[file] !== undefined ? `files.${file}` : `columns.${file}`;

@@ -30,8 +30,8 @@ export const windowKey = (playerId: string, season: number, level: string): stri
  * (the bench `compsQuality.bench.ts` measures windows). `window` 1 returns the roster unchanged.
  *
  * @example
- * // batting of p1 at MLB: 2025 PA 300, H 80, BB 30; 2026 PA 200, H 50, BB 10
- * // windowRoster(roster, 2): p1 2026 MLB PA 500, H 130, BB 40, first season 2025; p1 2025 MLB unchanged
+ * // batting of p1 at Top: 2025 PA 300, H 80, BB 30; 2026 PA 200, H 50, BB 10
+ * // windowRoster(roster, 2): p1 2026 Top PA 500, H 130, BB 40, first season 2025; p1 2025 Top unchanged
  */
 export function windowRoster(roster: Roster, window: number): WindowRoster {
   if (!Number.isInteger(window) || window < 1) throw new RangeError(`window must be a whole number of seasons of at least 1 (got ${window})`);

@@ -60,7 +60,10 @@ describe('kindred prospect <player>', () => {
     const table = await runCli('prospect', hitter, '--store', store);
     const csv = await runCli('prospect', hitter, '--store', store, '--format', 'csv');
     const r = await json(pitcher);
-    for (const text of [table.stdout, csv.stdout, JSON.stringify(r)]) expect(text).not.toMatch(/MLB|mlb/);
+    // the level the table names is one the roster declared (levels.csv), and its columns speak of the top level
+    const level = table.stdout.match(/^Prospect comps for .*\(p\d+\), \d{4} (\S+) /)?.[1];
+    expect(['Entry', 'Low', 'Mid', 'High', 'Elite', 'Top']).toContain(level);
+    for (const text of [csv.stdout, JSON.stringify(r)]) expect(text).toContain('top_level');
     expect(table.stdout).toMatch(/First top +Top yrs/);
     expect(csv.stdout.split('\n')[0]).toContain('reached_top_level,first_top_level_season,top_level_seasons');
     expect(r.outlook).toHaveProperty('reached_top_level');

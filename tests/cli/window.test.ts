@@ -29,9 +29,9 @@ beforeAll(async () => {
   const g = store.groups.get('IF');
   if (!g) throw new Error('no infielders');
   top = store.levels[store.levels.length - 1] ?? '';
-  const mlb = store.levels.indexOf(top);
+  const topIdx = store.levels.indexOf(top);
   const seasons = new Map<number, number[]>();
-  for (let r = 0; r < g.n; r++) if (g.level[r] === mlb) seasons.set(g.player[r] as number, [...(seasons.get(g.player[r] as number) ?? []), g.season[r] as number]);
+  for (let r = 0; r < g.n; r++) if (g.level[r] === topIdx) seasons.set(g.player[r] as number, [...(seasons.get(g.player[r] as number) ?? []), g.season[r] as number]);
   const [player, list] = [...seasons].find(([, s]) => s.length >= 4) ?? [-1, []];
   hitter = { id: store.players[player]?.playerId ?? '', season: [...list].sort((a, b) => a - b)[2] ?? 0 };
 });

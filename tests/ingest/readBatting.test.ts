@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { readRoster } from '../../src/ingest/readRoster.ts';
-import { col, csv, expectOneIssue, PLAYER_ROWS, removeRosterDirs, rosterDir, strictIssues } from './rosterFixture.ts';
+import { col, csv, expectOneIssue, FIXTURE_LEVELS, PLAYER_ROWS, removeRosterDirs, rosterDir, strictIssues } from './rosterFixture.ts';
 
 afterAll(removeRosterDirs);
 
@@ -132,7 +132,7 @@ describe('readRoster: batting.csv keys', () => {
   it('refuses an unknown level, naming the known levels and levels.csv', async () => {
     const issues = await battingIssues([{ level: 'AAAA' }]);
     const issue = expectOneIssue(issues, { code: 'kindred.input.badValue', file: 'batting.csv', line: 2, column: col('batting', 'level'), value: 'AAAA' });
-    expect(issue.expected).toContain('Rk, A, A+, AA, AAA, MLB');
+    expect(issue.expected).toContain(FIXTURE_LEVELS.join(', '));
     expect(issue.expected).toContain('levels.csv');
   });
   it('refuses a player_id that is not in players.csv', async () => {

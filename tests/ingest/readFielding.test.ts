@@ -63,6 +63,6 @@ describe('readRoster: fielding.csv', () => {
     expect(roster.fielding).toEqual([]);
     expect(roster.pitching).toEqual([]);
     expect(roster.contracts).toEqual([]);
-    expect(Object.keys(roster.rowsRead).sort()).toEqual(['batting.csv', 'players.csv']);
+    expect(Object.keys(roster.rowsRead).sort()).toEqual(['batting.csv', 'levels.csv', 'players.csv']);
   });
 });

@@ -159,6 +159,15 @@ describe('readRoster: levels', () => {
     expect(issue.expected).toContain('Low, High');
     expect(issue.expected).toContain('levels.csv');
   });
+  it('has no built-in order: a roster without levels.csv is refused once, asking for the file (and no level is refused for it)', async () => {
+    const dir = rosterDir({ 'batting.csv': csv('batting', [{ level: 'AA' }, { player_id: 'p2', level: 'Mid' }]) }, ['levels.csv']);
+    const { issues } = await strictIssues(dir);
+    expect(issues.map((i) => i.code)).toEqual(['kindred.input.missingFile']);
+    const issue = issues[0];
+    if (!issue) throw new Error('no issue');
+    expect(issue).toMatchObject({ file: 'levels.csv' });
+    expect(formatIssue(issue)).toContain('lowest first');
+  });
 });
 
 describe('readRoster with a column map', () => {

@@ -81,7 +81,7 @@ describe('readRoster: file shape', () => {
   it('reports progress with the rows read at the end of each file', async () => {
     const seen: [string, number][] = [];
     await readRoster(rosterDir({ 'batting.csv': csv('batting', [{}, { player_id: 'p2' }]) }), { onProgress: (f, n) => seen.push([f, n]) });
-    expect(seen).toEqual([['players.csv', 3], ['batting.csv', 2]]);
+    expect(seen).toEqual([['levels.csv', 6], ['players.csv', 3], ['batting.csv', 2]]);
   });
 });
 

@@ -58,16 +58,20 @@ export function col(table: Table, name: string, omit: readonly string[] = []): n
 
 const made: string[] = [];
 
-/** Writes a roster folder; players.csv and batting.csv default to valid files. */
-export function rosterDir(files: Readonly<Record<string, string>> = {}): string {
+/** The levels every fixture roster declares unless levels.csv is given (invented names for the top one). */
+export const FIXTURE_LEVELS = ['Rk', 'A', 'A+', 'AA', 'AAA', 'Top'] as const;
+
+/** Writes a roster folder; levels.csv, players.csv and batting.csv default to valid files (omit: files to leave out). */
+export function rosterDir(files: Readonly<Record<string, string>> = {}, omit: readonly string[] = []): string {
   const dir = mkdtempSync(join(tmpdir(), 'kindred-ingest-'));
   made.push(dir);
   const all: Record<string, string> = {
+    'levels.csv': ['level', ...FIXTURE_LEVELS].join('\n') + '\n',
     'players.csv': csv('players', PLAYER_ROWS),
     'batting.csv': csv('batting', [{}]),
     ...files,
   };
-  for (const [name, text] of Object.entries(all)) writeFileSync(join(dir, name), text);
+  for (const [name, text] of Object.entries(all)) if (!omit.includes(name)) writeFileSync(join(dir, name), text);
   return dir;
 }
 

@@ -4,23 +4,23 @@ import { Outcomes, peakOf } from '../../src/outlook/Outcomes.ts';
 import { StoreError } from '../../src/errors/KindredError.ts';
 import { bat, pitch, roster } from './rosterLines.ts';
 
-const lg = (id: string, season: number): ReturnType<typeof bat> => bat(id, season, 'MLB', { PA: 600, AB: 540, H: 140, doubles: 25, HR: 15, BB: 55 });
+const lg = (id: string, season: number): ReturnType<typeof bat> => bat(id, season, 'Top', { PA: 600, AB: 540, H: 140, doubles: 25, HR: 15, BB: 55 });
 const r = roster(
   [
     bat('h', 2010, 'AA', { PA: 500, AB: 450, H: 130 }),
-    bat('h', 2012, 'MLB', { PA: 299, AB: 260, H: 100, HR: 20, BB: 35 }), // a great season just under 300 PA
-    bat('h', 2013, 'MLB', { PA: 450, AB: 400, H: 110, HR: 12, BB: 45 }),
-    bat('h', 2015, 'MLB', { PA: 620, AB: 560, H: 170, HR: 25, BB: 55 }),
-    bat('h', 2017, 'MLB', { PA: 620, AB: 540, H: 200, HR: 40, BB: 70 }), // outside a 6-season window from 2010
+    bat('h', 2012, 'Top', { PA: 299, AB: 260, H: 100, HR: 20, BB: 35 }), // a great season just under 300 PA
+    bat('h', 2013, 'Top', { PA: 450, AB: 400, H: 110, HR: 12, BB: 45 }),
+    bat('h', 2015, 'Top', { PA: 620, AB: 560, H: 170, HR: 25, BB: 55 }),
+    bat('h', 2017, 'Top', { PA: 620, AB: 540, H: 200, HR: 40, BB: 70 }), // outside a 6-season window from 2010
     ...[2011, 2012, 2013, 2014, 2015, 2016, 2017, 2018].map((s) => lg('x', s)),
   ],
   [
-    pitch('p', 2011, 'MLB', { outs: 149, BF: 200, ER: 5, SO: 60 }), // excellent, just under 50 IP
-    pitch('p', 2012, 'MLB', { outs: 180, BF: 260, ER: 30, HR: 8, BB: 20, SO: 40 }),
-    pitch('p', 2013, 'MLB', { outs: 400, BF: 560, ER: 40, HR: 8, BB: 20, SO: 120 }),
-    pitch('y', 2011, 'MLB', { outs: 1500, BF: 2100, ER: 200, HR: 50, BB: 150, SO: 350 }),
-    pitch('y', 2012, 'MLB', { outs: 1500, BF: 2100, ER: 200, HR: 50, BB: 150, SO: 350 }),
-    pitch('y', 2013, 'MLB', { outs: 1500, BF: 2100, ER: 200, HR: 50, BB: 150, SO: 350 }),
+    pitch('p', 2011, 'Top', { outs: 149, BF: 200, ER: 5, SO: 60 }), // excellent, just under 50 IP
+    pitch('p', 2012, 'Top', { outs: 180, BF: 260, ER: 30, HR: 8, BB: 20, SO: 40 }),
+    pitch('p', 2013, 'Top', { outs: 400, BF: 560, ER: 40, HR: 8, BB: 20, SO: 120 }),
+    pitch('y', 2011, 'Top', { outs: 1500, BF: 2100, ER: 200, HR: 50, BB: 150, SO: 350 }),
+    pitch('y', 2012, 'Top', { outs: 1500, BF: 2100, ER: 200, HR: 50, BB: 150, SO: 350 }),
+    pitch('y', 2013, 'Top', { outs: 1500, BF: 2100, ER: 200, HR: 50, BB: 150, SO: 350 }),
   ],
 );
 const file = computeOutcomes(r);
@@ -32,7 +32,7 @@ const opsOf = (season: number): number => file.batting.find((b) => b[0] === 'h' 
 const fipOf = (season: number): number => file.pitching.find((b) => b[0] === 'p' && b[1] === season)?.[4] ?? NaN;
 
 describe('Outcomes.futureOf(player, kind, season, horizon, asOf)', () => {
-  it('follows seasons season+1 .. season+horizon and counts the MLB seasons in them', () => {
+  it('follows seasons season+1 .. season+horizon and counts the top-level seasons in them', () => {
     const o = outcomes.futureOf(h, 'hitter', 2010, 6);
     expect(o.window).toEqual([2011, 2016]);
     expect(o.reached_top_level).toBe(true);
@@ -71,7 +71,7 @@ describe('Outcomes.futureOf(player, kind, season, horizon, asOf)', () => {
     expect(outcomes.futureOf(h, 'hitter', 2010, 6).censored).toBe(false); // the data run to 2018
   });
 
-  it('says no MLB and no peak for a player with no top-level line', () => {
+  it('says no top level and no peak for a player with no top-level line', () => {
     const o = outcomes.futureOf(h, 'pitcher', 2010, 6);
     expect(o.reached_top_level).toBe(false);
     expect(o.first_top_level_season).toBeNull();

@@ -7,14 +7,14 @@ import { bat, pitch, roster } from './rosterLines.ts';
 
 const r = roster(
   [
-    bat('h1', 2020, 'MLB', { PA: 600, AB: 530, H: 160, doubles: 35, triples: 3, HR: 28, BB: 55, HBP: 8, SF: 7 }),
-    bat('h2', 2020, 'MLB', { PA: 400, AB: 370, H: 90, doubles: 15, HR: 8, BB: 25, HBP: 2, SF: 3 }),
+    bat('h1', 2020, 'Top', { PA: 600, AB: 530, H: 160, doubles: 35, triples: 3, HR: 28, BB: 55, HBP: 8, SF: 7 }),
+    bat('h2', 2020, 'Top', { PA: 400, AB: 370, H: 90, doubles: 15, HR: 8, BB: 25, HBP: 2, SF: 3 }),
     bat('h3', 2020, 'AA', { PA: 500, AB: 450, H: 150, HR: 30, BB: 50 }),
     bat('h3', 2018, 'A', { PA: 300, AB: 280, H: 80 }),
   ],
   [
-    pitch('p1', 2020, 'MLB', { outs: 540, BF: 780, ER: 70, HR: 18, BB: 45, HBP: 5, SO: 190 }),
-    pitch('p2', 2020, 'MLB', { outs: 180, BF: 270, ER: 35, HR: 10, BB: 30, HBP: 3, SO: 40 }),
+    pitch('p1', 2020, 'Top', { outs: 540, BF: 780, ER: 70, HR: 18, BB: 45, HBP: 5, SO: 190 }),
+    pitch('p2', 2020, 'Top', { outs: 180, BF: 270, ER: 35, HR: 10, BB: 30, HBP: 3, SO: 40 }),
     pitch('p3', 2021, 'AA', { outs: 300, BF: 420, ER: 30 }),
   ],
 );
@@ -28,7 +28,7 @@ describe('computeOutcomes(roster)', () => {
   });
 
   it('takes the last of roster.levels as the top level and keeps only its lines', () => {
-    expect(out.top_level).toBe('MLB');
+    expect(out.top_level).toBe('Top');
     expect(out.batting.map((b) => b[0]).sort()).toEqual(['h1', 'h2']);
     expect(out.pitching.map((p) => p[0]).sort()).toEqual(['p1', 'p2']);
   });

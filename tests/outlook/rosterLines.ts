@@ -9,7 +9,7 @@ export function pitch(playerId: string, season: number, level: string, line: Par
   return { playerId, season, level, teams: ['Club'], G: 10, GS: 10, H: 0, HR: 0, BB: 0, HBP: 0, SO: 0, ER: 0, ...line };
 }
 
-export function roster(batting: BattingSeason[], pitching: PitchingSeason[], levels: string[] = ['A', 'AA', 'MLB']): Roster {
+export function roster(batting: BattingSeason[], pitching: PitchingSeason[], levels: string[] = ['A', 'AA', 'Top']): Roster {
   const ids = new Set([...batting.map((b) => b.playerId), ...pitching.map((p) => p.playerId)]);
   const players = new Map<string, Player>([...ids].map((id) => [id, { playerId: id, name: `Player ${id}`, birthDate: '2000-01-01' }]));
   return {

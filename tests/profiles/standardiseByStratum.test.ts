@@ -13,7 +13,7 @@ describe('standardiseByStratum(values, season, base)', () => {
 
   it('keeps strata apart: the same value is average in one stratum and high in another', () => {
     const values = Float64Array.from([1, 2, 3, 2, 3, 4]);
-    const col = standardiseByStratum(values, () => 2020, (i) => (i < 3 ? 'AA|IF' : 'MLB|IF'), { minStratum: 2, maxBorrow: 0 });
+    const col = standardiseByStratum(values, () => 2020, (i) => (i < 3 ? 'AA|IF' : 'Top|IF'), { minStratum: 2, maxBorrow: 0 });
     expect(col.z[1]).toBeCloseTo(0, 12);
     expect(col.z[3]).toBeCloseTo(-1, 12);
   });

@@ -9,11 +9,11 @@ import { buildProfiles, buildWindowProfiles } from '../../src/profiles/buildProf
 import { DEFAULT_STANDARDISE } from '../../src/profiles/standardiseByStratum.ts';
 
 /**
- * A hand-made two-season roster (invented players): h1 at AA in 2024 and 2025 (and 2026, and MLB in 2025),
+ * A hand-made two-season roster (invented players): h1 at AA in 2024 and 2025 (and 2026, and Top in 2025),
  * h2 and h3 at AA both seasons; p1 to p3 starting pitchers at AA both seasons.
  */
 const FILES: Record<string, string> = {
-  'levels.csv': 'level\nAA\nMLB\n',
+  'levels.csv': 'level\nAA\nTop\n',
   'players.csv': ['player_id,name,birth_date', 'h1,Arlo Fenwick,2000-04-01', 'h2,Bram Ostley,2000-05-01', 'h3,Cass Dunmore,2000-06-01',
     'p1,Dov Harrow,1999-04-01', 'p2,Eli Marsk,1999-05-01', 'p3,Fen Quill,1999-06-01'].join('\n'),
   'batting.csv': [
@@ -21,7 +21,7 @@ const FILES: Record<string, string> = {
     'h1,2024,AA,500,440,120,25,2,15,50,5,5,100,10,5,330,90.0',
     'h1,2025,AA,400,360,90,20,1,8,30,6,4,90,20,4,260,87.0',
     'h1,2026,AA,300,270,81,10,3,4,24,2,4,45,2,2,210,88.5',
-    'h1,2025,MLB,100,90,20,4,0,2,8,1,1,30,1,1,60,85.0',
+    'h1,2025,Top,100,90,20,4,0,2,8,1,1,30,1,1,60,85.0',
     'h2,2024,AA,400,360,90,20,1,8,30,6,4,90,20,4,260,87.0',
     'h2,2025,AA,420,380,100,21,1,9,31,5,4,80,18,5,270,87.5',
     'h3,2024,AA,300,270,81,10,3,4,24,2,4,45,2,2,210,88.5',
@@ -29,7 +29,7 @@ const FILES: Record<string, string> = {
   ].join('\n'),
   'fielding.csv': [
     'player_id,season,level,pos,inn,PO,A,E',
-    'h1,2024,AA,LF,900.0,180,8,3', 'h1,2025,AA,LF,800.1,150,6,1', 'h1,2026,AA,LF,600.0,120,9,4', 'h1,2025,MLB,LF,200.0,40,1,1',
+    'h1,2024,AA,LF,900.0,180,8,3', 'h1,2025,AA,LF,800.1,150,6,1', 'h1,2026,AA,LF,600.0,120,9,4', 'h1,2025,Top,LF,200.0,40,1,1',
     'h2,2024,AA,CF,800.0,220,5,2', 'h2,2025,AA,CF,820.0,210,6,3',
     'h3,2024,AA,RF,600.0,120,9,4', 'h3,2025,AA,RF,650.0,125,8,2',
   ].join('\n'),
@@ -88,8 +88,8 @@ describe('windowRoster(roster, 2): a line with the same player\u2019s line at it
     expect(w.firstSeason.get(windowKey('h1', 2025, 'AA'))).toBe(2024);
     expect(w.firstSeason.get(windowKey('h1', 2026, 'AA'))).toBe(2024);
   });
-  it('keeps other levels apart: h1\u2019s 2025 MLB line stays his MLB season alone', () => {
-    expect(battingOf(windowRoster(roster, 2).roster, 'h1', 2025, 'MLB')).toEqual(battingOf(roster, 'h1', 2025, 'MLB'));
+  it('keeps other levels apart: h1\u2019s 2025 Top line stays his Top season alone', () => {
+    expect(battingOf(windowRoster(roster, 2).roster, 'h1', 2025, 'Top')).toEqual(battingOf(roster, 'h1', 2025, 'Top'));
   });
   it('leaves the roster as it is with window 1, and refuses a window below 1', () => {
     expect(windowRoster(roster, 1).roster).toBe(roster);

@@ -4,15 +4,15 @@ import { pitch } from '../outlook/rosterLines.ts';
 
 describe('leagueFip(lines)', () => {
   it('gives the doc example: lgERA 4, C = 4 - 155 / 180, lgFIP = lgERA', () => {
-    const r = leagueFip([pitch('a', 2020, 'MLB', { outs: 540, BF: 800, ER: 80, HR: 20, BB: 60, HBP: 5, SO: 150 })]);
+    const r = leagueFip([pitch('a', 2020, 'Top', { outs: 540, BF: 800, ER: 80, HR: 20, BB: 60, HBP: 5, SO: 150 })]);
     expect(r.ERA).toBeCloseTo(4, 12);
     expect(r.constant).toBeCloseTo(4 - 155 / 180, 12);
     expect(r.FIP).toBeCloseTo(4, 12);
   });
   it('sums the lines before applying src/stats/fipConstant.ts (not the mean of per-pitcher constants), so the league FIP equals the league ERA', () => {
     const lines = [
-      pitch('a', 2020, 'MLB', { outs: 600, BF: 850, ER: 70, HR: 18, BB: 50, HBP: 6, SO: 210 }),
-      pitch('b', 2020, 'MLB', { outs: 150, BF: 230, ER: 30, HR: 9, BB: 25, HBP: 2, SO: 30 }),
+      pitch('a', 2020, 'Top', { outs: 600, BF: 850, ER: 70, HR: 18, BB: 50, HBP: 6, SO: 210 }),
+      pitch('b', 2020, 'Top', { outs: 150, BF: 230, ER: 30, HR: 9, BB: 25, HBP: 2, SO: 30 }),
     ];
     const r = leagueFip(lines);
     // summed by hand: ER 100, outs 750, HR 27, BB 75, HBP 8, SO 240
