@@ -178,5 +178,6 @@ describe('backtest text', () => {
       expect(lines.some((l) => l.startsWith(`${k.kind === 'hitter' ? 'Hitters' : 'Pitchers'}: ${k.targets.toLocaleString('en-US')} prospect forecasts`))).toBe(true);
       expect(out.stdout).toContain(`calibrated ${k.brier.calibrated.toFixed(4)}`);
     }
-  });
+    // two full backtests of the store: 99 s once under a full suite on 2 shared cores (alone: about 10 s)
+  }, 240_000);
 });
