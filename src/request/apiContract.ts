@@ -28,6 +28,22 @@ export interface StoreInfo {
   readonly presets: readonly string[];
   /** Each job's least coverage by default (the request table's defaults), so that the page shows, and sends, what the server would use. */
   readonly min_coverage: Readonly<Record<'comps' | 'prospect' | 'cheaper' | 'match', number>>;
+  /**
+   * How far each job's default pool reaches from its target (the request table's defaults of adjacent,
+   * level-span, sample-floor and recent), so that the page shows, and sends, what the server would use.
+   * Prospect comps have a pool of their own and no entry. null: no limit (any level, any season).
+   */
+  readonly pool_reach: Readonly<Record<ReachJob, PoolReachDefaults>>;
+}
+
+/** The jobs whose pool starts from the target's default reach. */
+export type ReachJob = 'comps' | 'cheaper' | 'match';
+
+export interface PoolReachDefaults {
+  readonly adjacent: boolean;
+  readonly level_span: number | null;
+  readonly sample_floor: number;
+  readonly recent: number | null;
 }
 
 export interface PlayerSeason {

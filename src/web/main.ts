@@ -56,7 +56,7 @@ async function start(): Promise<void> {
     runButton.textContent = next.runLabel;
     targetSlot.replaceChildren(...next.sections(ctx));
     filtersSlot.hidden = !next.usesFilters;
-    filters.setDefaults(next.defaultK, next.minCoverageOf(info));
+    filters.setDefaults(next.defaultK, next.minCoverageOf(info), next.poolReachOf(info));
     results.clear(next.idle);
   };
   tabs.replaceChildren(

@@ -27,6 +27,8 @@ export interface ShowOptions {
   /** The API's answer as it came (exported as JSON); default the result shown. */
   readonly raw?: unknown;
   readonly note?: string;
+  /** How the pool was chosen, in words (the form's rules), shown under the pool's rules. */
+  readonly poolChoice?: string | undefined;
   /** The first line of the summary (default: how many comps for whom). */
   readonly headline?: string;
   readonly chart?: { readonly title: string; readonly spec: TopLevelSpec; readonly label: string };
@@ -114,6 +116,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
         options.headline !== undefined ? h('p', {}, h('strong', {}, options.headline)) : h('p', {}, h('strong', {}, `${formatCount(result.comps.length)} ${result.comps.length === 1 ? 'comp' : 'comps'}`), ` for ${who}`),
         h('p', { class: 'meta' }, `${formatCount(result.pool.eligible)} of ${formatCount(result.pool.group_size)} ${q.group} player-seasons in the pool · searched ${q.method === 'hnsw' ? 'with the index' : 'exactly'}`),
         h('p', { class: 'meta', id: 'pool-rules' }, `Pool: ${result.pool.summary}`),
+        ...(options.poolChoice ? [h('p', { class: 'meta', id: 'pool-choice' }, options.poolChoice)] : []),
         ...(options.note ? [h('p', { class: 'note', id: 'result-note' }, options.note)] : []),
       );
       const pitchers = result.comps[0]?.sample_unit === 'BF';

@@ -1,5 +1,5 @@
 import type { DimensionInfo } from '../request/apiContract.ts';
-import type { StoreInfo } from '../request/apiContract.ts';
+import type { PoolReachDefaults, StoreInfo } from '../request/apiContract.ts';
 import { fetchCheaper, fetchComps, fetchMatch, fetchProspect } from './api.ts';
 import { h } from './dom.ts';
 import { frontierChartSpec } from './frontierChartSpec.ts';
@@ -35,6 +35,8 @@ export interface ViewDef {
   readonly defaultK: number;
   /** The least coverage the form shows (and so sends) for this job: the server's default for it. */
   readonly minCoverageOf: (info: StoreInfo) => number;
+  /** The pool's reach the form shows (and so sends) for this job; undefined for a job with a pool of its own. */
+  readonly poolReachOf: (info: StoreInfo) => PoolReachDefaults | undefined;
   sections(ctx: ViewContext): HTMLElement[];
   run(ctx: ViewContext): Promise<void>;
 }
@@ -71,11 +73,12 @@ const compsView: ViewDef = {
   usesFilters: true,
   defaultK: 10,
   minCoverageOf: (info) => info.min_coverage.comps,
+  poolReachOf: (info) => info.pool_reach.comps,
   sections: (ctx) => [ctx.first.element],
   async run(ctx) {
     needPlayer(ctx.first);
     const result = await fetchComps('/api/comps', merge(playerParams(ctx.first), ctx.filters.params()));
-    await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? []);
+    await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], { poolChoice: ctx.filters.choice() });
   },
 };
 
@@ -88,12 +91,13 @@ const targetView: ViewDef = {
   usesFilters: true,
   defaultK: 10,
   minCoverageOf: (info) => info.min_coverage.comps,
+  poolReachOf: (info) => info.pool_reach.comps,
   sections: (ctx) => [ctx.builder.element],
   async run(ctx) {
     const want = ctx.builder.want();
     if (want === '') throw new Error('Tick at least one dimension and set its grade or value.');
     const result = await fetchComps('/api/comps', merge(new URLSearchParams({ want, position: ctx.builder.position() }), ctx.filters.params()));
-    await ctx.results.show(result, ctx.builder.dims());
+    await ctx.results.show(result, ctx.builder.dims(), { poolChoice: ctx.filters.choice() });
   },
 };
 
@@ -129,6 +133,7 @@ const prospectView: ViewDef = {
   usesFilters: true,
   defaultK: 25,
   minCoverageOf: (info) => info.min_coverage.prospect,
+  poolReachOf: () => undefined,
   sections: (ctx) => [ctx.first.element, outlookBox],
   async run(ctx) {
     needPlayer(ctx.first);
@@ -176,6 +181,7 @@ const cheaperView: ViewDef = {
   usesFilters: true,
   defaultK: 10,
   minCoverageOf: (info) => info.min_coverage.cheaper,
+  poolReachOf: (info) => info.pool_reach.cheaper,
   sections: (ctx) => [ctx.first.element, salaryBox],
   async run(ctx) {
     needPlayer(ctx.first);
@@ -187,6 +193,7 @@ const cheaperView: ViewDef = {
     const note = `Salary limit ${usd(s.limit_usd)}${s.target_salary_usd !== null ? ` (his salary ${usd(s.target_salary_usd)})` : ''}: ${formatCount(s.under_limit)} player-seasons under it, ${formatCount(s.over_limit)} over, ${formatCount(s.without_salary)} without a known salary.`;
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {
       note,
+      poolChoice: ctx.filters.choice(),
       extra: [
         { title: 'Salary (USD)', csv: 'salary_usd', value: (c) => cheaperOf(c)?.salary_usd ?? null, shown: (v) => (typeof v === 'number' ? usd(v) : String(v)) },
         { title: 'Value (0-100)', csv: 'value_score', value: (c) => cheaperOf(c)?.value_score ?? null, shown: (v) => (typeof v === 'number' ? formatDecimal(v, 1) : String(v)) },
@@ -209,6 +216,7 @@ const matchView: ViewDef = {
   usesFilters: true,
   defaultK: 10,
   minCoverageOf: (info) => info.min_coverage.match,
+  poolReachOf: (info) => info.pool_reach.match,
   sections: (ctx) => [ctx.first.element, ctx.second.element],
   async run(ctx) {
     needPlayer(ctx.first);
@@ -227,6 +235,7 @@ const matchView: ViewDef = {
       raw: result,
       headline: `${result.query.name ?? 'The target profile'} against ${c.name}`,
       note,
+      poolChoice: ctx.filters.choice(),
       extra: [
         { title: 'Role', csv: 'role', value: (x) => (candidateOf(x) ? 'candidate' : 'closest in pool') },
         { title: 'Percentile', csv: 'percentile', value: (x) => candidateOf(x)?.percentile ?? null },

@@ -13,6 +13,8 @@ import type { CompsResult } from '../../src/query/CompsResult.ts';
 import { buildDemoStore, tempDir } from '../server/serverFixture.ts';
 import { ensureWebBuilt } from './ensureWebBuilt.ts';
 import { findBrowser } from '../helpers/findBrowser.ts';
+import { poolPositions } from '../../src/query/adjacentPositions.ts';
+import { defaultOf } from '../../src/request/parameters.ts';
 
 const ARTIFACTS = join(process.cwd(), 'tests', '.artifacts');
 
@@ -218,9 +220,49 @@ describe('the comps view', () => {
   });
 });
 
+describe('the pool controls', () => {
+  it('show each job\'s own default reach (cheaper: his level, his season and the 2 before) and none for the prospect outlook', async () => {
+    await openView('cheaper');
+    expect(await page.inputValue('#opt-level-span')).toBe(String(defaultOf('levelSpan', 'cheaper')));
+    expect(await page.inputValue('#opt-recent')).toBe(String(defaultOf('recent', 'cheaper')));
+    expect(await page.inputValue('#opt-sample-floor')).toBe(String(defaultOf('sampleFloor', 'cheaper')));
+    expect(await page.isChecked('#opt-adjacent')).toBe(defaultOf('adjacent', 'cheaper'));
+    await openView('comps');
+    expect(await page.inputValue('#opt-level-span')).toBe(String(defaultOf('levelSpan', 'comps')));
+    expect(await page.inputValue('#opt-recent')).toBe('all');
+    await openView('prospect');
+    expect(await page.locator('#pool-reach').isHidden()).toBe(true);
+  });
+
+  it('send the positions next to his, the levels around his, the least playing time and the seasons back, and say how the pool was chosen', async () => {
+    await openView('comps');
+    const g = store.groups.get('IF');
+    const ss = uniquePlayer('IF', (i) => g?.position[i] === 'SS' && store.levels[g.level[i] as number] === 'High' && (g?.season[i] ?? 0) >= 2015);
+    await pick('player', ss);
+    await page.check('#opt-adjacent');
+    await page.selectOption('#opt-level-span', '0');
+    await page.fill('#opt-sample-floor', '0.25');
+    await page.selectOption('#opt-recent', '5');
+    await page.click('#run');
+    // the sentence on how the pool was chosen is drawn with this answer only
+    await page.waitForFunction(() => document.querySelector('#pool-choice')?.textContent?.includes('next to it') === true);
+    const [csvDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
+    const shown = JSON.parse(await readFile(await csvDownload.path(), 'utf8')) as CompsResult;
+    expect(shown.pool.filters.positions).toEqual(poolPositions('SS', true));
+    expect(shown.pool.filters.levels).toEqual(['High']);
+    expect(shown.pool.filters.season_from).toBe(ss.season - 4);
+    expect(shown.pool.sample_floor?.share).toBe(0.25);
+    const expected = await api(`/api/comps?player=${ss.id}&season=${ss.season}&level=High&position=SS&adjacent=true&level-span=0&sample-floor=0.25&recent=5`);
+    expect(await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents()).toEqual(expected.comps.map((c) => c.name));
+    const choice = (await page.textContent('#pool-choice')) ?? '';
+    expect(choice).toBe('Chosen by: his position and the ones next to it; his level only; his and the 4 before; at least 25% of his playing time.');
+    expect(choice).not.toMatch(/--|kindred\.|level-span|sample-floor/);
+  });
+});
+
 describe('the build-a-target view', () => {
   it('finds comps for a profile set in grades and natural units', async () => {
-    await page.click('nav button[data-view="target"]');
+    await openView('target');
     await page.selectOption('#want-position', 'SS');
     await page.waitForSelector('#want-grade-obp');
     await page.locator('#want-grade-obp').fill('65');
@@ -233,7 +275,7 @@ describe('the build-a-target view', () => {
     await page.waitForFunction(() => document.querySelector('#summary')?.textContent?.includes('hand-built SS profile') === true);
     await page.waitForSelector('#comps-table tbody tr');
     await page.waitForSelector('#map-chart svg');
-    const expected = await api(`/api/comps?want=${encodeURIComponent('k_pct=40g,obp=65g,iso=.180')}&position=SS&pool-level=Elite,Top&age=22-30`);
+    const expected = await api(`/api/comps?want=${encodeURIComponent('k_pct=40g,obp=65g,iso=.180')}&position=SS`);
     const names = await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents();
     expect(names).toEqual(expected.comps.map((c) => c.name));
     expect(await page.textContent('#summary')).toContain('hand-built SS profile');

@@ -1,12 +1,25 @@
 import type { PositionGroup } from '../../profiles/positionGroup.ts';
 import { WEIGHT_PRESETS } from '../../query/weightPresets.ts';
 import type { LoadedStore } from '../LoadedStore.ts';
-import type { StoreInfo } from '../../request/apiContract.ts';
+import type { PoolReachDefaults, ReachJob, StoreInfo } from '../../request/apiContract.ts';
 import { noParameters } from '../../request/readRequest.ts';
 import { defaultOf } from '../../request/parameters.ts';
 
 export type { StoreInfo } from '../../request/apiContract.ts';
 import type { Endpoint } from '../Endpoint.ts';
+
+/** A reach in JSON: a whole number, or null for no limit (the parameter's `all`). */
+const limit = (n: number | undefined): number | null => (n === undefined || !Number.isFinite(n) ? null : n);
+
+/** A job's default pool reach as the request table gives it. */
+function reachOf(job: ReachJob): PoolReachDefaults {
+  return {
+    adjacent: defaultOf('adjacent', job) ?? false,
+    level_span: limit(defaultOf('levelSpan', job)),
+    sample_floor: defaultOf('sampleFloor', job) ?? 0,
+    recent: limit(defaultOf('recent', job)),
+  };
+}
 
 /** `GET /api/info`: a summary of the loaded store. */
 export function answerInfo(loaded: LoadedStore, query: URLSearchParams): StoreInfo {
@@ -35,6 +48,7 @@ export function answerInfo(loaded: LoadedStore, query: URLSearchParams): StoreIn
       cheaper: defaultOf('minCoverage', 'cheaper') ?? 0,
       match: defaultOf('minCoverage', 'match') ?? 0,
     },
+    pool_reach: { comps: reachOf('comps'), cheaper: reachOf('cheaper'), match: reachOf('match') },
   };
 }
 
