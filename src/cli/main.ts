@@ -14,6 +14,7 @@ import { prospectCommand } from './commands/prospectCommand.ts';
 import { cheaperCommand } from './commands/cheaperCommand.ts';
 import { matchCommand } from './commands/matchCommand.ts';
 import { backtestCommand } from './commands/backtestCommand.ts';
+import { TERMINAL_COLUMNS } from '../report/terminalColumns.ts';
 
 /** Most input problems printed one per line before "and N more". */
 const MAX_ISSUES_SHOWN = 50;
@@ -29,13 +30,15 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
     .version('0.1.0')
     .exitOverride()
     .showSuggestionAfterError(true)
-    .configureOutput({ writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s) });
+    .configureOutput({ writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s) })
+    .configureHelp({ helpWidth: TERMINAL_COLUMNS });
   const setExit = (code: number): void => {
     exitCode = code;
   };
   const commands = [buildCommand(io), compsCommand(io, setExit), dimsCommand(io), demoCommand(io), serveCommand(io), embeddingCommand(io), prospectCommand(io, setExit), cheaperCommand(io, setExit), matchCommand(io, setExit), backtestCommand(io)];
   for (const c of commands) {
-    c.exitOverride().configureOutput({ writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s) });
+    // help is wrapped at the width every table keeps to, whatever the terminal (or none, when piped)
+    c.exitOverride().configureOutput({ writeOut: (s) => io.stdout.write(s), writeErr: (s) => io.stderr.write(s) }).configureHelp({ helpWidth: TERMINAL_COLUMNS });
     program.addCommand(c);
   }
   try {
@@ -62,7 +65,9 @@ function report(e: unknown, io: CliIo): number {
     return e.exitCode;
   }
   if (e instanceof KindredError) {
-    io.stderr.write(`kindred: ${e.message} [${e.code}]\n`);
+    const candidates = e.context['candidates'];
+    const rows = Array.isArray(candidates) ? candidates.map((c) => `  ${c}\n`).join('') : '';
+    io.stderr.write(`kindred: ${e.message} [${e.code}]\n${rows}`);
     return e.exitCode;
   }
   io.stderr.write(`kindred: unexpected failure: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}\n`);

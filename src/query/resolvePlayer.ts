@@ -1,11 +1,13 @@
 import { QueryError } from '../errors/KindredError.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
+import { editDistance } from './didYouMean.ts';
 
 const fold = (s: string): string => s.normalize('NFD').replace(/\p{Diacritic}/gu, '').toLowerCase().trim();
 
 /**
  * A player by id or by name: an exact id, else an exact name (accents and case ignored), else every
- * name containing the text. No match or several matches are a QueryError that lists candidates.
+ * name containing the text. No match or several matches are a QueryError whose `candidates` (rows of
+ * a short table: id, name, birth date) are the near names or the first matches; the CLI prints them one a line.
  * @returns the player's index in the store
  */
 export function resolvePlayer(store: ProfileStore, text: string): number {
@@ -23,28 +25,55 @@ export function resolvePlayer(store: ProfileStore, text: string): number {
   const hits = exact.length > 0 ? exact : partial;
   const only = hits[0];
   if (hits.length === 1 && only !== undefined) return only;
-  const describe = (i: number): string => {
-    const p = store.players[i];
-    return p ? `${p.playerId} ${p.name}${p.birthDate ? ` (born ${p.birthDate})` : ''}` : String(i);
-  };
   if (hits.length === 0) {
-    const words = wanted.split(/\s+/).filter((w) => w.length >= 3);
-    const near: number[] = [];
-    store.players.forEach((p, i) => {
-      if (near.length < 8 && words.some((w) => fold(p.name).includes(w))) near.push(i);
-    });
-    const hint = near.length > 0 ? `; players with part of that name: ${near.map(describe).join('; ')}` : '';
+    const near = nearNames(store, wanted, MAX_CANDIDATES);
+    const hint = near.length > 0 ? '; did you mean one of these? (pass his id)' : '';
     throw new QueryError('kindred.query.unknownPlayer', `no player matches "${text}"${hint}`, {
       value: text,
-      candidates: near.map(describe),
+      candidates: candidateRows(store, near),
     });
   }
-  const shown = hits.slice(0, 12).map(describe);
-  throw new QueryError(
-    'kindred.query.ambiguousPlayer',
-    `"${text}" matches ${hits.length} players; pass a player id: ${shown.join('; ')}${hits.length > 12 ? '; ...' : ''}`,
-    { value: text, candidates: shown },
-  );
+  const shown = hits.slice(0, MAX_CANDIDATES);
+  const more = hits.length > shown.length ? ` (${shown.length} shown)` : '';
+  throw new QueryError('kindred.query.ambiguousPlayer', `"${text}" matches ${hits.length} players; pass a player id${more}`, {
+    value: text,
+    candidates: candidateRows(store, shown),
+  });
+}
+
+/** Most candidates an unknown or ambiguous name lists. */
+export const MAX_CANDIDATES = 12;
+
+/**
+ * Players whose name is near the text: a name word containing a word of the text (3 letters or more),
+ * or within the edit distance didYouMean allows (a third of the word's length: "Varnsk" finds
+ * "Varnosk"), closest first, then by name.
+ */
+function nearNames(store: ProfileStore, wanted: string, limit: number): number[] {
+  const words = wanted.split(/\s+/).filter((w) => w.length >= 3);
+  const scored: { i: number; d: number; name: string }[] = [];
+  store.players.forEach((p, i) => {
+    const nameWords = fold(p.name).split(/\s+/);
+    let best = Infinity;
+    for (const w of words) {
+      const allowed = Math.max(1, Math.floor(w.length / 3));
+      for (const n of nameWords) {
+        const d = n.includes(w) ? 0 : editDistance(w, n);
+        if (d <= allowed) best = Math.min(best, d);
+      }
+    }
+    if (best < Infinity) scored.push({ i, d: best, name: p.name });
+  });
+  scored.sort((a, b) => a.d - b.d || a.name.localeCompare(b.name));
+  return scored.slice(0, limit).map((x) => x.i);
+}
+
+/** The candidates as rows of a short table: id, name and birth date in aligned columns. */
+function candidateRows(store: ProfileStore, players: readonly number[]): string[] {
+  const rows = players.map((i) => store.players[i]).filter((p) => p !== undefined);
+  const idWidth = Math.max(0, ...rows.map((p) => p.playerId.length));
+  const nameWidth = Math.max(0, ...rows.map((p) => p.name.length));
+  return rows.map((p) => `${p.playerId.padEnd(idWidth)}  ${p.birthDate ? `${p.name.padEnd(nameWidth)}  born ${p.birthDate}` : p.name}`);
 }
 
 /** Up to `limit` players whose name contains the text (for suggestions as you type). */

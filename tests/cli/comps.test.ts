@@ -70,7 +70,9 @@ describe('kindred comps <player> --format json', () => {
     const first = catcher.name.slice(0, 2);
     const out = await runCli('comps', first, '--store', store);
     expect(out.code).toBe(1);
-    expect(out.stderr).toMatch(/matches \d+ players; pass a player id: p\d+/);
+    expect(out.stderr).toMatch(/matches \d+ players; pass a player id/);
+    // a short table, one candidate a line under the message: id, name, birth date
+    expect(out.stderr.split('\n').filter((l) => /^ {2}p\d+ {2}\S/.test(l)).length).toBeGreaterThan(1);
     expect(out.stderr).toContain('kindred.query.ambiguousPlayer');
   });
 

@@ -4,7 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { rm } from 'node:fs/promises';
-import { resolvePlayer } from '../../src/query/resolvePlayer.ts';
+import { MAX_CANDIDATES, resolvePlayer } from '../../src/query/resolvePlayer.ts';
 import { KindredError } from '../../src/errors/KindredError.ts';
 import { simStore, type SimStore } from '../helpers/simStore.ts';
 
@@ -15,6 +15,16 @@ beforeAll(async () => {
 afterAll(async () => {
   await rm(s.dir, { recursive: true, force: true });
 });
+
+function errorOf(f: () => unknown): KindredError {
+  try {
+    f();
+  } catch (e) {
+    if (e instanceof KindredError) return e;
+    throw e;
+  }
+  throw new Error('no error');
+}
 
 function codeOf(f: () => unknown): string {
   try {
@@ -67,5 +77,33 @@ describe('resolvePlayer(store, text)', () => {
     expect(codeOf(() => resolvePlayer(s.store, common))).toBe('kindred.query.ambiguousPlayer');
     expect(codeOf(() => resolvePlayer(s.store, 'Qqxzv Wwjjk'))).toBe('kindred.query.unknownPlayer');
     expect(codeOf(() => resolvePlayer(s.store, '   '))).toBe('kindred.query.unknownPlayer');
+  });
+
+  it('offers the players one edit away from an unknown name (a surname with a letter dropped), as rows of id, name and birth date', () => {
+    const p = s.store.players.find((x) => (x.name.split(' ')[1] ?? '').length >= 6);
+    if (!p) throw new Error('no long surname');
+    const surname = p.name.split(' ')[1] ?? '';
+    const typo = surname.slice(0, 2) + surname.slice(3);
+    const e = errorOf(() => resolvePlayer(s.store, typo));
+    expect(e.code).toBe('kindred.query.unknownPlayer');
+    expect(e.message).toContain('did you mean');
+    const rows = e.context['candidates'];
+    if (!Array.isArray(rows)) throw new Error('no candidates');
+    expect(rows.length).toBeGreaterThan(0);
+    expect(rows.length).toBeLessThanOrEqual(MAX_CANDIDATES);
+    // every candidate's surname is within one edit of the typo (Levenshtein 1966), and ours is among them
+    expect(rows.some((r) => r.startsWith(`${p.playerId} `))).toBe(true);
+  });
+
+  it('lists an ambiguous name\'s first matches as aligned rows (id, name, birth date), at most MAX_CANDIDATES', () => {
+    const e = errorOf(() => resolvePlayer(s.store, 'a'));
+    expect(e.code).toBe('kindred.query.ambiguousPlayer');
+    expect(e.message).toMatch(/matches \d+ players; pass a player id \(\d+ shown\)$/);
+    const rows = e.context['candidates'];
+    if (!Array.isArray(rows)) throw new Error('no candidates');
+    expect(rows).toHaveLength(MAX_CANDIDATES);
+    const nameStart = new Set(rows.map((r) => r.search(/ {2}\S/) + 2));
+    expect(nameStart.size).toBe(1);
+    for (const r of rows) expect(r).toMatch(/^p\d+ +\S.* {2}born \d{4}-\d{2}-\d{2}$/);
   });
 });
