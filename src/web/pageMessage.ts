@@ -43,6 +43,29 @@ export function pageMessage(e: unknown): string {
   if (e.status === 0) return 'The server gave an answer this page cannot read; reload the page.';
   const p = e.parameter;
   const prefix = p === undefined ? '' : `parameter ${p}: `;
-  if (p !== undefined && e.message.startsWith(prefix)) return `${FIELD_LABELS[p] ?? p}: ${e.message.slice(prefix.length)}`;
-  return e.message.charAt(0).toUpperCase() + e.message.slice(1);
+  if (p !== undefined && e.message.startsWith(prefix)) return `${FIELD_LABELS[p] ?? p}: ${inPageWords(e.message.slice(prefix.length))}`;
+  const text = inPageWords(e.message);
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/**
+ * A server text (an error, the outlook's calibration note) in the page's words: an option named as
+ * `--name` becomes its field's label in quotes, and a hint in brackets about a command to run is left
+ * out (the page has no commands).
+ *
+ * @example
+ * inPageWords('calibration not applied: the backtest used --horizon 6');
+ * // => 'calibration not applied: the backtest used "Follow-up" 6'
+ * inPageWords('no backtest stored with this store (kindred build stores one; kindred backtest runs one)');
+ * // => 'no backtest stored with this store'
+ */
+export function inPageWords(text: string): string {
+  return text
+    .replace(/\s*\([^()]*\bkindred [a-z]+[^()]*\)/g, '')
+    .replace(/(?:no )?--([a-z][a-z0-9-]*)/g, (whole: string, name: string) => {
+      const label = FIELD_LABELS[name];
+      if (label === undefined) return name.replaceAll('-', ' ');
+      return whole.startsWith('no ') ? `no "${label}"` : `"${label}"`;
+    })
+    .replace(/\bkindred (build|backtest|serve)\b/g, 'the store\u2019s build');
 }

@@ -53,6 +53,13 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
   const extraTitle = h('figcaption', {});
   const extraChartBox = h('div', { class: 'chart', id: 'extra-chart' });
   const extraChart = h('figure', { class: 'extra', hidden: '' }, extraTitle, extraChartBox);
+  // hidden until an answer is drawn: no caption above an empty chart (the landing page, after an error)
+  const charts = h(
+    'div',
+    { class: 'charts', hidden: '' },
+    h('figure', {}, gradeTitle, gradeChart),
+    h('figure', {}, h('figcaption', {}, 'The pool on its two main axes (PCA of the z-scores)'), mapChart),
+  );
   const element = h(
     'section',
     { class: 'results', 'aria-live': 'polite' },
@@ -60,12 +67,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
     h('div', { class: 'toolbar' }, csvButton, jsonButton),
     h('div', { class: 'table-wrap' }, table),
     extraChart,
-    h(
-      'div',
-      { class: 'charts' },
-      h('figure', {}, gradeTitle, gradeChart),
-      h('figure', {}, h('figcaption', {}, 'The pool on its two main axes (PCA of the z-scores)'), mapChart),
-    ),
+    charts,
   );
   let current: { result: CompsResult; extra: readonly ExtraColumn[]; raw: unknown } | null = null;
 
@@ -104,6 +106,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
       extraChartBox.replaceChildren();
       extraTitle.textContent = '';
       extraChart.hidden = true;
+      charts.hidden = true;
       csvButton.disabled = true;
       jsonButton.disabled = true;
     },
@@ -166,6 +169,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
       if (q.kind === 'player' && q.player_id !== null && q.season !== null && q.level !== null) {
         highlights.push({ playerId: q.player_id, season: q.season, level: q.level, role: 'target', rank: null });
       }
+      charts.hidden = false;
       const drawMap = fetchMap(q.group).then((map) => renderChart(mapChart, poolMapSpec(map, highlights), `map of the ${q.group} pool with the target and comps`));
       const chart = options.chart;
       const drawExtra = chart

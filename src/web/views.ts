@@ -2,6 +2,7 @@ import type { DimensionInfo } from '../request/apiContract.ts';
 import type { PoolReachDefaults, StoreInfo } from '../request/apiContract.ts';
 import { fetchCheaper, fetchComps, fetchMatch, fetchProspect } from './api.ts';
 import { h } from './dom.ts';
+import { inPageWords } from './pageMessage.ts';
 import { frontierChartSpec } from './frontierChartSpec.ts';
 import { outcomeChartSpec, peakMeasure, peakOf } from './outcomeChartSpec.ts';
 import type { CheaperComp, MatchCandidate, ProspectComp } from '../request/apiContract.ts';
@@ -149,7 +150,7 @@ const prospectView: ViewDef = {
     const bt = c?.backtest;
     const calibrated = c && bt
       ? ` Calibrated on this roster's history: ${pct(c.reached_top_level)} reach the top level; ${m.label} ${c.peak.p10 === null || c.peak.p90 === null ? 'unknown' : `${formatWhole(c.peak.p10)} to ${formatWhole(c.peak.p90)}`}, a range meant to hold ${pct(c.range_coverage)} of outcomes. Replayed at ${bt.cuts[0] ?? ''}-${bt.cuts[bt.cuts.length - 1] ?? ''}, such ranges held ${pct(c.peak.coverage)} of realised values, with a Brier skill of ${formatSigned(bt.skill_vs_level_age.value, 2)} against the level-and-age base rate.`
-      : ` No calibrated outlook: ${o.calibration_note ?? 'no backtest stored'}.`;
+      : ` No calibrated outlook: ${inPageWords(o.calibration_note ?? 'no replay of this roster\u2019s history stored')}.`;
     const warned = (result.warnings ?? []).map((w) => `${w} `).join('');
     const note = `${warned}Outlook over ${o.horizon_seasons} seasons from ${o.comps_used} comps (${o.comps_censored} left out, follow-up not over): ${pct(o.reached_top_level)} reached the top level, against a base rate of ${pct(o.baseline.reached_top_level)} for ${formatCount(o.baseline.player_seasons)} player-seasons at that level and age.${calibrated} A record of similar players, not a forecast of this one.`;
     await ctx.results.show(result, ctx.dimsByGroup.get(result.query.group) ?? [], {

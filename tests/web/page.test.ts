@@ -128,6 +128,16 @@ afterAll(async () => {
   await remove();
 });
 
+describe('the landing page', () => {
+  it('shows no chart caption above an empty chart, on every job before it runs', async () => {
+    for (const view of ['comps', 'target', 'prospect', 'cheaper', 'match']) {
+      await openView(view);
+      expect(await page.locator('figcaption:visible').count(), view).toBe(0);
+    }
+    await openView('comps');
+  });
+});
+
 describe('the comps view', () => {
   it('suggests players as a name is typed and shows the chosen one\'s comps, table and charts', async () => {
     const who = uniqueCatcher();
@@ -204,6 +214,7 @@ describe('the comps view', () => {
     expect(message).toMatch(/^Weights: no dimension "obpp" \(did you mean obp\?\)/);
     expect(message).not.toMatch(/--|kindred\./);
     expect(await page.textContent('figure:has(#grade-chart) figcaption')).toBe('Grades by dimension');
+    expect(await page.locator('figcaption:visible').count()).toBe(0);
     await page.fill('#opt-weights', '');
   });
 
