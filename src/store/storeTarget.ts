@@ -44,7 +44,7 @@ export async function checkStoreTarget(dir: string): Promise<string> {
   if (entries.length === 0) return target;
   const listed = await storeFilesOf(target);
   if (!listed) {
-    throw writeFailed(target, `the folder holds ${entries.length} entries but no ${MANIFEST_NAME} of a Kindred store (expected a store folder or an empty one)`);
+    throw writeFailed(target, `the folder holds ${entries.length} ${entries.length === 1 ? 'entry' : 'entries'} but no ${MANIFEST_NAME} of a Kindred store (expected a store folder or an empty one)`);
   }
   const foreign = entries.filter((e) => e !== MANIFEST_NAME && e !== BACKTEST_FILE && !listed.has(e));
   if (foreign.length > 0) {
