@@ -71,6 +71,8 @@ export interface QueryEcho {
   readonly k: number;
   readonly method: 'hnsw' | 'exact';
   readonly space: 'input' | 'pca' | 'autoencoder';
+  /** Why a group with a learned space was answered in the input space (other weights than the default); absent otherwise. */
+  readonly space_note?: string;
 }
 
 export interface PoolEcho {

@@ -73,13 +73,19 @@ export function findCompsWithRows(store: ProfileStore, target: Target, options: 
   return compsOf(prepareQuery(store, target, options), options);
 }
 
+/** What a comps answer says when the store's learned space could not take the weights asked for. */
+export const LEARNED_SPACE_NOTE = 'the store\u2019s learned space takes only the default weights, not these';
+
 /** The comps of a prepared query (findComps after prepareQuery): search, rank, describe, echo. */
 export function compsOf(q: PreparedQuery, options: CompsOptions): { result: CompsResult; rows: number[] } {
   const space = querySpace(q, options.space);
   const { ranked, usedIndex } = searchRanked(q, space, options);
   const comps = ranked.map((s, i) => describeComp(q, s, i + 1, { space, attributions: options.attributions !== false }));
   const result: CompsResult = {
-    query: echoQuery(q, options.k, usedIndex ? 'hnsw' : 'exact', space ? space.embedding.space : 'input'),
+    query: {
+      ...echoQuery(q, options.k, usedIndex ? 'hnsw' : 'exact', space ? space.embedding.space : 'input'),
+      ...(!space && q.group.embedding && options.space !== 'input' ? { space_note: LEARNED_SPACE_NOTE } : {}),
+    },
     pool: echoPool(q),
     comps,
   };

@@ -4,6 +4,7 @@ import type { CompsResult } from '../query/CompsResult.ts';
 import { formatValue } from './formatValue.ts';
 import { playingTimeCells, playingTimeHeads } from './playingTime.ts';
 import { seasonSpan } from './seasonSpan.ts';
+import { wrapText } from './wrapText.ts';
 
 const PLAIN = {
   top: '', 'top-mid': '', 'top-left': '', 'top-right': '',
@@ -18,7 +19,7 @@ export function describeTarget(result: CompsResult): string {
   const who = q.kind === 'player' ? `${q.name} (${q.player_id}), ${seasonSpan(q)} ${q.level} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
   const rows = q.window === undefined ? 'player-seasons' : `windows of ${q.window} seasons (his last ${q.window} at a level, events added up)`;
   const pool = `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} ${rows} in the pool`;
-  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space\nPool: ${result.pool.summary}\n${describeShares(result)}`;
+  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space\n${q.space_note ? `${wrapText(`Note: ranked in the input space: ${q.space_note}.`).join('\n')}\n` : ''}Pool: ${result.pool.summary}\n${describeShares(result)}`;
 }
 
 /** The weight of each skill family in one line, e.g. `Weights (balanced): discipline 20%, contact 15%, ...`. */

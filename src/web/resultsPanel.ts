@@ -119,6 +119,7 @@ export function resultsPanel(fileStem: () => string): ResultsPanel {
         options.headline !== undefined ? h('p', {}, h('strong', {}, options.headline)) : h('p', {}, h('strong', {}, `${formatCount(result.comps.length)} ${result.comps.length === 1 ? 'comp' : 'comps'}`), ` for ${who}`),
         h('p', { class: 'meta' }, `${formatCount(result.pool.eligible)} of ${formatCount(result.pool.group_size)} ${q.group} player-seasons in the pool · searched ${q.method === 'hnsw' ? 'with the index' : 'exactly'}`),
         h('p', { class: 'meta', id: 'pool-rules' }, `Pool: ${result.pool.summary}`),
+        ...(q.space_note ? [h('p', { class: 'meta' }, `Comps ranked in the input space: ${q.space_note}.`)] : []),
         ...(options.poolChoice ? [h('p', { class: 'meta', id: 'pool-choice' }, options.poolChoice)] : []),
         ...(options.note ? [h('p', { class: 'note', id: 'result-note' }, options.note)] : []),
       );

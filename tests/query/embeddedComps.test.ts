@@ -12,7 +12,7 @@ import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
-import { DEFAULT_COMPS_OPTIONS, findCompsWithRows } from '../../src/query/findComps.ts';
+import { DEFAULT_COMPS_OPTIONS, findCompsWithRows, LEARNED_SPACE_NOTE } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { embeddingModelFromJSON } from '../../src/embed/EmbeddingModel.ts';
@@ -37,6 +37,16 @@ afterAll(async () => {
 });
 
 describe('findComps in a PCA space', () => {
+  it('says why a preset other than the default is answered in the input space, and says nothing for the default', () => {
+    const target = playerTarget(store, { group: 'SP', row: 0 });
+    const asked = findCompsWithRows(store, target, { ...DEFAULT_COMPS_OPTIONS, k: 5, preset: 'stuff' }).result.query;
+    expect(asked.space).toBe('input');
+    expect(asked.space_note).toBe(LEARNED_SPACE_NOTE);
+    const plain = findCompsWithRows(store, target, { ...DEFAULT_COMPS_OPTIONS, k: 5 }).result.query;
+    expect(plain.space).toBe('pca');
+    expect(plain).not.toHaveProperty('space_note');
+  });
+
   it('ranks exactly as a brute-force scan of the re-encoded pool, one season per player', async () => {
     const g = store.groups.get('SP');
     if (!g?.embedding) throw new Error('no SP embedding');
