@@ -126,10 +126,10 @@ export function filtersForm(info: StoreInfo): FiltersForm {
       if (reachBox.hidden) return undefined;
       const floor = Number(sampleFloor.value);
       const parts = [
-        adjacent.checked ? 'his position and the ones next to it' : 'his position',
-        checked('pool-level').length > 0 ? 'the levels ticked' : wordsOf(LEVEL_SPANS, levelSpan.value),
-        value('opt-seasons-from') || value('opt-seasons-to') ? 'the seasons typed' : wordsOf(RECENT, recent.value),
-        sampleFloor.value.trim() === '' || floor === 0 ? 'any playing time' : `at least ${Math.round(floor * 100)}% of his playing time`,
+        `positions: ${adjacent.checked ? 'his and the ones next to it' : 'his'}`,
+        `levels: ${checked('pool-level').length > 0 ? 'the ones ticked' : wordsOf(LEVEL_SPANS, levelSpan.value)}`,
+        `seasons: ${value('opt-seasons-from') || value('opt-seasons-to') ? 'the ones typed' : wordsOf(RECENT, recent.value)}`,
+        `playing time: ${sampleFloor.value.trim() === '' || floor === 0 ? 'any' : `at least ${Math.round(floor * 100)}% of his`}`,
       ];
       return `Chosen by: ${parts.join('; ')}.`;
     },

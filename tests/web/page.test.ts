@@ -266,7 +266,7 @@ describe('the pool controls', () => {
     const expected = await api(`/api/comps?player=${ss.id}&season=${ss.season}&level=High&position=SS&adjacent=true&level-span=0&sample-floor=0.25&recent=5`);
     expect(await page.locator('#comps-table tbody tr td:nth-child(2)').allTextContents()).toEqual(expected.comps.map((c) => c.name));
     const choice = (await page.textContent('#pool-choice')) ?? '';
-    expect(choice).toBe('Chosen by: his position and the ones next to it; his level only; his and the 4 before; at least 25% of his playing time.');
+    expect(choice).toBe('Chosen by: positions: his and the ones next to it; levels: his level only; seasons: his and the 4 before; playing time: at least 25% of his.');
     expect(choice).not.toMatch(/--|kindred\.|level-span|sample-floor/);
   });
 });
