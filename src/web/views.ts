@@ -239,7 +239,7 @@ const matchView: ViewDef = {
       poolChoice: ctx.filters.choice(),
       extra: [
         { title: 'Role', csv: 'role', value: (x) => (candidateOf(x) ? 'candidate' : 'closest in pool') },
-        { title: 'Percentile', csv: 'percentile', value: (x) => candidateOf(x)?.percentile ?? null },
+        { title: 'More alike than', csv: 'percentile', value: (x) => candidateOf(x)?.percentile ?? null, shown: (v) => (typeof v === 'number' ? `${formatWhole(v)}% of the pool` : String(v)) },
       ],
     });
   },

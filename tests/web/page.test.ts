@@ -362,6 +362,8 @@ describe('the one-to-one view', () => {
     expect(names[0]).toBe(expected.candidate.name);
     if (expected.closest && expected.closest.name !== expected.candidate.name) expect(names[1]).toBe(expected.closest.name);
     expect(await page.textContent('#result-note')).toContain(`more alike than ${expected.candidate.percentile.toFixed(0)}%`);
+    // a percentile reads as a whole share of the pool, not as a bare figure with a decimal
+    expect(await page.locator('#comps-table tbody tr').first().locator('td[data-label="More alike than"]').textContent()).toMatch(/^\d{1,3}% of the pool$/);
     expect(await page.locator('#grade-chart svg .mark-symbol.role-mark path').count()).toBeGreaterThan(2);
     const [jsonDownload] = await Promise.all([page.waitForEvent('download'), page.click('#export-json')]);
     expect(JSON.parse(await readFile(await jsonDownload.path(), 'utf8'))).toEqual(expected);
