@@ -97,8 +97,9 @@ export async function loadColumnMap(path: string): Promise<ColumnMap> {
           const what = at === '' ? 'a known key' : at === 'files' || at === 'columns' ? 'a roster file' : `a column of ${at.slice('columns.'.length)}`;
           return issue.keys.map((k) => ({ key: where + k, value: k, expected: `${what}: one of ${known.join(', ')}` }));
         }
-        if (issue.code === 'invalid_type') return [{ key: at, value: '', expected: `${issue.expected === 'object' ? 'an object of names' : 'a name as text'} (${issue.message})` }];
-        return [{ key: at, value: '', expected: issue.message }];
+        const given = shownValue(json, issue.path);
+        if (issue.code === 'invalid_type') return [{ key: at, value: given, expected: `${issue.expected === 'object' ? 'an object of names' : 'a name as text'} (${issue.message})` }];
+        return [{ key: at, value: given, expected: issue.message }];
       }),
     );
   }
@@ -171,4 +172,15 @@ function mapError(source: ColumnMapSource, problems: readonly MapProblem[]): Inp
   const first = issues[0];
   const summary = first === undefined ? `${source.path}: bad column map` : `bad column map: ${formatIssue(first)}`;
   return new InputError(issues, summary);
+}
+
+/** The value the map gives at a path, as JSON text (`3`, `[]`), so that a refused value is shown as written. */
+function shownValue(json: unknown, path: readonly PropertyKey[]): string {
+  let v: unknown = json;
+  for (const k of path) v = isObject(v) && typeof k !== 'symbol' ? v[String(k)] : undefined;
+  return v === undefined ? '' : typeof v === 'string' ? v : JSON.stringify(v);
+}
+
+function isObject(v: unknown): v is Readonly<Record<string, unknown>> {
+  return typeof v === 'object' && v !== null;
 }

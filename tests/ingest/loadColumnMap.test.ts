@@ -57,6 +57,8 @@ describe('loadColumnMap(path)', () => {
   it('refuses an empty name and a name that is not a string', async () => {
     const err = await mapError(JSON.stringify({ columns: { 'batting.csv': { PA: '', AB: 7 } } }));
     expect(err.issues.map((i) => i.field).sort()).toEqual(['columns.batting.csv.AB', 'columns.batting.csv.PA']);
+    // the refused value as the map wrote it (7), not an empty one
+    expect(err.issues.find((i) => i.field === 'columns.batting.csv.AB')?.value).toBe('7');
   });
   it('refuses two canonical columns mapped to one club column', async () => {
     const err = await mapError(JSON.stringify({ columns: { 'batting.csv': { H: 'hits', HR: 'hits' } } }));
