@@ -58,7 +58,8 @@ export function compsOptionsFrom(req: JobRequest, store: ProfileStore, target: T
     positions: positions ? 'pool-position' : 'adjacent',
   });
   return {
-    k: Math.min(req.need('k'), largestGroup(store)),
+    // the target's group is at most the largest, so only a k past it needs the other groups read
+    k: req.need('k') <= g.n ? req.need('k') : Math.min(req.need('k'), largestGroup(store)),
     exact: req.need('exact'),
     allSeasons: req.need('allSeasons'),
     filter,
