@@ -35,6 +35,11 @@ export class RecordReader<T extends ColumnTable> {
   private readonly fieldNames: readonly string[];
   private readonly seasonCol: Column | undefined;
   private readonly present: readonly boolean[];
+  /**
+   * Each team seen to its one-team list: a roster holds millions of records, and one shared string and
+   * list per team instead of one per record is a large part of the roster's memory.
+   */
+  private readonly teamLists = new Map<string, { readonly team: string; readonly list: readonly string[] }>();
 
   constructor(
     private readonly table: T,
@@ -118,9 +123,20 @@ export class RecordReader<T extends ColumnTable> {
       case 'level':
         this.level = this.lookups === undefined ? row.text(col) : this.lookups.level(row, col);
         return this.level;
-      case 'team':
-        this.team = row.textOpt(col);
-        return this.team === undefined ? [] : [this.team];
+      case 'team': {
+        const team = row.textOpt(col);
+        if (team === undefined) {
+          this.team = undefined;
+          return [];
+        }
+        let kept = this.teamLists.get(team);
+        if (kept === undefined) {
+          kept = { team, list: [team] };
+          this.teamLists.set(team, kept);
+        }
+        this.team = kept.team;
+        return kept.list;
+      }
       case 'choice': {
         const v = row.oneOf(col, l.allowed ?? new Set<string>(), spec.expected ?? `one of ${(spec.values ?? []).join(', ')}`);
         if (l === this.part) this.partValue = v;

@@ -21,7 +21,8 @@ export function defaultSeasonSpan(now: Date = new Date()): SeasonSpan {
  * (and the lines of those rejected there) and the known levels.
  */
 export class RosterLookups {
-  private readonly levelSet: ReadonlySet<string>;
+  /** Each known level to itself: every record of a level shares one string (a roster holds millions of records). */
+  private readonly levelSet: ReadonlyMap<string, string>;
   private readonly levelsExpected: string;
 
   constructor(
@@ -35,13 +36,16 @@ export class RosterLookups {
     /** False when players.csv could not be read (its problem is reported once; ids are not checked against it). */
     private readonly playersReadable = true,
   ) {
-    this.levelSet = new Set(levels);
+    this.levelSet = new Map(levels.map((l) => [l, l]));
     this.levelsExpected = `a known level: one of ${levels.join(', ')} (the levels of ${levelsFile ?? 'levels.csv'})`;
   }
 
   /** Reads a player_id that must be in players.csv. */
   player(row: RowReader, col: Column): string {
     const id = row.text(col);
+    // the id as players.csv gave it, so that every record of a player shares one string
+    const known = this.players.get(id)?.playerId;
+    if (known === id) return known;
     if (id === '' || this.players.has(id) || !this.playersReadable) return id;
     const rejectedAt = this.rejectedPlayers.get(id);
     const expected = rejectedAt === undefined
@@ -74,7 +78,9 @@ export class RosterLookups {
   /** Reads a level that must be in the known order. */
   level(row: RowReader, col: Column): string {
     const level = row.text(col);
-    if (level === '' || this.levelsFile === undefined || this.levelSet.has(level)) return level;
+    const known = this.levelSet.get(level);
+    if (known !== undefined) return known;
+    if (level === '' || this.levelsFile === undefined) return level;
     row.report('kindred.input.badValue', col, level, this.levelsExpected);
     return level;
   }

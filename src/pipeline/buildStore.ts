@@ -20,6 +20,7 @@ import type { PositionGroup } from '../profiles/positionGroup.ts';
 import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.ts';
 import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
 import { stageCharts } from './stageCharts.ts';
+import { collectGarbage } from './collectGarbage.ts';
 import { computeOutcomes } from '../outlook/computeOutcomes.ts';
 
 /** The windows (in seasons) a build makes profiles over when none are asked for. */
@@ -147,6 +148,8 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
   const started = performance.now();
   const progress: ProgressFn = options.onProgress ?? (() => {});
   const read = await readAndProfile(rosterDir, storeDir, options, progress);
+  // the parsed roster is garbage now: collect it before the index phase allocates
+  collectGarbage();
   const { playerIndex, levels, rejectsPath } = read;
   const skipped = read.skipped;
   /** Groups still to write; each is dropped once its files are written and its index vectors handed over. */

@@ -21,11 +21,12 @@ export function eligibleRows(
   filter: PoolFilter,
   excludePlayers: ReadonlySet<number>,
 ): { mask: Uint8Array; count: number } {
-  const mask = new Uint8Array(g.n);
+  const n = g.n;
+  const mask = new Uint8Array(n);
   if (isEmptyFilter(filter)) {
     // the common case, a pool of everyone but the target: a fill and the excluded players' rows
     mask.fill(1);
-    let count = g.n;
+    let count = n;
     const byPlayer = rowsByPlayer(g);
     for (const p of excludePlayers) {
       for (const r of byPlayer.get(p) ?? []) {
@@ -35,33 +36,68 @@ export function eligibleRows(
     }
     return { mask, count };
   }
-  const levelSet = filter.levels ? new Set(filter.levels.map((l) => store.levels.indexOf(l))) : null;
-  const posSet = filter.positions ? new Set(filter.positions) : null;
-  const batsSet = filter.bats ? new Set(filter.bats) : null;
-  const throwsSet = filter.throws ? new Set(filter.throws) : null;
+  const passes = rowTest(store, g, filter, excludePlayers);
   let count = 0;
-  for (let i = 0; i < g.n; i++) {
-    const p = g.player[i] as number;
-    if (excludePlayers.has(p)) continue;
-    if (levelSet && !levelSet.has(g.level[i] as number)) continue;
-    const season = g.season[i] as number;
-    if (filter.seasonFrom !== undefined && season < filter.seasonFrom) continue;
-    if (filter.seasonTo !== undefined && season > filter.seasonTo) continue;
-    const age = g.age[i] as number;
-    if (filter.ageMin !== undefined && !(age >= filter.ageMin)) continue;
-    if (filter.ageMax !== undefined && !(age <= filter.ageMax)) continue;
-    if (posSet && !posSet.has(g.position[i] ?? 'DH')) continue;
-    if (filter.minSample !== undefined && !((g.sample[i] ?? 0) >= filter.minSample)) continue;
-    if (batsSet || throwsSet) {
-      const pl = store.players[p];
-      if (batsSet && !(pl?.bats && batsSet.has(pl.bats))) continue;
-      if (throwsSet && !(pl?.throws && throwsSet.has(pl.throws))) continue;
-    }
-    if (filter.include && !filter.include(i)) continue;
+  for (let i = 0; i < n; i++) {
+    if (!passes(i)) continue;
     mask[i] = 1;
     count++;
   }
   return { mask, count };
+}
+
+/** Whether any row of the group passes the filter (eligibleRows(...).count > 0, stopping at the first). */
+export function hasEligibleRow(store: PoolStore, g: PoolRows, filter: PoolFilter, excludePlayers: ReadonlySet<number>): boolean {
+  const passes = isEmptyFilter(filter) ? (i: number): boolean => !excludePlayers.has(g.player[i] ?? -1) : rowTest(store, g, filter, excludePlayers);
+  for (let i = 0; i < g.n; i++) if (passes(i)) return true;
+  return false;
+}
+
+/**
+ * The filter as a test of one row. Every field is read once here, not per row, and levels and
+ * positions become lookup tables (a filter object's shape varies with the fields it sets, so reading
+ * them in the row loop was the slowest part of a query).
+ */
+function rowTest(store: PoolStore, g: PoolRows, filter: PoolFilter, excludePlayers: ReadonlySet<number>): (row: number) => boolean {
+  const { player, season, level, age, position, sample } = g;
+  let levelOk: Uint8Array | null = null;
+  if (filter.levels) {
+    levelOk = new Uint8Array(store.levels.length + 1);
+    for (const l of filter.levels) {
+      const at = store.levels.indexOf(l);
+      if (at >= 0) levelOk[at] = 1;
+    }
+  }
+  const posSet: ReadonlySet<string> | null = filter.positions ? new Set(filter.positions) : null;
+  const batsSet: ReadonlySet<string> | null = filter.bats ? new Set(filter.bats) : null;
+  const throwsSet: ReadonlySet<string> | null = filter.throws ? new Set(filter.throws) : null;
+  const seasonFrom = filter.seasonFrom ?? -Infinity;
+  const seasonTo = filter.seasonTo ?? Infinity;
+  const ageMin = filter.ageMin;
+  const ageMax = filter.ageMax;
+  const minSample = filter.minSample;
+  const include = filter.include;
+  const players = store.players;
+  const noExclusions = excludePlayers.size === 0;
+  const only = excludePlayers.size === 1 ? [...excludePlayers][0] : undefined;
+  return (i) => {
+    const p = player[i] ?? -1;
+    if (only !== undefined ? p === only : !noExclusions && excludePlayers.has(p)) return false;
+    if (levelOk !== null && levelOk[level[i] ?? -1] !== 1) return false;
+    const s = season[i] ?? NaN;
+    if (s < seasonFrom || s > seasonTo) return false;
+    if (ageMin !== undefined && !((age[i] ?? NaN) >= ageMin)) return false;
+    if (ageMax !== undefined && !((age[i] ?? NaN) <= ageMax)) return false;
+    if (posSet !== null && !posSet.has(position[i] ?? 'DH')) return false;
+    if (minSample !== undefined && !((sample[i] ?? 0) >= minSample)) return false;
+    if (batsSet !== null || throwsSet !== null) {
+      const pl = players[p];
+      if (batsSet !== null && !(pl?.bats && batsSet.has(pl.bats))) return false;
+      if (throwsSet !== null && !(pl?.throws && throwsSet.has(pl.throws))) return false;
+    }
+    if (include !== undefined && !include(i)) return false;
+    return true;
+  };
 }
 
 function isEmptyFilter(f: PoolFilter): boolean {

@@ -48,15 +48,15 @@ export function explainComp(
     total += parts[j] as number;
     weightInPlay += w;
   }
+  const side = targetSide(dims, targetZ, targetRaw);
   const dimensions: DimensionDetail[] = dims.map((dim, j) => {
-    const t = targetZ[j] as number;
     const c = compZ[offset + j] as number;
     const share = !inPlay[j] ? 0 : total > 0 ? (parts[j] as number) / total : (weights[j] as number) / weightInPlay;
     return {
       name: dim.name,
-      target: roundOrNull(targetRaw[j] ?? NaN, dim.digits + 1),
+      target: side.values[j] ?? null,
       comp: roundOrNull(compRaw[offset + j] ?? NaN, dim.digits + 1),
-      target_grade: gradeOf(t, dim),
+      target_grade: side.grades[j] ?? null,
       comp_grade: gradeOf(c, dim),
       share,
       missing: !inPlay[j],
@@ -71,4 +71,37 @@ export function explainComp(
   });
   const name = (j: number): string => (dims[j] as DimensionInfo).name;
   return { dimensions, alike: alikeIdx.map(name), apart: apartIdx.map(name) };
+}
+
+interface TargetSide {
+  readonly dims: readonly DimensionInfo[];
+  /** Copies of the target's values the side was computed from (an array changed in place is computed again). */
+  readonly z: Float64Array;
+  readonly raw: Float64Array;
+  /** The target's shown value and grade per dimension (the same for every comp of a query). */
+  readonly values: readonly (number | null)[];
+  readonly grades: readonly (number | null)[];
+}
+
+const targetSides = new WeakMap<Float64Array | Float32Array, TargetSide>();
+
+const sameValues = (a: Float64Array, b: Float64Array | Float32Array): boolean => {
+  if (a.length !== b.length) return false;
+  for (let j = 0; j < a.length; j++) if (!Object.is(a[j], b[j])) return false;
+  return true;
+};
+
+/** The target's half of the breakdown, computed once per target (a query describes k comps of one target). */
+function targetSide(dims: readonly DimensionInfo[], targetZ: Float64Array | Float32Array, targetRaw: Float64Array | Float32Array): TargetSide {
+  const kept = targetSides.get(targetZ);
+  if (kept && kept.dims === dims && sameValues(kept.z, targetZ) && sameValues(kept.raw, targetRaw)) return kept;
+  const side: TargetSide = {
+    dims,
+    z: Float64Array.from(targetZ),
+    raw: Float64Array.from(targetRaw),
+    values: dims.map((dim, j) => roundOrNull(targetRaw[j] ?? NaN, dim.digits + 1)),
+    grades: dims.map((dim, j) => gradeOf(targetZ[j] as number, dim)),
+  };
+  targetSides.set(targetZ, side);
+  return side;
 }

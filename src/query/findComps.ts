@@ -3,7 +3,7 @@ import type { Target } from './Target.ts';
 import type { CompsResult } from './CompsResult.ts';
 import { prepareQuery, type PreparedQuery, type QuerySettings } from './prepareQuery.ts';
 import { querySpace, type QuerySpace } from './QuerySpace.ts';
-import { scoreRow, type ScoredRow } from './scoreRow.ts';
+import { scoreRows, type ScoredRow } from './scoreRow.ts';
 import { rankScored } from './rankScored.ts';
 import { candidateRows, poolRows } from './candidateRows.ts';
 import { describeComp } from './describeComp.ts';
@@ -99,7 +99,7 @@ export function compsOf(q: PreparedQuery, options: CompsOptions): { result: Comp
 export function searchRanked(q: PreparedQuery, space: QuerySpace, options: CompsOptions): { ranked: ScoredRow[]; usedIndex: boolean } {
   const g = q.group;
   const wanted = { k: options.k, allSeasons: options.allSeasons, minCoverage: options.minCoverage };
-  const score = (rows: readonly number[]): ScoredRow[] => rows.map((r) => scoreRow(q, r, space));
+  const score = (rows: readonly number[]): ScoredRow[] => scoreRows(q, rows, space);
   const indexed = space ? !options.exact && q.eligible >= INDEX_MIN_POOL : !options.exact && q.defaultMetric && !g.embedding && q.eligible >= INDEX_MIN_POOL;
   if (!indexed) return { ranked: rankScored(g, score(poolRows(q)), wanted), usedIndex: false };
   let c = Math.min(q.eligible, options.candidates ?? Math.max(CANDIDATES_MIN, 20 * options.k));

@@ -22,3 +22,25 @@ export function scoreRow(q: PreparedQuery, row: number, space: QuerySpace): Scor
   if (space) return { row, d2: codeDistance2(space.targetCode, space.embedding.codes, row * space.embedding.dim), coverage: p.coverage };
   return { row, d2: p.d2, coverage: p.coverage };
 }
+
+/**
+ * scoreRow for many rows of one query: the same rows, distances and coverages, with the group's
+ * matrix and the query's fields read once for all of them.
+ */
+export function scoreRows(q: PreparedQuery, rows: readonly number[], space: QuerySpace): ScoredRow[] {
+  const g = q.group;
+  const z = g.z;
+  const d = g.d;
+  const target = q.target.z;
+  const weights = q.weights;
+  const wT = q.targetWeight;
+  const out = new Array<ScoredRow>(rows.length);
+  for (let i = 0; i < rows.length; i++) {
+    const row = rows[i] ?? -1;
+    const p = missingAwareDistance(target, z, row * d, weights, wT);
+    out[i] = space
+      ? { row, d2: codeDistance2(space.targetCode, space.embedding.codes, row * space.embedding.dim), coverage: p.coverage }
+      : { row, d2: p.d2, coverage: p.coverage };
+  }
+  return out;
+}

@@ -1,5 +1,5 @@
 import { ParameterError } from '../errors/ParameterError.ts';
-import { eligibleRows } from '../query/eligibleRows.ts';
+import { hasEligibleRow } from '../query/eligibleRows.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
 import type { Target } from '../query/Target.ts';
 import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
@@ -25,7 +25,7 @@ interface Step {
  */
 export function checkPoolNotEmpty(store: ProfileStore, g: StoredGroup, target: Target, filter: PoolFilter, names: RuleParameters): void {
   const exclude = new Set<number>(target.player >= 0 ? [target.player] : []);
-  if (eligibleRows(store, g, filter, exclude).count > 0) return;
+  if (hasEligibleRow(store, g, filter, exclude)) return;
   const steps: Step[] = [];
   const f = filter;
   if (f.positions) steps.push({ parameter: names.positions, part: { positions: f.positions }, what: `at ${f.positions.join(', ')} (the ${g.group} group holds ${positionsOf(g).join(', ')})` });
@@ -44,7 +44,7 @@ export function checkPoolNotEmpty(store: ProfileStore, g: StoredGroup, target: T
   for (const step of steps) {
     so = { ...so, ...step.part };
     said.push(step.what);
-    if (eligibleRows(store, g, so, exclude).count === 0) {
+    if (!hasEligibleRow(store, g, so, exclude)) {
       throw new ParameterError(step.parameter, `leaves the pool empty: no other ${g.group} player-season ${said.join(', ')}`, { context: { group: g.group } });
     }
   }

@@ -57,10 +57,9 @@ export function compsOptionsFrom(req: JobRequest, store: ProfileStore, target: T
     seasons: poolSeason ? 'pool-season' : 'recent',
     positions: positions ? 'pool-position' : 'adjacent',
   });
-  let largest = 1;
-  for (const g of store.groups.values()) largest = Math.max(largest, g.n);
   return {
-    k: Math.min(req.need('k'), largest),
+    // the target's group is at most the largest, so only a k past it needs the other groups read
+    k: req.need('k') <= g.n ? req.need('k') : Math.min(req.need('k'), largestGroup(store)),
     exact: req.need('exact'),
     allSeasons: req.need('allSeasons'),
     filter,
@@ -85,11 +84,25 @@ export function checkAgainstStore(req: JobRequest, store: ProfileStore): void {
   weightsByName(store, req.get('weights') ?? new Map());
 }
 
+const largestOf = new WeakMap<ReadonlyMap<unknown, { readonly n: number }>, number>();
+
+/** Rows of the store's largest position group (at least 1), found once per opened set of groups. */
+function largestGroup(store: ProfileStore): number {
+  let largest = largestOf.get(store.groups);
+  if (largest === undefined) {
+    largest = 1;
+    for (const g of store.groups.values()) largest = Math.max(largest, g.n);
+    largestOf.set(store.groups, largest);
+  }
+  return largest;
+}
+
 /** Weights keyed by what was typed (a name or a label) turned into weights by dimension name. */
 function weightsByName(store: ProfileStore, typed: ReadonlyMap<string, number>): Map<string, number> {
+  const out = new Map<string, number>();
+  if (typed.size === 0) return out;
   const dims: NamedDimension[] = [];
   for (const g of store.groups.values()) for (const d of g.dims) if (!dims.some((x) => x.name === d.name && x.label === d.label)) dims.push(d);
-  const out = new Map<string, number>();
   const givenAs = new Map<string, string>();
   for (const [text, weight] of typed) {
     const names = new Set(dims.filter((d) => findDimension([d], text) === 0).map((d) => d.name));

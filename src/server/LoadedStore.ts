@@ -7,12 +7,12 @@ import type { ServedStore } from './loadServedStore.ts';
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import type { StoreError } from '../errors/KindredError.ts';
 import type { BacktestFile } from '../outlook/backtestFile.ts';
+import { once } from '../store/readGroup.ts';
 
 /** A store as the server holds it: the store, when it was loaded, and what is computed from it on demand. */
 export class LoadedStore {
   readonly store: ProfileStore;
-  /** The top-level outcomes, or why the store has none. */
-  readonly outcomes: Outcomes | StoreError;
+  readonly #outcomes: () => Outcomes | StoreError;
   /** The store's backtest, or why there is none (prospect answers carry its calibration). */
   readonly backtest: { readonly file: BacktestFile | null; readonly reason: string | null };
   readonly loadedAt: Date;
@@ -23,11 +23,17 @@ export class LoadedStore {
 
   constructor(served: ServedStore, generation: number, cacheEntries: number, loadedAt: Date = new Date()) {
     this.store = served.store;
-    this.outcomes = served.outcomes;
+    const given = served.outcomes;
+    this.#outcomes = typeof given === 'function' ? once(given) : () => given;
     this.backtest = served.backtest ?? { file: null, reason: 'no backtest stored with this store' };
     this.generation = generation;
     this.loadedAt = loadedAt;
     this.answers = new AnswerCache(cacheEntries);
+  }
+
+  /** The top-level outcomes, or why the store has none: read on the first call, then kept. */
+  get outcomes(): Outcomes | StoreError {
+    return this.#outcomes();
   }
 
   /** The pool map of a group, computed once per loaded store; undefined when the store lacks the group. */

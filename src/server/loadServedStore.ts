@@ -11,8 +11,11 @@ import type { BacktestFile } from '../outlook/backtestFile.ts';
 /** What the server answers from: the profiles and, when the store has them, the top-level outcomes. */
 export interface ServedStore {
   readonly store: ProfileStore;
-  /** The outcomes, or why they could not be read (the prospect endpoint answers with that error). */
-  readonly outcomes: Outcomes | StoreError;
+  /**
+   * The outcomes, or why they could not be read (the prospect endpoint answers with that error); as a
+   * function, read when first asked for (LoadedStore keeps the first answer).
+   */
+  readonly outcomes: Outcomes | StoreError | (() => Outcomes | StoreError);
   /** The store's backtest (backtest.json) when present and from this build, else null with the reason. */
   readonly backtest?: { readonly file: BacktestFile | null; readonly reason: string | null };
 }
@@ -23,15 +26,18 @@ const ATTEMPTS = 3;
 const manifestText = (dir: string): Promise<string> => readFile(join(dir, MANIFEST_NAME), 'utf8').catch(() => '');
 
 /**
- * Loads the profiles and the outcomes of one build of the store. Each is read through openStore
- * (checksums verified); the manifest is read before and after, and a store swapped in between (a
- * rebuild finishing meanwhile) is read again, so the two never come from different builds.
+ * Opens the profiles of one build of the store, with its outcomes to be read on first use. Each file
+ * is read through openStore (checksums verified when first read) and through the file descriptors the
+ * open took, so the outcomes read later come from the same build as the profiles even when a rebuild
+ * has swapped a new folder in meanwhile; the manifest is read before and after the open, and a store
+ * swapped in between is opened again. Why lazily: at 1M player-seasons decoding outcomes.json took
+ * about 0.7 s of CPU at every load and reload, while only the prospect and backtest answers read it.
  */
 export async function loadServedStore(dir: string): Promise<ServedStore> {
   for (let attempt = 1; ; attempt++) {
     const before = await manifestText(dir);
     const store = await openProfileStore(dir);
-    const outcomes = outcomesOf(store);
+    const outcomes = (): Outcomes | StoreError => outcomesOf(store);
     const backtest = await readBacktestFile(store);
     if ((await manifestText(dir)) === before) return { store, outcomes, backtest };
     if (attempt >= ATTEMPTS) {

@@ -76,7 +76,10 @@ export async function openStore(dir: string, options: { readonly verify?: StoreV
   const entries = new Map(Object.entries(manifest.files));
   const fds = new Map<string, number>();
   const counts = new Map<string, number>();
+  /** Unregisters the descriptors from closeOnCollect once closed here: their numbers may then be reused by other opens. */
+  const collectToken = {};
   const closeAll = (): void => {
+    closeOnCollect.unregister(collectToken);
     for (const fd of fds.values()) {
       try {
         closeSync(fd);
@@ -164,7 +167,7 @@ export async function openStore(dir: string, options: { readonly verify?: StoreV
     reads: (name) => counts.get(name) ?? 0,
     close: closeAll,
   };
-  if (fds.size > 0) closeOnCollect.register(store, [...fds.values()]);
+  if (fds.size > 0) closeOnCollect.register(store, [...fds.values()], collectToken);
   return store;
 }
 

@@ -241,3 +241,22 @@ describe('readRoster: what a roster leaves out', () => {
     expect(roster.rejected[1]?.raw[0]).toHaveLength(REJECTED_CELL_CHARS);
   });
 });
+
+describe('readRoster(dir) memory', () => {
+  it('gives the records of one team one shared team list (a roster holds millions of records), and a split season its own list of both teams', async () => {
+    const dir = rosterDir({
+      'batting.csv': csv('batting', [
+        { player_id: 'p1', team: 'T1' },
+        { player_id: 'p2', team: 'T1' },
+        { player_id: 'p3', team: 'T1' },
+        { player_id: 'p3', team: 'T2' },
+      ]),
+    });
+    const roster = await readRoster(dir);
+    const of = (id: string) => roster.batting.find((b) => b.playerId === id);
+    expect(of('p1')?.teams).toEqual(['T1']);
+    expect(of('p2')?.teams, 'the same list object').toBe(of('p1')?.teams);
+    expect(of('p3')?.teams).toEqual(['T1', 'T2']);
+    expect(of('p1')?.teams, 'combining stints leaves the shared list as it was').toEqual(['T1']);
+  });
+});

@@ -5,7 +5,7 @@
  * on it; the excluded players' rows never count).
  */
 import { describe, expect, it } from 'vitest';
-import { eligibleRows, type PoolRows, type PoolStore } from '../../src/query/eligibleRows.ts';
+import { eligibleRows, hasEligibleRow, type PoolRows, type PoolStore } from '../../src/query/eligibleRows.ts';
 import type { PoolFilter } from '../../src/query/PoolFilter.ts';
 import type { Position } from '../../src/ingest/Roster.ts';
 
@@ -46,6 +46,7 @@ const kept = (filter: PoolFilter, excluded: readonly number[] = []): number[] =>
   const { mask, count } = eligibleRows(store, group, filter, new Set(excluded));
   const rows = [...mask].flatMap((m, i) => (m === 1 ? [i] : []));
   expect(count, 'count is the number of rows kept').toBe(rows.length);
+  expect(hasEligibleRow(store, group, filter, new Set(excluded)), 'hasEligibleRow is whether any row is kept').toBe(rows.length > 0);
   return rows;
 };
 
@@ -53,6 +54,12 @@ describe('eligibleRows(store, group, filter, excluded)', () => {
   it('keeps every row without a filter, and leaves out every row of an excluded player', () => {
     expect(kept({})).toEqual([0, 1, 2, 3, 4, 5, 6, 7]);
     expect(kept({}, [1, 4])).toEqual([0, 1, 4, 5]);
+    expect(kept({}, [0, 1, 2, 3, 4])).toEqual([]);
+  });
+  it('an excluded player is left out under any filter, one or several excluded', () => {
+    expect(kept({ positions: ['SS'] }, [0])).toEqual([5]);
+    expect(kept({ positions: ['SS'] }, [0, 3])).toEqual([]);
+    expect(kept({ levels: ['Top'], seasonFrom: 2021 }, [1])).toEqual([4]);
   });
   it('levels: only rows at the listed levels', () => {
     expect(kept({ levels: ['Top'] })).toEqual([3, 4, 5]);

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { cp, readFile, rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { StoreHolder } from '../../src/server/StoreHolder.ts';
+import { StoreError } from '../../src/errors/KindredError.ts';
 import { createServer } from '../../src/server/createServer.ts';
 import { DEFAULT_PROFILE_OPTIONS } from '../../src/profiles/buildProfiles.ts';
 import { buildDemoStore, errorOf, json, send, tempDir } from './serverFixture.ts';
@@ -60,6 +61,23 @@ describe('StoreHolder', () => {
     expect(holder.current).toBe(before);
   });
 
+  it('reads the outcomes on first use, from the build it opened: a store swapped in meanwhile is not read, a file damaged in place is refused', async () => {
+    const dir = join(root, 'lazy-outcomes');
+    await cp(fullStore, dir, { recursive: true });
+    const swapped = await StoreHolder.open(dir);
+    // the folder replaced after the load: the outcomes still come from the files the load opened
+    await rm(dir, { recursive: true });
+    await cp(strictStore, dir, { recursive: true });
+    const kept = swapped.current.outcomes;
+    expect(kept instanceof StoreError ? kept.code : kept.topLevel).toBe('Top');
+    expect(swapped.current.outcomes, 'read once, then kept').toBe(kept);
+    // damaged in place after the load (same file, checksum no longer matching): refused when first read
+    const damaged = await StoreHolder.open(dir);
+    await writeFile(join(dir, 'outcomes.json'), '{"format":"kindred-outcomes"}');
+    const refused = damaged.current.outcomes;
+    expect(refused instanceof StoreError ? refused.code : 'read').toBe('kindred.store.corrupt');
+    expect(damaged.current.store.groups.get('IF')?.n, 'the profiles still answer').toBeGreaterThan(0);
+  });
   it('reloads asked at once run one after the other and each sees a complete store', async () => {
     const dir = join(root, 'live-c');
     await cp(fullStore, dir, { recursive: true });
