@@ -4,8 +4,9 @@
  * of his, at least half his PA or BF; the default weighting):
  * - ratio cases (top-level hitters 400+ PA, SP 500+ BF, RP 150+ BF): for each target, the mean
  *   true-talent distance to his top-10 comps over the mean distance to the 10 truly nearest other players
- *   (each at his nearest season or window) among the group's rows at levels within one of his, any
- *   position, any playing time (1.00 is perfect, lower is better). Talents are standardised over the
+ *   (each at his nearest season or window) of the same pool (1.00 is perfect, lower is better): what the
+ *   profiles and weights achieve among the players the user asked about (what the pool rules cost is
+ *   bench/poolQuality.bench.ts's figure). Talents are standardised over the
  *   group; talents a group's data cannot show are left out (TALENTS_SHOWN). A case's figure is the median
  *   over its targets. Planted twins and their originals are not ratio targets (a twin at distance 0 would
  *   make the ideal his alone).
@@ -20,6 +21,7 @@ import { playerIndexOf } from '../../src/sim/SimTruth.ts';
 import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { findCompsWithRows, type CompsOptions } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
+import { eligibleRows } from '../../src/query/eligibleRows.ts';
 import { DEFAULT_REACH, poolRules, type PoolReach } from '../../src/query/poolDefaults.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 import { quantileSorted } from '../../src/stats/quantile.ts';
@@ -114,12 +116,12 @@ export function chooseTargets(store: ProfileStore, league: SimLeague, perCase: n
 }
 
 /** True talents of every row of a group (of the truth season: a window's last), standardised over the group; NaN where unknown. */
-function groupTalents(store: ProfileStore, g: StoredGroup, league: SimLeague): { talents: Float64Array; t: number } {
+function groupTalents(store: ProfileStore, g: StoredGroup, league: SimLeague): { talents: Float64Array; t: number; names: readonly string[] } {
   const truth = league.truth;
   const seasonTruth = (row: number) => truth.find(store.players[g.player[row] as number]?.playerId ?? '', g.season[row] as number);
   let first: ReturnType<typeof seasonTruth>;
   for (let i = 0; i < g.n && !first; i++) first = seasonTruth(i);
-  if (!first) return { talents: new Float64Array(0), t: 0 };
+  if (!first) return { talents: new Float64Array(0), t: 0, names: [] };
   const shown = TALENTS_SHOWN[g.group];
   const keep = truth.talentNames[first.kind].map((n, i) => (shown === null || shown.includes(n) ? i : -1)).filter((i) => i >= 0);
   const t = keep.length;
@@ -138,7 +140,7 @@ function groupTalents(store: ProfileStore, g: StoredGroup, league: SimLeague): {
     const sd = Math.sqrt(v / (c - 1)) || 1;
     for (let r = 0; r < g.n; r++) talents[r * t + j] = ((talents[r * t + j] as number) - m) / sd;
   }
-  return { talents, t };
+  return { talents, t, names: keep.map((k) => truth.talentNames[first.kind][k] ?? '') };
 }
 
 export interface CaseScores {
@@ -149,6 +151,13 @@ export interface CaseScores {
   /** Per case: twins found among the top 10, and twin targets scored. */
   readonly twinsFound: readonly number[];
   readonly twinTargets: readonly number[];
+  /** Per case: the ratios of targets with every dimension of the group (full) and of the others (partial: e.g. seasons before tracking). */
+  readonly byCoverage: readonly { readonly full: readonly number[]; readonly partial: readonly number[] }[];
+  /**
+   * Per case: per talent (TALENTS_SHOWN order), the mean squared standardised gap between target and his
+   * comps, and between target and his 10 truly nearest: which talents the comps fail to match.
+   */
+  readonly talentGaps: readonly { readonly names: readonly string[]; readonly comps: Float64Array; readonly ideal: Float64Array }[];
 }
 
 export interface ScoreOptions {
@@ -164,7 +173,7 @@ export interface ScoreOptions {
  */
 export function scoreCases(view: ProfileStore, league: SimLeague, chosen: ChosenTargets, o: ScoreOptions): CaseScores {
   const reach = o.reach ?? DEFAULT_REACH;
-  const cache = new Map<PositionGroup, { rowOf: Map<string, number>; talents: Float64Array; t: number }>();
+  const cache = new Map<PositionGroup, { rowOf: Map<string, number>; talents: Float64Array; t: number; names: readonly string[] }>();
   const prepared = (group: PositionGroup) => {
     let c = cache.get(group);
     if (c) return c;
@@ -184,14 +193,20 @@ export function scoreCases(view: ProfileStore, league: SimLeague, chosen: Chosen
       ...(rules.levels ? { levels: rules.levels } : {}),
       ...(rules.minSample !== undefined ? { minSample: rules.minSample } : {}),
     };
-    return { target, rows: findCompsWithRows(view, target, { ...o.compsOptions, exact: true, k: K, filter }).rows };
+    const pool = eligibleRows(view, g, filter, new Set([target.player])).mask;
+    return { target, pool, rows: findCompsWithRows(view, target, { ...o.compsOptions, exact: true, k: K, filter }).rows };
   };
   const median: number[] = [];
   const ratios: number[][] = [];
   const twinsFound: number[] = [];
   const twinTargets: number[] = [];
+  const byCoverage: { full: number[]; partial: number[] }[] = [];
+  const talentGaps: { names: readonly string[]; comps: Float64Array; ideal: Float64Array }[] = [];
   for (const [c] of QUALITY_CASES.entries()) {
     const list: number[] = [];
+    const coverage = { full: [] as number[], partial: [] as number[] };
+    let gaps: { names: readonly string[]; comps: Float64Array; ideal: Float64Array } | undefined;
+    let gapTargets = 0;
     for (const ct of chosen.ratio[c] ?? []) {
       const g = view.groups.get(ct.group);
       const p = prepared(ct.group);
@@ -204,21 +219,36 @@ export function scoreCases(view: ProfileStore, league: SimLeague, chosen: Chosen
         for (let j = 0; j < t; j++) s += ((talents[a * t + j] as number) - (talents[b * t + j] as number)) ** 2;
         return Math.sqrt(s);
       };
-      const best = new Map<number, number>();
+      const found = comps(g, row);
+      const best = new Map<number, { d: number; r: number }>();
       for (let r = 0; r < g.n; r++) {
         const pl = g.player[r] as number;
-        if (pl === ct.player || Math.abs((g.level[r] as number) - ct.level) > 1 || Number.isNaN(talents[r * t] as number)) continue;
+        if (found.pool[r] !== 1 || pl === ct.player || Number.isNaN(talents[r * t] as number)) continue;
         const d = dist(row, r);
         const prev = best.get(pl);
-        if (prev === undefined || d < prev) best.set(pl, d);
+        if (prev === undefined || d < prev.d) best.set(pl, { d, r });
       }
-      const nearest = [...best.values()].sort((a, b) => a - b).slice(0, K);
-      const ideal = nearest.reduce((a, b) => a + b, 0) / nearest.length;
+      const nearest = [...best.values()].sort((a, b) => a.d - b.d).slice(0, K);
+      const ideal = nearest.reduce((a, b) => a + b.d, 0) / nearest.length;
       if (!(ideal > 0) || nearest.length < K) continue;
-      const known = comps(g, row).rows.filter((r) => !Number.isNaN(talents[r * t] as number));
+      const known = found.rows.filter((r) => !Number.isNaN(talents[r * t] as number));
       if (known.length < K) continue;
-      list.push(known.reduce((a, r) => a + dist(row, r), 0) / known.length / ideal);
+      const ratio = known.reduce((a, r) => a + dist(row, r), 0) / known.length / ideal;
+      list.push(ratio);
+      let full = true;
+      for (let j = 0; j < g.d; j++) if (Number.isNaN(g.z[row * g.d + j] as number)) full = false;
+      (full ? coverage.full : coverage.partial).push(ratio);
+      gaps ??= { names: p.names, comps: new Float64Array(t), ideal: new Float64Array(t) };
+      for (let j = 0; j < t; j++) {
+        const x = talents[row * t + j] as number;
+        for (const r of known) gaps.comps[j] = (gaps.comps[j] as number) + ((talents[r * t + j] as number) - x) ** 2 / known.length;
+        for (const { r } of nearest) gaps.ideal[j] = (gaps.ideal[j] as number) + ((talents[r * t + j] as number) - x) ** 2 / nearest.length;
+      }
+      gapTargets++;
     }
+    if (gaps) for (let j = 0; j < gaps.comps.length; j++) ((gaps.comps[j] = (gaps.comps[j] as number) / gapTargets), (gaps.ideal[j] = (gaps.ideal[j] as number) / gapTargets));
+    talentGaps.push(gaps ?? { names: [], comps: new Float64Array(0), ideal: new Float64Array(0) });
+    byCoverage.push(coverage);
     ratios.push(list);
     const sorted = [...list].sort((a, b) => a - b);
     median.push(sorted.length === 0 ? NaN : quantileSorted(sorted, 0.5));
@@ -237,5 +267,5 @@ export function scoreCases(view: ProfileStore, league: SimLeague, chosen: Chosen
     twinsFound.push(found);
     twinTargets.push(scored);
   }
-  return { median, ratios, twinsFound, twinTargets };
+  return { median, ratios, twinsFound, twinTargets, byCoverage, talentGaps };
 }
