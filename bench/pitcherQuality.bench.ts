@@ -5,7 +5,8 @@
  * every dimension (tracked seasons) and without (seasons before pitch tracking); per true talent the
  * mean squared gap to the comps against the gap to the 10 truly nearest (which talents the comps miss);
  * and the ratio under weight variants (per-dimension multipliers on the default weights).
- * `node --import tsx bench/pitcherQuality.bench.ts [playerSeasons] [targetsPerCase] [leagues] [windows]`
+ * `node --import tsx bench/pitcherQuality.bench.ts [playerSeasons] [targetsPerCase] [leagues] [windows] [variant,...]`
+ * (the variants by name, e.g. "missing left out"; the default is always run)
  * (also run by `npm run bench -- quality`).
  */
 import { mkdtemp, rm } from 'node:fs/promises';
@@ -21,7 +22,7 @@ import { chooseTargets, QUALITY_CASES, scoreCases } from './lib/caseQuality.ts';
 import { benchLeagues } from './leagues.ts';
 
 /** Weight variants: per-dimension multipliers on the default weights (absent: 1). */
-export const VARIANTS: readonly { readonly name: string; readonly options: Partial<CompsOptions> }[] = [
+export const ALL_VARIANTS: readonly { readonly name: string; readonly options: Partial<CompsOptions> }[] = [
   { name: 'default', options: {} },
   { name: 'no babip, no fip', options: { weightOverrides: new Map([['babip_against', 0], ['fip', 0]]) } },
   { name: 'gb x3', options: { weightOverrides: new Map([['gb_pct', 3]]) } },
@@ -38,8 +39,11 @@ const median = (xs: readonly number[]): number => {
 const mean = (xs: readonly number[]): number => xs.reduce((a, b) => a + b, 0) / xs.length;
 const sd = (xs: readonly number[]): number => Math.sqrt(xs.reduce((a, x) => a + (x - mean(xs)) ** 2, 0) / Math.max(1, xs.length - 1));
 
-export async function runPitcherQuality(playerSeasons: number, targetsPerCase: number, leagueCount: number, windows: readonly number[]): Promise<string[]> {
+export async function runPitcherQuality(
+  playerSeasons: number, targetsPerCase: number, leagueCount: number, windows: readonly number[], only?: readonly string[],
+): Promise<string[]> {
   const leagues = benchLeagues(playerSeasons).slice(0, leagueCount);
+  const VARIANTS = ALL_VARIANTS.filter((v, i) => i === 0 || !only || only.includes(v.name));
   const lines: string[] = [];
   // byVariant[variant][window][case] = per-league medians
   const byVariant = VARIANTS.map(() => windows.map(() => QUALITY_CASES.map(() => [] as number[])));
@@ -101,5 +105,6 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   const t = Number(process.argv[3] ?? 120);
   const l = Number(process.argv[4] ?? 4);
   const windows = (process.argv[5] ?? '1,3').split(',').map(Number);
-  for (const line of await runPitcherQuality(n, t, l, windows)) console.log(line);
+  const only = process.argv[6]?.split(',');
+  for (const line of await runPitcherQuality(n, t, l, windows, only)) console.log(line);
 }
