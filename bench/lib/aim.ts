@@ -6,6 +6,7 @@
 export type Aim =
   | { readonly below: number; readonly unit?: string }
   | { readonly atLeast: number; readonly unit?: string }
+  | { readonly atMost: number; readonly unit?: string }
   | { readonly above: number; readonly unit?: string }
   | { readonly within: readonly [number, number]; readonly unit?: string };
 
@@ -19,6 +20,7 @@ export function meets(value: number, aim: Aim): boolean {
   if (Number.isNaN(value)) return false;
   if ('below' in aim) return value < aim.below;
   if ('atLeast' in aim) return value >= aim.atLeast;
+  if ('atMost' in aim) return value <= aim.atMost;
   if ('above' in aim) return value > aim.above;
   return value >= aim.within[0] && value <= aim.within[1];
 }
@@ -28,6 +30,7 @@ export function describeAim(aim: Aim): string {
   const unit = aim.unit ? ` ${aim.unit}` : '';
   if ('below' in aim) return `under ${aim.below}${unit}`;
   if ('atLeast' in aim) return `at least ${aim.atLeast}${unit}`;
+  if ('atMost' in aim) return `at most ${aim.atMost}${unit}`;
   if ('above' in aim) return `above ${aim.above}${unit}`;
   return `${aim.within[0]} to ${aim.within[1]}${unit}`;
 }

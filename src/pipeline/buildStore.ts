@@ -22,9 +22,10 @@ import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } fro
 import { stageCharts } from './stageCharts.ts';
 import { collectGarbage } from './collectGarbage.ts';
 import { computeOutcomes } from '../outlook/computeOutcomes.ts';
+import { DEFAULT_WINDOW } from '../query/defaultWindow.ts';
 
-/** The windows (in seasons) a build makes profiles over when none are asked for. */
-export const DEFAULT_BUILD_WINDOWS: readonly number[] = [1];
+/** The windows (in seasons) a build makes profiles over when none are asked for: single seasons and the comps' default window. */
+export const DEFAULT_BUILD_WINDOWS: readonly number[] = [1, DEFAULT_WINDOW];
 
 export const DEFAULT_INDEX_PARAMS: IndexParams = { M: 16, efConstruction: 100, ef: 128, seed: 100 };
 
@@ -38,7 +39,7 @@ export interface BuildOptions {
   /** The learned embedding to rank comps in (default none: the weighted input space). */
   readonly embed?: EmbedSettingsInput;
   /**
-   * The windows to build profiles over, in seasons (default [1]: single seasons). Each N >= 2 adds every
+   * The windows to build profiles over, in seasons (default DEFAULT_BUILD_WINDOWS: 1 and 3). Each N >= 2 adds every
    * group's profiles over windows of N seasons (buildWindowProfiles), in the input space, as group
    * `<G>.w<N>`; queries reach them with `--window N`. 1 is always built.
    */

@@ -24,24 +24,37 @@ export function missingAwareDistance(
   offset: number,
   weights: Float64Array,
   targetWeight: number,
+  missing: MissingRule = 'rescale',
 ): PairDistance {
   const d = weights.length;
   let sum = 0;
   let shared = 0;
+  let expected = 0;
   for (let j = 0; j < d; j++) {
     const w = weights[j] ?? 0;
     if (w === 0) continue;
     const t = target[j] ?? NaN;
     if (Number.isNaN(t)) continue;
     const c = candidate[offset + j] ?? NaN;
-    if (Number.isNaN(c)) continue;
+    if (Number.isNaN(c)) {
+      expected += w * (t * t + 1);
+      continue;
+    }
     const diff = t - c;
     sum += w * diff * diff;
     shared += w;
   }
   if (shared === 0 || targetWeight === 0) return { d2: Infinity, coverage: 0 };
+  if (missing === 'expected') return { d2: sum + expected, coverage: shared / targetWeight };
   return { d2: (sum * targetWeight) / shared, coverage: shared / targetWeight };
 }
+
+/**
+ * `rescale`: a dimension the candidate lacks is left out and the shared ones scaled up to the target's
+ * weight. `expected`: it counts at the expected squared gap between the target's value t and an unknown
+ * standardised value (mean 0, variance 1 in its stratum): E[(t - C)^2] = t^2 + 1.
+ */
+export type MissingRule = 'rescale' | 'expected';
 
 /** Total weight of the dimensions the target has (W_T). */
 export function targetWeight(target: Float32Array | Float64Array, weights: Float64Array): number {

@@ -1,6 +1,6 @@
 import { QueryError } from '../errors/KindredError.ts';
 import { eligibleRows } from './eligibleRows.ts';
-import { targetWeight } from './missingAwareDistance.ts';
+import { targetWeight, type MissingRule } from './missingAwareDistance.ts';
 import type { PoolFilter } from './PoolFilter.ts';
 import type { SampleFloor } from './poolDefaults.ts';
 import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
@@ -17,6 +17,8 @@ export interface QuerySettings {
   readonly weighting: 'redundancy' | 'plain';
   /** How the filter's playing-time floor was scaled (poolRules), for the echo; absent without a floor from the rules. */
   readonly sampleFloor?: SampleFloor;
+  /** A dimension the target has and a pool row lacks: left out and the rest rescaled (`rescale`, default) or counted at its expected gap (`expected`; missingAwareDistance). */
+  readonly missing?: MissingRule;
 }
 
 /** A query made ready: its group, the weights in play, the target's weight and the pool. */
@@ -38,6 +40,7 @@ export interface PreparedQuery {
   /** The weighting the store's indexes were built with (redundancy, balanced, no overrides). */
   readonly defaultMetric: boolean;
   readonly sampleFloor: SampleFloor | null;
+  readonly missing: MissingRule;
 }
 
 /**
@@ -68,5 +71,6 @@ export function prepareQuery(store: ProfileStore, target: Target, settings: Quer
   return {
     store, group, target, filter: settings.filter, weights, preset: settings.preset, targetWeight: wT, mask, eligible: count, defaultMetric,
     sampleFloor: settings.sampleFloor ?? null,
+    missing: settings.missing ?? 'rescale',
   };
 }

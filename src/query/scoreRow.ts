@@ -18,7 +18,7 @@ export interface ScoredRow {
  */
 export function scoreRow(q: PreparedQuery, row: number, space: QuerySpace): ScoredRow {
   const g = q.group;
-  const p = missingAwareDistance(q.target.z, g.z, row * g.d, q.weights, q.targetWeight);
+  const p = missingAwareDistance(q.target.z, g.z, row * g.d, q.weights, q.targetWeight, q.missing);
   if (space) return { row, d2: codeDistance2(space.targetCode, space.embedding.codes, row * space.embedding.dim), coverage: p.coverage };
   return { row, d2: p.d2, coverage: p.coverage };
 }

@@ -17,9 +17,10 @@ const PLAIN = {
 export function describeTarget(result: CompsResult): string {
   const q = result.query;
   const who = q.kind === 'player' ? `${q.name} (${q.player_id}), ${seasonSpan(q)} ${q.level} ${q.position}${q.age !== null ? `, age ${q.age}` : ''}` : `hand-built ${q.position} profile`;
-  const rows = q.window === undefined ? 'player-seasons' : `windows of ${q.window} seasons (his last ${q.window} at a level, events added up)`;
+  const rows = q.window === undefined ? 'player-seasons' : `windows of ${q.window} seasons`;
   const pool = `${result.pool.eligible.toLocaleString('en-US')} of ${result.pool.group_size.toLocaleString('en-US')} ${q.group} ${rows} in the pool`;
-  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space\n${q.space_note ? `${wrapText(`Note: ranked in the input space: ${q.space_note}.`).join('\n')}\n` : ''}Pool: ${result.pool.summary}\n${describeShares(result)}`;
+  const windows = q.window === undefined ? '' : `\nWindows: each player's last ${q.window} seasons at a level, events added up (--window 1: single seasons)`;
+  return `Comps for ${who}\n${pool}; ${q.method === 'hnsw' ? 'HNSW candidates, exact re-rank' : 'exact scan'}; ${q.space} space${windows}\n${q.space_note ? `${wrapText(`Note: ranked in the input space: ${q.space_note}.`).join('\n')}\n` : ''}Pool: ${result.pool.summary}\n${describeShares(result)}`;
 }
 
 /** The weight of each skill family in one line, e.g. `Weights (balanced): discipline 20%, contact 15%, ...`. */
@@ -44,7 +45,8 @@ export function compsTable(result: CompsResult, dims: readonly DimensionInfo[]):
     chars: PLAIN,
     style: { head: [], border: [], 'padding-left': 0, 'padding-right': 1 },
     colAligns: ['right', 'left', 'left', 'left', 'left', 'right', ...time.map(() => 'right' as const), 'right', 'right', 'left'],
-    colWidths: [3, 20, 7, 6, 4, 4, ...time.map(() => 6), 5, 5, time.length > 1 ? 24 : 30],
+    // a window's seasons (2019-21) take 7 characters and the cell's padding one more
+    colWidths: [3, 20, result.comps.some((c) => c.seasons !== undefined) ? 8 : 7, 6, 4, 4, ...time.map(() => 6), 5, 5, time.length > 1 ? 24 : 30],
     wordWrap: true,
   });
   const byName = new Map(dims.map((d) => [d.name, d]));

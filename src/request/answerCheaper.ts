@@ -2,6 +2,7 @@ import { ParameterError } from '../errors/ParameterError.ts';
 import { DEFAULT_SALARY_LIMIT, findCheaperComps, type CheaperOptions, type SalaryLimit } from '../jobs/findCheaperComps.ts';
 import type { CheaperResult } from '../jobs/CheaperResult.ts';
 import { windowView } from '../query/windowView.ts';
+import { requestWindow } from './requestWindow.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
@@ -21,7 +22,7 @@ export function cheaperOptionsFrom(req: JobRequest, store: ProfileStore, target:
 
 /** The cheaper job: comps with a known salary under the limit, the value frontier marked. */
 export function answerCheaper(stored: ProfileStore, req: JobRequest): CheaperResult {
-  const store = windowView(stored, req.need('window'));
+  const store = windowView(stored, requestWindow(req, stored));
   const target = targetFrom(store, req);
   return findCheaperComps(store, target, cheaperOptionsFrom(req, store, target));
 }

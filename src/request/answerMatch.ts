@@ -2,6 +2,7 @@ import { ParameterError } from '../errors/ParameterError.ts';
 import { matchPlayers, type MatchOptions } from '../jobs/matchPlayers.ts';
 import type { MatchResult } from '../jobs/MatchResult.ts';
 import { windowView } from '../query/windowView.ts';
+import { requestWindow } from './requestWindow.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { resolvePlayer } from '../query/resolvePlayer.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
@@ -21,7 +22,7 @@ export function matchOptionsFrom(req: JobRequest, store: ProfileStore, target: T
 
 /** The match job: one candidate against the target, likeness, percentile in the pool and every dimension. */
 export function answerMatch(stored: ProfileStore, req: JobRequest): MatchResult {
-  const store = windowView(stored, req.need('window'));
+  const store = windowView(stored, requestWindow(req, stored));
   const target = targetFrom(store, req);
   const options = matchOptionsFrom(req, store, target);
   const candidate = req.get('candidate');

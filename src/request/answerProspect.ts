@@ -2,6 +2,7 @@ import { findProspectComps, type ProspectOptions } from '../jobs/findProspectCom
 import type { Outcomes } from '../outlook/Outcomes.ts';
 import type { ProspectResult } from '../jobs/ProspectResult.ts';
 import { windowView } from '../query/windowView.ts';
+import { requestWindow } from './requestWindow.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
@@ -24,7 +25,7 @@ export type StoredBacktest = { readonly file: BacktestFile | null; readonly reas
  * differ, the comps are found a second time with the backtest's number.
  */
 export function answerProspect(stored: ProfileStore, outcomes: Outcomes, req: JobRequest, backtest: StoredBacktest): ProspectResult {
-  const store = windowView(stored, req.need('window'));
+  const store = windowView(stored, requestWindow(req, stored));
   const target = targetFrom(store, req);
   const options = prospectOptionsFrom(req, store, target);
   const result = findProspectComps(store, outcomes, target, options);

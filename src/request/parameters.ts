@@ -2,6 +2,7 @@ import type { Bats, Position, Throws } from '../ingest/Roster.ts';
 import { DEFAULT_PROSPECT_OPTIONS } from '../jobs/findProspectComps.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../query/findComps.ts';
 import { CHEAPER_REACH, DEFAULT_REACH } from '../query/poolDefaults.ts';
+import { DEFAULT_WINDOW } from '../query/defaultWindow.ts';
 import { isWeightPreset, WEIGHT_PRESETS, type WeightPreset } from '../query/weightPresets.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
 import { BadValue } from './BadValue.ts';
@@ -130,8 +131,8 @@ export const PARAMETERS: { readonly [K in ParameterKey]: Parameter<RequestValues
     helpFor: { match: 'CSV of candidates (player_id, season, level) against the one target: one JSON line each (CSV rows with {format} csv)' },
   },
   window: {
-    name: 'window', value: 'n', parse: v.wholeUpTo(v.MAX_WINDOW), default: 1, jobs: TARGET_JOBS,
-    help: 'profiles over his last N seasons at the level (events added up), compared with other players\u2019 windows of N seasons ending at any season; 1: single seasons (a store holds the windows kindred build --windows made)',
+    name: 'window', value: 'n', parse: v.wholeUpTo(v.MAX_WINDOW), default: 1, defaultFor: { comps: DEFAULT_WINDOW, match: DEFAULT_WINDOW }, jobs: TARGET_JOBS,
+    help: `profiles over his last N seasons at the level (events added up), compared with other players\u2019 windows of N seasons ending at any season; 1: single seasons (a store holds the windows kindred build --windows made; comps and match default to ${DEFAULT_WINDOW} when the store has it, else 1)`,
   },
   seasonB: { name: 'season-b', value: 'year', help: 'the candidate season (default: his season most alike the target)', parse: v.season, jobs: ['match'] },
   levelB: { name: 'level-b', value: 'level', help: 'the candidate level (default: his highest that season)', parse: v.text, jobs: ['match'] },

@@ -22,6 +22,7 @@ export class PlayerColumns {
   private readonly topLevelSeasons: number[] = [];
   private readonly active: number[] = [];
   private readonly peakValue: number[] = [];
+  private readonly twins: [number, number][] = [];
 
   /** Players added so far (the next player's index). */
   get count(): number {
@@ -46,8 +47,18 @@ export class PlayerColumns {
     this.topLevelSeasons.push(topLevelSeasons);
   }
 
+  /** Marks players `a` and `b` as planted twins of each other. */
+  pair(a: number, b: number): void {
+    this.twins.push([a, b]);
+  }
+
   seal(): SimPlayers {
     const count = this.names.length;
+    const twinOf = new Int32Array(count).fill(-1);
+    for (const [a, b] of this.twins) {
+      twinOf[a] = b;
+      twinOf[b] = a;
+    }
     const width = Math.max(6, String(count).length);
     return {
       count,
@@ -63,6 +74,7 @@ export class PlayerColumns {
       topLevelSeasons: Int16Array.from(this.topLevelSeasons),
       peakValue: Float32Array.from(this.peakValue),
       active: Uint8Array.from(this.active),
+      twinOf,
     };
   }
 }

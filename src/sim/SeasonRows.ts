@@ -61,18 +61,21 @@ export class SeasonRows {
   }
 
   /** The talents behind this season's stat lines: true talents, plus a season's form when statNoise > 0. */
-  private lineTalents(t: Float64Array): Float64Array {
+  private lineTalents(t: Float64Array, rng: SeededRandom): Float64Array {
     if (this.o.statNoise <= 0) return t;
     const form = new Float64Array(t.length);
-    for (let k = 0; k < t.length; k++) form[k] = (t[k] ?? 0) + this.o.statNoise * this.rng.normal();
+    for (let k = 0; k < t.length; k++) form[k] = (t[k] ?? 0) + this.o.statNoise * rng.normal();
     return form;
   }
 
-  /** Batting and fielding rows of one hitter season, one per recorded stint. */
-  hitterSeason(player: number, cs: CareerSeason): void {
-    const { o, ladder, rng, bRow } = this;
+  /**
+   * Batting and fielding rows of one hitter season, one per recorded stint. `rng`: the luck of the lines
+   * (default the league's stream; a planted twin's lines draw from the twins' own).
+   */
+  hitterSeason(player: number, cs: CareerSeason, rng: SeededRandom = this.rng): void {
+    const { o, ladder, bRow } = this;
     const pos = cs.position;
-    const talents = this.lineTalents(cs.talents);
+    const talents = this.lineTalents(cs.talents, rng);
     for (const stint of cs.stints) {
       const lv = stint.level;
       if (!this.recorded(cs.season, lv)) continue;
@@ -98,14 +101,14 @@ export class SeasonRows {
         const share = cs.regular ? rng.uniform(0.85, 1.0) : rng.uniform(0.6, 1.0);
         const primaryGames = Math.round(games * share) - secondGames;
         if (primaryGames < 1) secondGames = Math.max(0, secondGames + primaryGames - 1);
-        if (primaryGames >= 1) this.fieldingRow(player, cs, lv, team, pos, primaryGames, cs.regular, measured);
+        if (primaryGames >= 1) this.fieldingRow(rng, player, cs, lv, team, pos, primaryGames, cs.regular, measured);
       }
-      if (second !== null && secondGames >= 1) this.fieldingRow(player, cs, lv, team, second, secondGames, false, measured);
+      if (second !== null && secondGames >= 1) this.fieldingRow(rng, player, cs, lv, team, second, secondGames, false, measured);
     }
   }
 
   private fieldingRow(
-    player: number, cs: CareerSeason, lv: number, team: number, pos: FieldPosition,
+    rng: SeededRandom, player: number, cs: CareerSeason, lv: number, team: number, pos: FieldPosition,
     games: number, regular: boolean, measured: { readonly arm: boolean; readonly timing: boolean },
   ): void {
     const fRow = this.fRow;
@@ -114,16 +117,16 @@ export class SeasonRows {
     fRow[2] = lv;
     fRow[3] = team;
     fRow[4] = positionIndex(pos);
-    fieldingLine(this.rng, cs.talents, pos, games, regular, measured.arm, measured.timing, fRow);
+    fieldingLine(rng, cs.talents, pos, games, regular, measured.arm, measured.timing, fRow);
     this.fielding.push(fRow);
   }
 
-  /** Pitching rows of one pitcher season, one per recorded stint: starts and outs by role and stamina. */
-  pitcherSeason(player: number, cs: CareerSeason): void {
-    const { o, ladder, rng, pRow } = this;
+  /** Pitching rows of one pitcher season, one per recorded stint: starts and outs by role and stamina (`rng` as for hitterSeason). */
+  pitcherSeason(player: number, cs: CareerSeason, rng: SeededRandom = this.rng): void {
+    const { o, ladder, pRow } = this;
     const reliever = cs.position === 'RP';
     const stamina = cs.talents[P_STAMINA] ?? 0;
-    const talents = this.lineTalents(cs.talents);
+    const talents = this.lineTalents(cs.talents, rng);
     for (const stint of cs.stints) {
       const lv = stint.level;
       if (!this.recorded(cs.season, lv)) continue;
@@ -152,12 +155,12 @@ export class SeasonRows {
   }
 
   /** A top-level season's contract row, present 92% of the time (clubs' records have gaps). */
-  contract(player: number, cs: CareerSeason, service: number): void {
-    if (!this.rng.chance(0.92)) return;
+  contract(player: number, cs: CareerSeason, service: number, rng: SeededRandom = this.rng): void {
+    if (!rng.chance(0.92)) return;
     const cRow = this.cRow;
     cRow[0] = player;
     cRow[1] = cs.season;
-    cRow[2] = salaryThousands(this.rng, cs.season, service, cs.value);
+    cRow[2] = salaryThousands(rng, cs.season, service, cs.value);
     this.contracts.push(cRow);
   }
 

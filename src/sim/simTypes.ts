@@ -52,6 +52,15 @@ export interface SimOptions {
   readonly eraDrift?: number;
   /** Stat lines below the top level are recorded only from this season (default firstSeason: all). */
   readonly minorsRecordedFrom?: number;
+  /**
+   * Share of the careers with a top-level season from firstSeason on that get a planted twin (default 0): a
+   * second player, entered right after him, with the same career (true talents every season, birth date,
+   * handedness, position, levels, clubs and playing time) whose stat lines, fielding lines and contracts are
+   * drawn with luck of their own. The twins draw from their own random stream, so every other player's
+   * career and lines are those of the league without twins (only the ids after a twin move up by one).
+   * `players.twinOf` pairs them.
+   */
+  readonly twinShare?: number;
 }
 
 export interface ResolvedSimOptions {
@@ -70,6 +79,7 @@ export interface ResolvedSimOptions {
   readonly statNoise: number;
   readonly eraDrift: number;
   readonly minorsRecordedFrom: number;
+  readonly twinShare: number;
 }
 
 /** The players of a league, as parallel arrays indexed by player (id "p000001" is index 0). */
@@ -93,6 +103,8 @@ export interface SimPlayers {
   readonly peakValue: Float32Array;
   /** 1 when the career was still going after lastSeason (censored). */
   readonly active: Uint8Array;
+  /** Index of the player's planted twin (SimOptions.twinShare), -1 for none; a pair points at each other. */
+  readonly twinOf: Int32Array;
 }
 
 export interface SimLeague {

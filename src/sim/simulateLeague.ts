@@ -34,6 +34,8 @@ const PILOT_CAREERS = 4000;
 const DEFAULT_TARGET = 12000;
 /** Players a club carries in a season, used to size the number of clubs. */
 const PLAYERS_PER_CLUB = 36;
+/** Mixed into the seed for the planted twins' own random stream. */
+const TWIN_STREAM = 0x7b1a5e;
 
 export function resolveSimOptions(options: SimOptions): ResolvedSimOptions {
   const { seed, firstSeason, lastSeason } = options;
@@ -52,6 +54,7 @@ export function resolveSimOptions(options: SimOptions): ResolvedSimOptions {
   const statNoise = options.statNoise ?? 0;
   const eraDrift = options.eraDrift ?? 0;
   const minorsRecordedFrom = options.minorsRecordedFrom ?? firstSeason;
+  const twinShare = options.twinShare ?? 0;
   const finite = (name: string, v: number, ok: boolean): void => {
     if (!Number.isFinite(v) || !ok) throw new UsageError(`${name} ${v}: out of range`, { [name]: v });
   };
@@ -61,6 +64,7 @@ export function resolveSimOptions(options: SimOptions): ResolvedSimOptions {
   finite('statNoise', statNoise, statNoise >= 0 && statNoise <= 2);
   finite('eraDrift', eraDrift, Math.abs(eraDrift) <= 0.2);
   finite('minorsRecordedFrom', minorsRecordedFrom, Number.isInteger(minorsRecordedFrom));
+  finite('twinShare', twinShare, twinShare >= 0 && twinShare <= 1);
   const rules: CareerRules = { ladder, promotionMargin, promotionChance, showingNoise };
   let intake = options.playersPerSeasonIntake;
   if (intake === undefined) {
@@ -87,7 +91,7 @@ export function resolveSimOptions(options: SimOptions): ResolvedSimOptions {
   };
   return {
     seed, firstSeason, lastSeason, playersPerSeasonIntake: intake, teamsPerLevel, pitcherShare, measuredFrom, trackedFromLevel,
-    minorLevels, promotionMargin, promotionChance, showingNoise, statNoise, eraDrift, minorsRecordedFrom,
+    minorLevels, promotionMargin, promotionChance, showingNoise, statNoise, eraDrift, minorsRecordedFrom, twinShare,
   };
 }
 
@@ -124,6 +128,8 @@ export function simulateLeague(options: SimOptions): SimLeague {
   const rows = new SeasonRows(o, ladder, rng, expected);
   const truth = new SimTruth(levels, expected);
   const players = new PlayerColumns();
+  // planted twins draw their names and luck from a stream of their own, so the rest of the league is unchanged
+  const twinRng = new SeededRandom((o.seed ^ TWIN_STREAM) >>> 0);
 
   for (let entry = o.firstSeason - WARM_UP; entry <= o.lastSeason; entry++) {
     for (let k = 0; k < o.playersPerSeasonIntake; k++) {
@@ -132,23 +138,34 @@ export function simulateLeague(options: SimOptions): SimLeague {
       if (last === undefined || last.season < o.firstSeason) continue;
       const player = players.count;
       players.add(career, inventName(rng));
-      let service = 0;
-      let top = 0;
-      for (const cs of career.seasons) {
-        let mask = 0;
-        for (const s of cs.stints) mask |= 1 << s.level;
-        const atTop = (mask & (1 << ladder.top)) !== 0;
-        top = Math.max(top, Math.floor(Math.log2(mask)));
-        if (cs.season >= o.firstSeason) {
-          truth.push(player, cs.season, career.kind, positionIndex(cs.position), mask, cs.age, cs.talents);
-          if (career.kind === 'hitter') rows.hitterSeason(player, cs);
-          else rows.pitcherSeason(player, cs);
-          if (atTop) rows.contract(player, cs, service);
-        }
-        if (atTop) service++;
+      addSeasons(player, career, rng);
+      const twinned = o.twinShare > 0 && career.seasons.some((cs) => cs.season >= o.firstSeason && cs.stints.some((s) => s.level === ladder.top));
+      if (twinned && twinRng.chance(o.twinShare)) {
+        players.add(career, inventName(twinRng));
+        addSeasons(player + 1, career, twinRng);
+        players.pair(player, player + 1);
       }
-      players.end(top, service);
     }
+  }
+
+  /** Truth, stat and contract rows of one career from firstSeason on, the lines' luck drawn from `luck`. */
+  function addSeasons(player: number, career: ReturnType<typeof simulateCareer>, luck: SeededRandom): void {
+    let service = 0;
+    let top = 0;
+    for (const cs of career.seasons) {
+      let mask = 0;
+      for (const s of cs.stints) mask |= 1 << s.level;
+      const atTop = (mask & (1 << ladder.top)) !== 0;
+      top = Math.max(top, Math.floor(Math.log2(mask)));
+      if (cs.season >= o.firstSeason) {
+        truth.push(player, cs.season, career.kind, positionIndex(cs.position), mask, cs.age, cs.talents);
+        if (career.kind === 'hitter') rows.hitterSeason(player, cs, luck);
+        else rows.pitcherSeason(player, cs, luck);
+        if (atTop) rows.contract(player, cs, service, luck);
+      }
+      if (atTop) service++;
+    }
+    players.end(top, service);
   }
 
   const sealed = players.seal();

@@ -60,7 +60,7 @@ export function filtersForm(info: StoreInfo): FiltersForm {
   const weights = h('input', { id: 'opt-weights', type: 'text', placeholder: 'e.g. obp=2,run_speed_ft_s=0', spellcheck: 'false' });
   const coverage = h('input', { id: 'opt-min-coverage', type: 'number', min: '0', max: '1', step: '0.05', value: '0.5' });
   const allSeasons = h('input', { id: 'opt-all-seasons', type: 'checkbox' });
-  const window = h('input', { id: 'opt-window', type: 'number', min: '1', max: '5', value: '1', title: 'profiles over his last N seasons at a level (a store built with kindred build --windows)' });
+  const window = h('input', { id: 'opt-window', type: 'number', min: '1', max: '5', value: '', placeholder: 'default', title: 'profiles over his last N seasons at a level (empty: the job\u2019s default, 3 seasons for comps when the store has them; 1: single seasons)' });
   const element = h(
     'fieldset',
     { class: 'filters' },
@@ -103,7 +103,7 @@ export function filtersForm(info: StoreInfo): FiltersForm {
       set('weights', weights.value.trim());
       set('min-coverage', coverage.value.trim());
       if (allSeasons.checked) p.set('all-seasons', 'true');
-      if (window.value.trim() !== '1') set('window', window.value.trim());
+      set('window', window.value.trim());
       if (!reachBox.hidden) {
         p.set('adjacent', String(adjacent.checked));
         set('level-span', levelSpan.value);

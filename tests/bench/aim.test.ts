@@ -20,7 +20,11 @@ console.log('p50 1.5 ms ' + aim('p50', 1.5, { below: 2, unit: 'ms' }));
 console.log('recall 0.97 ' + aim('recall@10', 0.97, { atLeast: 0.99 }));`;
 
 describe('bench aims', () => {
-  it('reads below, at least, above and within as their words say; NaN never meets an aim', () => {
+  it('reads below, at least, at most, above and within as their words say; NaN never meets an aim', () => {
+    expect(meets(1.3, { atMost: 1.3 })).toBe(true);
+    expect(meets(1.3001, { atMost: 1.3 })).toBe(false);
+    expect(meets(Number.NaN, { atMost: 1.3 })).toBe(false);
+    expect(describeAim({ atMost: 1.3 })).toBe('at most 1.3');
     expect(meets(1.99, { below: 2 })).toBe(true);
     expect(meets(2, { below: 2 })).toBe(false);
     expect(meets(0.99, { atLeast: 0.99 })).toBe(true);

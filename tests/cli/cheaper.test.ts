@@ -95,7 +95,8 @@ describe('kindred cheaper <player>', () => {
     const out = await runCli('cheaper', star.id, '--season', String(star.season), '--store', store, '--format', 'csv', '--k', '4', '--recent', 'all');
     expect(out.code).toBe(0);
     const rows: string[][] = parse(out.stdout);
-    const comps: string[][] = parse((await runCli('comps', star.id, '--season', String(star.season), '--store', store, '--format', 'csv', '--k', '1')).stdout);
+    // cheaper answers single seasons by default: the comps CSV of single seasons
+    const comps: string[][] = parse((await runCli('comps', star.id, '--season', String(star.season), '--store', store, '--format', 'csv', '--k', '1', '--window', '1')).stdout);
     const head = rows[0] ?? [];
     const own = ['salary_usd', 'value_score', 'likeness_per_million', 'frontier', 'above_likeness_floor'];
     // the comps columns in the same order, the salary columns before alike and apart

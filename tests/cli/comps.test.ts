@@ -100,7 +100,7 @@ describe('kindred comps <player> --format json', () => {
     expect(out.code).toBe(0);
     const lines = out.stdout.trim().split('\n');
     expect(lines).toHaveLength(5);
-    expect(lines[0]).toMatch(/^target_player_id,target_season,target_level,rank,player_id,name,season,level,position,age,sample,sample_unit,ip,likeness/);
+    expect(lines[0]).toMatch(/^target_player_id,target_first_season,target_season,target_level,rank,player_id,name,first_season,season,level,position,age,sample,sample_unit,ip,likeness/);
     expect(lines[0]).toContain('pop_2b_s_grade');
   });
 });
@@ -158,7 +158,7 @@ describe('kindred comps --batch', () => {
     expect(out.code).toBe(1);
     const lines = out.stdout.trim().split('\n');
     expect(lines).toHaveLength(1 + 2 + 2);
-    expect(lines[0]).toMatch(/^target_player_id,target_season,target_level,rank,player_id,/);
+    expect(lines[0]).toMatch(/^target_player_id,target_first_season,target_season,target_level,rank,player_id,/);
     expect(lines.filter((l) => l.startsWith('target_player_id'))).toHaveLength(1);
     expect(lines.slice(1).map((l) => l.split(',')[0])).toEqual([ids[0], ids[0], ids[1], ids[1]]);
     expect(out.stderr).toMatch(/targets-csv\.csv:3: nobody: no player matches "nobody"/);
@@ -234,9 +234,11 @@ describe('kindred comps: alike and apart agree with the grade grid', () => {
 
 describe('kindred comps: playing time of every comp', () => {
   it('shows PA for hitters in JSON, CSV and the table, the season sample the store holds', async () => {
+    // the default profiles are windows of 3 seasons: each comp's sample is his window's, summed over its seasons
     const json = await runCli('comps', catcher.id, '--store', store, '--format', 'json');
     const result = compsResultSchema.parse(JSON.parse(json.stdout));
-    const c = profiles.groups.get('C');
+    expect(result.query.window).toBe(3);
+    const c = profiles.windows.get(3)?.get('C');
     for (const comp of result.comps) {
       expect(comp.sample_unit).toBe('PA');
       const p = profiles.players.findIndex((x) => x.playerId === comp.player_id);

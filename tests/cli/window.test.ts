@@ -21,8 +21,9 @@ beforeAll(async () => {
   await writeLeagueCsv(league, join(dir, 'roster'));
   single = join(dir, 'single');
   windowed = join(dir, 'windowed');
-  expect((await runCli('build', join(dir, 'roster'), '--store', single, '--no-backtest')).code).toBe(0);
-  const built = await runCli('build', join(dir, 'roster'), '--store', windowed, '--no-backtest', '--windows', '1,3');
+  expect((await runCli('build', join(dir, 'roster'), '--store', single, '--no-backtest', '--windows', '1')).code).toBe(0);
+  // the build's default windows: single seasons and 3 seasons
+  const built = await runCli('build', join(dir, 'roster'), '--store', windowed, '--no-backtest');
   expect(built.code).toBe(0);
   expect(built.stderr).toMatch(/Profiles over 3 seasons: C \d/);
   const store = await openProfileStore(single);
@@ -37,15 +38,25 @@ beforeAll(async () => {
 });
 
 describe('kindred comps --window', () => {
-  it('--window 1 (and no --window) answers byte for byte as a store built without windows, in every format', async () => {
+  it('--window 1 answers byte for byte as a store built without windows (where no --window means 1), in every format', async () => {
     for (const format of ['table', 'json', 'csv']) {
       const before = await runCli('comps', hitter.id, '--store', single, '--season', String(hitter.season), '--level', top, '--format', format);
       expect(before.code).toBe(0);
       const now = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--format', format, '--window', '1');
       expect(now.stdout).toBe(before.stdout);
-      const plain = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--format', format);
-      expect(plain.stdout).toBe(before.stdout);
     }
+  });
+
+  it('defaults comps to windows of 3 seasons in a store that has them; cheaper keeps single seasons', async () => {
+    const at = ['--season', String(hitter.season), '--level', top, '--format', 'json'];
+    const plain = await runCli('comps', hitter.id, '--store', windowed, ...at);
+    const three = await runCli('comps', hitter.id, '--store', windowed, ...at, '--window', '3');
+    expect(plain.code).toBe(0);
+    expect(plain.stdout).toBe(three.stdout);
+    expect(compsResultSchema.parse(JSON.parse(plain.stdout)).query.window).toBe(3);
+    const cheaper = await runCli('cheaper', hitter.id, '--store', windowed, ...at, '--max-share', '1');
+    expect(cheaper.code).toBe(0);
+    expect(cheaper.stdout).not.toMatch(/"window": 3/);
   });
 
   it('--window 3 compares his window ending at the asked season with windows ending at any season, each with the seasons it spans (JSON)', async () => {

@@ -289,3 +289,89 @@ describe('simulateLeague(options) with league parameters varied', () => {
     expect(isoPowerCorrelation(noisy)).toBeLessThan(isoPowerCorrelation(plain) - 0.05);
   });
 });
+
+describe('simulateLeague(options) with planted twins (twinShare)', () => {
+  const base = { seed: 515, firstSeason: 2008, lastSeason: 2026, targetPlayerSeasons: 4000 } as const;
+  const plain = simulateLeague(base);
+  const twinned = simulateLeague({ ...base, twinShare: 0.5 });
+  const tw = twinned.players.twinOf;
+  /** The twinned league's players that are not a planted copy, in order: the plain league's players. */
+  const originals = Array.from({ length: twinned.players.count }, (_, i) => i).filter((i) => (tw[i] as number) < 0 || (tw[i] as number) > i);
+
+  it('plants no twins by default', () => {
+    expect(plain.players.twinOf.every((t) => t === -1)).toBe(true);
+  });
+
+  it('pairs twins both ways, each right after his original, only among players with a top-level season', () => {
+    const pairs = originals.filter((i) => (tw[i] as number) > i);
+    expect(pairs.length).toBeGreaterThan(20);
+    for (const a of pairs) {
+      expect(tw[a]).toBe(a + 1);
+      expect(tw[a + 1]).toBe(a);
+      expect(twinned.players.highestLevel[a]).toBe(twinned.levels.length - 1);
+    }
+    // about half of the top-level careers (binomial, n = the players reaching the top level)
+    const reached = originals.filter((i) => twinned.players.highestLevel[i] === twinned.levels.length - 1).length;
+    expect(pairs.length / reached).toBeGreaterThan(0.35);
+    expect(pairs.length / reached).toBeLessThan(0.65);
+  });
+
+  it('leaves every other player as in the league without twins: same players, same stat lines', () => {
+    expect(originals.length).toBe(plain.players.count);
+    expect(originals.map((i) => twinned.players.names[i])).toEqual(plain.players.names);
+    const newIndex = new Map(originals.map((i, j) => [i, j]));
+    for (const key of ['batting', 'pitching'] as const) {
+      const a = plain[key];
+      const b = twinned[key];
+      const kept: number[] = [];
+      for (let r = 0; r < b.length; r++) if (newIndex.has(b.get(r, 0))) kept.push(r);
+      expect(kept.length).toBe(a.length);
+      for (let r = 0; r < a.length; r += 5) {
+        const rb = kept[r] as number;
+        expect(newIndex.get(b.get(rb, 0))).toBe(a.get(r, 0));
+        for (let c = 1; c < a.width; c++) expect(Object.is(b.get(rb, c), a.get(r, c))).toBe(true);
+      }
+    }
+  });
+
+  it('gives a twin the same true talents, age and levels every season, and stat lines of his own luck', () => {
+    const pairs = originals.filter((i) => (tw[i] as number) > i);
+    let seasons = 0;
+    let differ = 0;
+    for (const a of pairs) {
+      const ra = twinned.truth.rowsOf(a);
+      const rb = twinned.truth.rowsOf(a + 1);
+      expect(rb.count).toBe(ra.count);
+      for (let k = 0; k < ra.count; k++) {
+        const x = twinned.truth.at(ra.first + k);
+        const y = twinned.truth.at(rb.first + k);
+        expect([y.season, y.age, y.levels, y.position]).toEqual([x.season, x.age, x.levels, x.position]);
+        expect([...y.talents]).toEqual([...x.talents]);
+      }
+      expect(twinned.players.birthDates[a + 1]).toBe(twinned.players.birthDates[a]);
+    }
+    // batting lines: same PA per stint (the same playing time), hits drawn apart
+    const b = twinned.batting;
+    const iPA = b.columnIndex('PA');
+    const iH = b.columnIndex('H');
+    const lines = new Map<string, [number, number]>();
+    for (let r = 0; r < b.length; r++) lines.set(`${b.get(r, 0)}|${b.get(r, 1)}|${b.get(r, 2)}|${b.get(r, 3)}`, [b.get(r, iPA), b.get(r, iH)]);
+    for (const a of pairs) {
+      for (const [key, [pa, h]] of lines) {
+        const [p, ...rest] = key.split('|');
+        if (Number(p) !== a) continue;
+        const other = lines.get([a + 1, ...rest].join('|'));
+        if (!other) continue;
+        seasons++;
+        expect(other[0]).toBe(pa);
+        if (other[1] !== h) differ++;
+      }
+    }
+    expect(seasons).toBeGreaterThan(20);
+    expect(differ / seasons).toBeGreaterThan(0.8);
+  });
+
+  it('refuses a twin share outside 0 to 1', () => {
+    expect(() => simulateLeague({ ...base, twinShare: 1.5 })).toThrow(UsageError);
+  });
+});

@@ -73,7 +73,13 @@ describe('openProfileStore (lazy by default)', () => {
     const g = store.groups.get('IF');
     if (!g) throw new Error('no IF group');
     // the group is read whole when first asked for (so any damaged file of it is refused then)
-    for (const f of files.filter((x) => x.startsWith('group-IF.'))) expect([f, store.opened.reads(f)]).toEqual([f, 1]);
+    // (its windows, group-IF.w3.*, are another group to the store: read when a query over windows asks for them)
+    const single = files.filter((x) => x.startsWith('group-IF.') && !/^group-IF\.w\d+\./.test(x));
+    for (const f of single) expect([f, store.opened.reads(f)]).toEqual([f, 1]);
+    for (const f of files.filter((x) => x.startsWith('group-IF.w'))) expect([f, store.opened.reads(f)]).toEqual([f, 0]);
+    const windows = store.windows.get(3)?.get('IF');
+    expect(windows?.window?.size).toBe(3);
+    for (const f of files.filter((x) => x.startsWith('group-IF.w3.'))) expect([f, store.opened.reads(f)]).toEqual([f, 1]);
     for (const row of [1, 2, 3]) findComps(store, playerTarget(store, { group: 'IF', row }), DEFAULT_COMPS_OPTIONS);
     expect(store.opened.reads('group-IF.z.f32')).toBe(1);
     expect(store.opened.reads('group-OF.json')).toBe(0);
@@ -81,7 +87,8 @@ describe('openProfileStore (lazy by default)', () => {
     answers(store);
     store.outcomes();
     store.outcomes();
-    for (const f of files) expect([f, store.opened.reads(f)]).toEqual([f, 1]);
+    // every file once, but the windows of the groups no query over windows asked for (never)
+    for (const f of files) expect([f, store.opened.reads(f)]).toEqual([f, /^group-[A-Z]+\.w\d+\./.test(f) && !f.startsWith('group-IF.w') ? 0 : 1]);
   });
 
   it('refuses a file damaged after the open when it is first read, with the code an open gives', async () => {

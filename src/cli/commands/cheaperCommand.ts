@@ -4,6 +4,7 @@ import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { windowView } from '../../query/windowView.ts';
+import { requestWindow } from '../../request/requestWindow.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import type { CheaperResult } from '../../jobs/CheaperResult.ts';
@@ -27,7 +28,8 @@ export function cheaperCommand(io: CliIo, setExit: (code: number) => void): Comm
   addRequestOptions(cmd, 'cheaper');
   cmd.action(async (player: string | undefined) => {
     const req = requestFrom(cmd, 'cheaper', { player });
-    const store = windowView(await openProfileStore(req.need('store')), req.need('window'));
+    const stored = await openProfileStore(req.need('store'));
+    const store = windowView(stored, requestWindow(req, stored));
     const format = req.need('format');
     const batch = req.get('batch');
     if (batch !== undefined) {

@@ -3,6 +3,7 @@ import type { CliIo } from '../CliIo.ts';
 import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { windowView } from '../../query/windowView.ts';
+import { requestWindow } from '../../request/requestWindow.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import type { CompsResult } from '../../query/CompsResult.ts';
@@ -27,7 +28,8 @@ export function compsCommand(io: CliIo, setExit: (code: number) => void): Comman
   addRequestOptions(cmd, 'comps');
   cmd.action(async (player: string | undefined) => {
     const req = requestFrom(cmd, 'comps', { player });
-    const store = windowView(await openProfileStore(req.need('store')), req.need('window'));
+    const stored = await openProfileStore(req.need('store'));
+    const store = windowView(stored, requestWindow(req, stored));
     const format = req.need('format');
     const batch = req.get('batch');
     if (batch !== undefined) {

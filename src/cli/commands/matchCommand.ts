@@ -4,6 +4,7 @@ import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { windowView } from '../../query/windowView.ts';
+import { requestWindow } from '../../request/requestWindow.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { resolvePlayer } from '../../query/resolvePlayer.ts';
@@ -33,7 +34,8 @@ export function matchCommand(io: CliIo, setExit: (code: number) => void): Comman
     const withWant = cmd.getOptionValue('want') !== undefined;
     if (withWant && second !== undefined) throw new UsageError('with --want give only the candidate (player-b)');
     const req = requestFrom(cmd, 'match', withWant ? { candidate: first } : { player: first, candidate: second });
-    const store = windowView(await openProfileStore(req.need('store')), req.need('window'));
+    const stored = await openProfileStore(req.need('store'));
+    const store = windowView(stored, requestWindow(req, stored));
     const format = req.need('format');
     const batch = req.get('batch');
     if (batch !== undefined) {

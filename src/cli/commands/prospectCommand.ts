@@ -4,6 +4,7 @@ import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
 import { windowView } from '../../query/windowView.ts';
+import { requestWindow } from '../../request/requestWindow.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProspectResult } from '../../jobs/ProspectResult.ts';
 import { readBacktestFile } from '../../outlook/backtestStore.ts';
@@ -27,7 +28,8 @@ export function prospectCommand(io: CliIo, setExit: (code: number) => void): Com
   addRequestOptions(cmd, 'prospect');
   cmd.action(async (player: string | undefined) => {
     const req = requestFrom(cmd, 'prospect', { player });
-    const store = windowView(await openProfileStore(req.need('store')), req.need('window'));
+    const stored = await openProfileStore(req.need('store'));
+    const store = windowView(stored, requestWindow(req, stored));
     const outcomes = store.outcomes();
     const backtest = await readBacktestFile(store);
     const format = req.need('format');
