@@ -157,6 +157,23 @@ describe('kindred build --embed', () => {
     expect(r.query.space).toBe('input');
   });
 
+  it('--objective cross-season (linear: --hidden none --activation identity) trains on pairs of seasons, records it, and answers with attributions that add up', async () => {
+    const store = join(dir, 'cross-season');
+    const b = await runCli('build', roster, '--store', store, '--embed', 'autoencoder', '--objective', 'cross-season', '--hidden', 'none', '--activation', 'identity', '--latent', '4', ...QUICK);
+    expect(b.code, b.stderr).toBe(0);
+    const summary = JSON.parse(await readFile(join(store, 'group-IF.embedding.json'), 'utf8')) as { search: { rule: string }; training: { settings: { autoencoder: { objective: string } } } };
+    expect(summary.search.rule).toMatch(/^cross-season objective \(\d+ pairs: a row and the same player's nearest other season\); fixed latent size 4$/);
+    expect(summary.training.settings.autoencoder.objective).toBe('cross-season');
+    const model = JSON.parse(await readFile(join(store, 'group-IF.model.json'), 'utf8')) as { hidden: number[]; layers: unknown[] };
+    expect([model.hidden, model.layers.length]).toEqual([[], 2]);
+    const r = await comps(store);
+    expect(r.query.space).toBe('autoencoder');
+    for (const c of r.comps) expect(c.dimensions.reduce((a, d) => a + (d.attribution ?? NaN), 0)).toBeCloseTo(c.attribution_total ?? NaN, 9);
+    const bad = await runCli('build', roster, '--store', join(dir, 'y'), '--embed', 'autoencoder', '--objective', 'talent');
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toContain('expected reconstruct or cross-season');
+  });
+
   it('refuses an unknown space with a usage error (exit code 2)', async () => {
     const r = await runCli('build', roster, '--store', join(dir, 'x'), '--embed', 'umap');
     expect(r.code).toBe(2);
