@@ -33,6 +33,8 @@ const AIM = 0.95;
 
 /** Build settings of each space compared. */
 export const VARIANTS: Readonly<Record<string, EmbedSettingsInput>> = {
+  // more variants to try, as JSON from the environment: KINDRED_BENCH_VARIANTS='{"name": {...settings}}'
+  ...(process.env.KINDRED_BENCH_VARIANTS ? (JSON.parse(process.env.KINDRED_BENCH_VARIANTS) as Record<string, EmbedSettingsInput>) : {}),
   none: { method: 'none' },
   pca: { method: 'pca', seed: 1 },
   autoencoder: { method: 'autoencoder', seed: 1 },

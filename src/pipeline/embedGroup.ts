@@ -13,6 +13,7 @@ import { DEFAULT_CAPACITY_STEPS, searchCapacity, type CapacityStep } from '../em
 import { trainAutoencoder, type LearningHistory } from '../embed/trainAutoencoder.ts';
 import type { TrainOptions } from '../embed/TrainOptions.ts';
 import { crossSeasonPairs } from '../embed/crossSeasonPairs.ts';
+import { isometricCode } from '../embed/isometricCode.ts';
 import type { EmbedSettings } from './EmbedSettings.ts';
 
 /** Latent sizes tried by the capacity search when the hidden widths are fixed by the user. */
@@ -64,7 +65,11 @@ export function embedGroup(data: EmbedData, settings: EmbedSettings, seasons?: A
   const started = performance.now();
   if (data.d < 2) throw new UsageError(`embedding: ${data.d} dimension (expected at least 2 to compress)`);
   if (data.n < 4) throw new UsageError(`embedding: ${data.n} rows (expected at least 4)`);
-  const result = settings.method === 'pca' ? embedPca(data, settings) : embedAutoencoderFor(data, settings, seasons);
+  const fitted = settings.method === 'pca' ? embedPca(data, settings) : embedAutoencoderFor(data, settings, seasons);
+  const result =
+    fitted.model.space === 'autoencoder' && settings.autoencoder.isometric
+      ? { ...fitted, model: { space: 'autoencoder' as const, model: isometricCode(fitted.model.model) }, rule: `${fitted.rule}; code re-expressed so that code distances are the decoder's (isometric)` }
+      : fitted;
   const dim = modelCodeSize(result.model);
   const codes = new Float64Array(data.n * dim);
   for (let i = 0; i < data.n; i++) codes.set(result.model.model.encode(data.x.subarray(i * data.d, (i + 1) * data.d)), i * dim);
