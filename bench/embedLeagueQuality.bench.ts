@@ -1,10 +1,11 @@
 /**
  * The learned embeddings against the input space on the standard varied leagues (bench/leagues.ts):
- *   node --import tsx bench/embedLeagueQuality.bench.ts [playerSeasons] [variants] [leagues] [targetsPerGroup]
+ *   node --import tsx bench/embedLeagueQuality.bench.ts [playerSeasons] [variants] [leagues] [targetsPerGroup] [league names]
  * e.g. `... 20000 autoencoder,cross-season,cross-season-linear 4 40` (also run by `npm run bench -- quality`).
  * Each league is built once per space: the input space (`none`, the reference) and every variant:
  * - `autoencoder`: the plain autoencoder (reconstructs each profile), capacity search;
- * - `cross-season`: the autoencoder trained to give back the same player's nearest other season;
+ * - `cross-season`: the autoencoder trained to give back the same player's nearest other season
+ *   (isometric code, search margin 0.005);
  * - `cross-season-linear`: the same objective with no hidden layer and identity activation (a linear
  *   encoder and decoder: a reduced-rank regression of one season on the other, fitted by gradient);
  * - `pca`.
@@ -38,8 +39,9 @@ export const VARIANTS: Readonly<Record<string, EmbedSettingsInput>> = {
   none: { method: 'none' },
   pca: { method: 'pca', seed: 1 },
   autoencoder: { method: 'autoencoder', seed: 1 },
-  'cross-season': { method: 'autoencoder', seed: 1, autoencoder: { objective: 'cross-season' } },
-  'cross-season-linear': { method: 'autoencoder', seed: 1, autoencoder: { objective: 'cross-season', hidden: [], activation: 'identity' } },
+  // the cross-season spaces with the search margin they were measured with (docs/embedding.md)
+  'cross-season': { method: 'autoencoder', seed: 1, autoencoder: { objective: 'cross-season', margin: 0.005 } },
+  'cross-season-linear': { method: 'autoencoder', seed: 1, autoencoder: { objective: 'cross-season', hidden: [], activation: 'identity', margin: 0.005 } },
 };
 
 interface Cell {
@@ -47,11 +49,11 @@ interface Cell {
   readonly targets: number;
 }
 
-export async function runEmbedLeagueQuality(playerSeasons: number, variants: readonly string[], leagueCount: number, targetsPerGroup: number): Promise<string[]> {
+export async function runEmbedLeagueQuality(playerSeasons: number, variants: readonly string[], leagueCount: number, targetsPerGroup: number, only?: readonly string[]): Promise<string[]> {
   const unknown = variants.filter((v) => !(v in VARIANTS));
   if (unknown.length > 0) throw new Error(`unknown variant ${unknown.join(', ')}; known: ${Object.keys(VARIANTS).join(', ')}`);
   const spaces = ['none', ...variants.filter((v) => v !== 'none')];
-  const leagues = benchLeagues(playerSeasons).slice(0, leagueCount);
+  const leagues = benchLeagues(playerSeasons).filter((l) => !only || only.includes(l.name)).slice(0, leagueCount);
   // cells[league][space][level]
   const cells: Map<string, Cell>[][] = [];
   const levelsOf: string[][] = [];
@@ -128,5 +130,6 @@ if (import.meta.url === `file://${process.argv[1]}`) {
   const variants = (process.argv[3] ?? 'autoencoder,cross-season,cross-season-linear').split(',');
   const l = Number(process.argv[4] ?? 4);
   const t = Number(process.argv[5] ?? 40);
-  for (const line of await runEmbedLeagueQuality(n, variants, l, t)) console.log(line);
+  const only = process.argv[6]?.split(',');
+  for (const line of await runEmbedLeagueQuality(n, variants, l, t, only)) console.log(line);
 }

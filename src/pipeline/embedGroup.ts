@@ -57,7 +57,8 @@ export interface GroupEmbedding {
  *   every row. With a fixed latent, one training on every row.
  * - the autoencoder's objective `cross-season` (needs `seasons`, one per row): the same, trained on
  *   the pairs of crossSeasonPairs (each row against the same player's nearest other seasons) instead
- *   of the rows themselves; "row" above then reads "pair". With fewer than MIN_CROSS_SEASON_PAIRS pairs
+ *   of the rows themselves; "row" above then reads "pair"; the kept code is then made isometric to the
+ *   decoder's first layer (isometricCode). With fewer than MIN_CROSS_SEASON_PAIRS pairs
  *   the group falls back to reconstruction, and its rule says so. Every row is then encoded.
  * Sizes are capped at d - 1 (a code as wide as the input compresses nothing). Deterministic for a seed.
  */
@@ -65,11 +66,7 @@ export function embedGroup(data: EmbedData, settings: EmbedSettings, seasons?: A
   const started = performance.now();
   if (data.d < 2) throw new UsageError(`embedding: ${data.d} dimension (expected at least 2 to compress)`);
   if (data.n < 4) throw new UsageError(`embedding: ${data.n} rows (expected at least 4)`);
-  const fitted = settings.method === 'pca' ? embedPca(data, settings) : embedAutoencoderFor(data, settings, seasons);
-  const result =
-    fitted.model.space === 'autoencoder' && settings.autoencoder.isometric
-      ? { ...fitted, model: { space: 'autoencoder' as const, model: isometricCode(fitted.model.model) }, rule: `${fitted.rule}; code re-expressed so that code distances are the decoder's (isometric)` }
-      : fitted;
+  const result = settings.method === 'pca' ? embedPca(data, settings) : embedAutoencoderFor(data, settings, seasons);
   const dim = modelCodeSize(result.model);
   const codes = new Float64Array(data.n * dim);
   for (let i = 0; i < data.n; i++) codes.set(result.model.model.encode(data.x.subarray(i * data.d, (i + 1) * data.d)), i * dim);
@@ -122,7 +119,12 @@ function embedAutoencoderFor(data: EmbedData, settings: EmbedSettings, seasons: 
     return { ...fitted, rule: `${fitted.rule} (reconstruction: ${pairs.n} cross-season pairs, fewer than ${MIN_CROSS_SEASON_PAIRS})` };
   }
   const fitted = embedAutoencoder({ x: pairs.x, y: pairs.y, n: pairs.n, d: pairs.d, groups: pairs.groups }, settings, 'pair');
-  return { ...fitted, rule: `cross-season objective (${pairs.n} pairs: a row and the same player's nearest other season); ${fitted.rule}` };
+  if (fitted.model.space !== 'autoencoder') return fitted;
+  return {
+    ...fitted,
+    model: { space: 'autoencoder', model: isometricCode(fitted.model.model) },
+    rule: `cross-season objective (${pairs.n} pairs: a row and the same player's nearest other season); ${fitted.rule}; code distances made the decoder's (isometric code)`,
+  };
 }
 
 /** `unit` names what data's rows are in the rule: profiles ('row') or cross-season pairs ('pair'). */

@@ -53,7 +53,7 @@ describe('embedGroup(data, settings)', () => {
     const settings = resolveEmbedSettings({ method: 'autoencoder', seed: 3, autoencoder: { objective: 'cross-season', latent: 2, maxEpochs: 3 } });
     const e = embedGroup(data, settings, seasons);
     // three seasons a player: the middle one pairs with both others, the first and last with the middle
-    expect(e.rule).toBe('cross-season objective (400 pairs: a row and the same player\'s nearest other season); fixed latent size 2');
+    expect(e.rule).toBe('cross-season objective (400 pairs: a row and the same player\'s nearest other season); fixed latent size 2; code distances made the decoder\'s (isometric code)');
     expect(e.searchRows).toBe(400);
     expect(e.codes.length).toBe(300 * 2);
     const plain = embedGroup(data, resolveEmbedSettings({ method: 'autoencoder', seed: 3, autoencoder: { latent: 2, maxEpochs: 3 } }));
