@@ -125,7 +125,7 @@ describe('kindred build --embed', () => {
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(/group-IF\.model\.json has sha256 [0-9a-f]{64} \(expected [0-9a-f]{64}/);
     expect(r.stderr).toContain('[kindred.store.corrupt]');
-  });
+  }, 180_000);
 
   it('writes the learning curve and drivers charts beside the store, and `kindred embedding` lists them', async () => {
     const store = join(dir, 'autoencoder');
@@ -155,7 +155,7 @@ describe('kindred build --embed', () => {
     await expect(stat(`${store}.charts`)).rejects.toThrow();
     const r = await comps(store);
     expect(r.query.space).toBe('input');
-  });
+  }, 180_000);
 
   it('--objective cross-season (linear: --hidden none --activation identity) trains on pairs of seasons, records it, and answers with attributions that add up', async () => {
     const store = join(dir, 'cross-season');
