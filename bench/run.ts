@@ -16,6 +16,7 @@ const BENCHES: readonly { name: string; file: string; args: readonly string[]; w
   { name: 'quality', file: 'shrinkageQuality.bench.ts', args: ['30000', '120'], what: 'comps quality by case (top-level hitters 400+ PA, SP 500+ BF, RP 150+ BF): fixed-table against fitted shrinkage' },
   { name: 'quality', file: 'qualityCases.bench.ts', args: ['30000', '120', '4', '60'], what: 'comps quality cases and aims (top-level hitters 400+ PA, SP 500+ BF, RP 150+ BF, planted twins found in the top 10) by profile window (1, 2, 3 seasons), default pool rules' },
   { name: 'quality', file: 'pitcherQuality.bench.ts', args: ['30000', '80', '4', '1,3'], what: 'why pitchers\u2019 comps are further from the ideal: dimension weights, tracked against untracked seasons, true talents missed, weight and missing-value variants' },
+  { name: 'quality', file: 'embedLeagueQuality.bench.ts', args: ['20000', 'autoencoder,cross-season,cross-season-linear', '4', '40'], what: 'learned spaces (plain and cross-season autoencoders, the linear variant) against the input space at every level of the standard leagues' },
   { name: 'index', file: 'index.bench.ts', args: [], what: 'HNSW against brute force on random vectors' },
   { name: 'embed', file: 'embed.bench.ts', args: [], what: 'autoencoder training time at 100,000 rows' },
   { name: 'embed-quality', file: 'embedQuality.bench.ts', args: ['30000', 'none,pca,autoencoder'], what: 'comps quality in the input, PCA and autoencoder spaces' },

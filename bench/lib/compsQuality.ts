@@ -12,6 +12,7 @@ import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts'
 import { findCompsWithRows, type CompsOptions } from '../../src/query/findComps.ts';
 import { quantileSorted } from '../../src/stats/quantile.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
+import { QueryError } from '../../src/errors/KindredError.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 
 /** The simulator talents a group's comps are scored on (null: every talent of the kind). */
@@ -131,7 +132,14 @@ function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: Q
     const row = candidates[Math.floor(next() * candidates.length)] as number;
     if (Number.isNaN(talents[row * t] as number)) continue;
     const target = playerTarget(store, { group: g.group, row });
-    const { rows } = findCompsWithRows(store, target, { ...o.compsOptions, k: o.k, filter });
+    let rows: readonly number[];
+    try {
+      ({ rows } = findCompsWithRows(store, target, { ...o.compsOptions, k: o.k, filter }));
+    } catch (e) {
+      // a season with no value on any weighted dimension cannot be a target (kindred.query.badTarget): draw another
+      if (e instanceof QueryError && e.code === 'kindred.query.badTarget') continue;
+      throw e;
+    }
     if (rows.length < o.k) continue;
     const compMean = rows.reduce((a, r) => a + dist(row, r), 0) / rows.length;
     // the k truly nearest other players (each at his nearest season)

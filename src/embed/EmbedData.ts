@@ -13,6 +13,12 @@ export interface EmbedData {
   readonly d: number;
   /** Player id per row (length n). */
   readonly groups: readonly string[];
+  /**
+   * The row each profile is trained to give back (n * d, NaN = missing): absent for a plain autoencoder
+   * (the target is the row itself), another season of the same player for the cross-season objective
+   * (crossSeasonPairs). The loss counts the entries present in both the input and the target.
+   */
+  readonly y?: Float64Array;
 }
 
 /**
@@ -29,16 +35,21 @@ export function checkEmbedData(data: EmbedData): void {
   if (x.length !== n * d) {
     throw new UsageError(`embed data: x has ${x.length} values (expected n * d = ${n * d})`, { n, d });
   }
+  if (data.y && data.y.length !== n * d) {
+    throw new UsageError(`embed data: y has ${data.y.length} values (expected n * d = ${n * d})`, { n, d });
+  }
   if (groups.length !== n) {
     throw new UsageError(`embed data: ${groups.length} groups (expected one per row, ${n})`, { n });
   }
-  for (let i = 0; i < x.length; i++) {
-    const v = x[i] ?? NaN;
-    if (v === Infinity || v === -Infinity) {
-      const row = Math.floor(i / d);
-      throw new UsageError(`embed data: row ${row} dimension ${i - row * d} is ${v} (expected a finite number or NaN)`, {
-        row,
-      });
+  for (const [name, values] of [['x', x], ['y', data.y ?? new Float64Array(0)]] as const) {
+    for (let i = 0; i < values.length; i++) {
+      const v = values[i] ?? NaN;
+      if (v === Infinity || v === -Infinity) {
+        const row = Math.floor(i / d);
+        throw new UsageError(`embed data: ${name} row ${row} dimension ${i - row * d} is ${v} (expected a finite number or NaN)`, {
+          row,
+        });
+      }
     }
   }
 }

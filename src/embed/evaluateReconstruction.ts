@@ -4,7 +4,8 @@ import { createWorkspace, forwardBatch, loadRows, reconstructionError } from './
 
 /**
  * Masked reconstruction mean squared error of `rows` (all rows when omitted): the sum of squared
- * errors over present entries divided by their count, no dropout, no penalty. 0 when nothing is present.
+ * errors against each row's target (`data.y`, else the row itself) over the entries present in both,
+ * divided by their count, no dropout, no penalty. 0 when nothing is present.
  *
  * @example
  * evaluateReconstruction(model, data); // => e.g. 0.21 (z-score units squared)
@@ -16,7 +17,7 @@ export function evaluateReconstruction(model: Autoencoder, data: EmbedData, rows
   let present = 0;
   for (let from = 0; from < indices.length; from += ws.capacity) {
     const to = Math.min(indices.length, from + ws.capacity);
-    loadRows(ws, data.x, data.d, indices, from, to);
+    loadRows(ws, data.x, data.d, indices, from, to, data.y);
     forwardBatch(model, ws, null);
     const e = reconstructionError(model, ws);
     sse += e.sse;

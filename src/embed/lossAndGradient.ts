@@ -6,11 +6,12 @@ import type { Rng } from '../random/Rng.ts';
  * The training objective of the autoencoder and its gradient by back-propagation
  * (Rumelhart, Hinton and Williams 1986), on a batch of rows held in a reusable workspace.
  *
- * loss = (1 / M) * sum over PRESENT entries (reconstruction - x)^2      (masked mean squared error)
+ * loss = (1 / M) * sum over PRESENT entries (output - y)^2              (masked mean squared error)
  *      + (l2 / 2) * sum of squared weights + l1 * sum of |weights|       (biases are not penalised)
- * where M is the number of present (non-NaN) entries in the batch. A missing input is fed as 0 and its
- * entry is left out of the error, so the network is never trained toward a made-up value. With M = 0 the
- * reconstruction term is 0. Dropout (Srivastava et al. 2014, who scale at test time) in its inverted
+ * where y is the row's target: the input x itself (a plain autoencoder) or, for the cross-season
+ * objective, another season of the same player; an entry is PRESENT when both x and y have it, and M
+ * counts the present entries in the batch. A missing input is fed as 0 and its entry is left out of the
+ * error, so the network is never trained toward a made-up value. With M = 0 the error term is 0. Dropout (Srivastava et al. 2014, who scale at test time) in its inverted
  * form (common practice): a hidden unit is kept with probability 1 - rate and scaled by 1 / (1 - rate)
  * during training, untouched at inference.
  *
@@ -24,7 +25,9 @@ export interface Workspace {
   readonly d: number;
   /** capacity * d, missing fed as 0. */
   readonly input: Float64Array;
-  /** capacity * d, 1 where the entry is present. */
+  /** capacity * d, the target (the input itself for a plain autoencoder), missing as 0. */
+  readonly target: Float64Array;
+  /** capacity * d, 1 where the entry is present in both the input and the target. */
   readonly present: Uint8Array;
   /** Per layer, capacity * outSize: the output passed on (after dropout). */
   readonly outputs: Float64Array[];
@@ -78,6 +81,7 @@ export function createWorkspace(model: Autoencoder, capacity: number): Workspace
     capacity,
     d: model.d,
     input: new Float64Array(capacity * model.d),
+    target: new Float64Array(capacity * model.d),
     present: new Uint8Array(capacity * model.d),
     outputs,
     activated,
@@ -94,17 +98,23 @@ export function createGradients(model: Autoencoder): Gradients {
   };
 }
 
-/** Copies rows `indices[from, to)` of `x` (n * d, NaN = missing) into the workspace. */
-export function loadRows(ws: Workspace, x: Float64Array, d: number, indices: Int32Array, from: number, to: number): void {
+/**
+ * Copies rows `indices[from, to)` of `x` (n * d, NaN = missing) into the workspace, with their targets
+ * from `y` (same layout) or, when `y` is omitted, the rows themselves.
+ */
+export function loadRows(ws: Workspace, x: Float64Array, d: number, indices: Int32Array, from: number, to: number, y?: Float64Array): void {
   const rows = to - from;
+  const targets = y ?? x;
   for (let r = 0; r < rows; r++) {
     const src = (indices[from + r] ?? 0) * d;
     const dst = r * d;
     for (let j = 0; j < d; j++) {
       const v = x[src + j] ?? NaN;
+      const t = targets[src + j] ?? NaN;
       const missing = Number.isNaN(v);
       ws.input[dst + j] = missing ? 0 : v;
-      ws.present[dst + j] = missing ? 0 : 1;
+      ws.target[dst + j] = Number.isNaN(t) ? 0 : t;
+      ws.present[dst + j] = missing || Number.isNaN(t) ? 0 : 1;
     }
   }
   ws.rows = rows;
@@ -150,7 +160,7 @@ export function forwardBatch(model: Autoencoder, ws: Workspace, dropout: Dropout
   });
 }
 
-/** Sum of squared errors over present entries of the last forward pass, and their count. */
+/** Sum of squared errors (output - target) over present entries of the last forward pass, and their count. */
 export function reconstructionError(model: Autoencoder, ws: Workspace): { sse: number; present: number } {
   const out = ws.outputs[model.layers.length - 1] ?? new Float64Array(0);
   const count = ws.rows * ws.d;
@@ -158,7 +168,7 @@ export function reconstructionError(model: Autoencoder, ws: Workspace): { sse: n
   let present = 0;
   for (let i = 0; i < count; i++) {
     if (ws.present[i] === 0) continue;
-    const e = (out[i] ?? 0) - (ws.input[i] ?? 0);
+    const e = (out[i] ?? 0) - (ws.target[i] ?? 0);
     sse += e * e;
     present++;
   }
@@ -178,12 +188,12 @@ export function lossAndGradient(
   const rows = ws.rows;
   const last = model.layers.length - 1;
 
-  // d loss / d output for the (linear) output layer: 2 (y - x) / M on present entries, 0 elsewhere.
+  // d loss / d output for the (linear) output layer: 2 (output - y) / M on present entries, 0 elsewhere.
   const out = ws.outputs[last] ?? new Float64Array(0);
   const top = ws.deltas[last] ?? new Float64Array(0);
   const scale = present > 0 ? 2 / present : 0;
   for (let i = 0; i < rows * ws.d; i++) {
-    top[i] = ws.present[i] === 0 ? 0 : scale * ((out[i] ?? 0) - (ws.input[i] ?? 0));
+    top[i] = ws.present[i] === 0 ? 0 : scale * ((out[i] ?? 0) - (ws.target[i] ?? 0));
   }
 
   for (let l = last; l >= 0; l--) {

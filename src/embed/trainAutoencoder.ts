@@ -29,7 +29,9 @@ export interface TrainResult {
 }
 
 /**
- * Trains an autoencoder by mini-batch Adam on the masked reconstruction error (see `lossAndGradient`),
+ * Trains an autoencoder by mini-batch Adam on the masked reconstruction error (see `lossAndGradient`)
+ * against each row's target (`data.y`: another season of the player for the cross-season objective,
+ * else the row itself),
  * with a seeded validation split by player and early stopping (common practice; Prechelt 1998,
  * "Early stopping - but when?"):
  * - after each epoch the validation loss is measured; the weights are snapshotted whenever it reaches
@@ -76,7 +78,7 @@ export function trainAutoencoder(data: EmbedData, partial: Partial<TrainOptions>
     let sse = 0;
     let present = 0;
     for (let from = 0; from < order.length; from += ws.capacity) {
-      loadRows(ws, data.x, data.d, order, from, Math.min(order.length, from + ws.capacity));
+      loadRows(ws, data.x, data.d, order, from, Math.min(order.length, from + ws.capacity), data.y);
       const batch = lossAndGradient(model, ws, reg, dropout, grads);
       adam.step(model, grads);
       sse += batch.sse;

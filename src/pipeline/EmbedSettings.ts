@@ -12,8 +12,20 @@ type PassedTrainOptions = Pick<
   'activation' | 'learningRate' | 'batchSize' | 'maxEpochs' | 'patience' | 'minDelta' | 'l2' | 'l1' | 'dropout' | 'valFraction'
 >;
 
+/**
+ * What the autoencoder learns to give back: `reconstruct`, the profile itself (a plain autoencoder), or
+ * `cross-season`, the same player's nearest other season (src/embed/crossSeasonPairs.ts), so that its
+ * code keeps what persists from season to season and drops one season's luck; its code is then
+ * re-expressed so that code distances are the decoder's (src/embed/isometricCode.ts).
+ */
+export type EmbedObjective = 'reconstruct' | 'cross-season';
+
+export const EMBED_OBJECTIVES: readonly EmbedObjective[] = ['reconstruct', 'cross-season'];
+
 /** Autoencoder settings of a build: the training settings plus the network size and the capacity search. */
 export interface AutoencoderSettings extends PassedTrainOptions {
+  /** The training target (default `reconstruct`). */
+  readonly objective: EmbedObjective;
   /** Encoder hidden widths; null = the capacity ladder's widths (DEFAULT_CAPACITY_STEPS) or [16] for a fixed latent. */
   readonly hidden: readonly number[] | null;
   /** Code size, or 'search' for the capacity search. */
@@ -43,6 +55,7 @@ export interface EmbedSettings {
 }
 
 export const DEFAULT_AUTOENCODER_SETTINGS: AutoencoderSettings = {
+  objective: 'reconstruct',
   hidden: null,
   latent: 'search',
   activation: DEFAULT_TRAIN_OPTIONS.activation,
@@ -92,6 +105,7 @@ export function resolveEmbedSettings(input: EmbedSettingsInput = {}): EmbedSetti
   if (!(s.pcaVariance > 0 && s.pcaVariance <= 1)) bad('pcaVariance', s.pcaVariance, '0 < share <= 1');
   if (!isCount(s.driverTargets)) bad('driverTargets', s.driverTargets, 'a whole number >= 0');
   if (!(Number.isInteger(s.driverComps) && s.driverComps >= 1)) bad('driverComps', s.driverComps, 'a positive whole number');
+  if (!EMBED_OBJECTIVES.includes(autoencoder.objective)) bad('objective', autoencoder.objective, EMBED_OBJECTIVES.join(', '));
   if (autoencoder.latent !== 'search' && !(Number.isInteger(autoencoder.latent) && autoencoder.latent >= 1)) {
     bad('latent', autoencoder.latent, 'a positive whole number or "search"');
   }

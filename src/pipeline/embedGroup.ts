@@ -12,12 +12,16 @@ import { sampleByPlayer } from '../embed/sampleByPlayer.ts';
 import { DEFAULT_CAPACITY_STEPS, searchCapacity, type CapacityStep } from '../embed/searchCapacity.ts';
 import { trainAutoencoder, type LearningHistory } from '../embed/trainAutoencoder.ts';
 import type { TrainOptions } from '../embed/TrainOptions.ts';
+import { crossSeasonPairs } from '../embed/crossSeasonPairs.ts';
+import { isometricCode } from '../embed/isometricCode.ts';
 import type { EmbedSettings } from './EmbedSettings.ts';
 
 /** Latent sizes tried by the capacity search when the hidden widths are fixed by the user. */
 const SEARCH_LATENTS = [2, 3, 4, 6, 8];
 /** Hidden width of a fixed-latent autoencoder when none is given. */
 const DEFAULT_HIDDEN = [16];
+/** Fewest cross-season pairs to train on; below it the group's autoencoder reconstructs its profiles instead (a project choice). */
+export const MIN_CROSS_SEASON_PAIRS = 40;
 
 export interface GroupHistory {
   readonly size: number;
@@ -51,13 +55,18 @@ export interface GroupEmbedding {
  * - autoencoder with latent 'search': the capacity search (searchCapacity, margin) on a sample of whole
  *   players of at most `searchRows` rows; if that was a sample, the chosen size is trained again on
  *   every row. With a fixed latent, one training on every row.
+ * - the autoencoder's objective `cross-season` (needs `seasons`, one per row): the same, trained on
+ *   the pairs of crossSeasonPairs (each row against the same player's nearest other seasons) instead
+ *   of the rows themselves; "row" above then reads "pair"; the kept code is then made isometric to the
+ *   decoder's first layer (isometricCode). With fewer than MIN_CROSS_SEASON_PAIRS pairs
+ *   the group falls back to reconstruction, and its rule says so. Every row is then encoded.
  * Sizes are capped at d - 1 (a code as wide as the input compresses nothing). Deterministic for a seed.
  */
-export function embedGroup(data: EmbedData, settings: EmbedSettings): GroupEmbedding {
+export function embedGroup(data: EmbedData, settings: EmbedSettings, seasons?: ArrayLike<number>): GroupEmbedding {
   const started = performance.now();
   if (data.d < 2) throw new UsageError(`embedding: ${data.d} dimension (expected at least 2 to compress)`);
   if (data.n < 4) throw new UsageError(`embedding: ${data.n} rows (expected at least 4)`);
-  const result = settings.method === 'pca' ? embedPca(data, settings) : embedAutoencoder(data, settings);
+  const result = settings.method === 'pca' ? embedPca(data, settings) : embedAutoencoderFor(data, settings, seasons);
   const dim = modelCodeSize(result.model);
   const codes = new Float64Array(data.n * dim);
   for (let i = 0; i < data.n; i++) codes.set(result.model.model.encode(data.x.subarray(i * data.d, (i + 1) * data.d)), i * dim);
@@ -101,7 +110,25 @@ function embedPca(data: EmbedData, settings: EmbedSettings): Fitted {
   };
 }
 
-function embedAutoencoder(data: EmbedData, settings: EmbedSettings): Fitted {
+function embedAutoencoderFor(data: EmbedData, settings: EmbedSettings, seasons: ArrayLike<number> | undefined): Fitted {
+  if (settings.autoencoder.objective !== 'cross-season') return embedAutoencoder(data, settings);
+  if (!seasons) throw new UsageError('embedding: the cross-season objective needs each row\'s season');
+  const pairs = crossSeasonPairs(data, seasons);
+  if (pairs.n < MIN_CROSS_SEASON_PAIRS) {
+    const fitted = embedAutoencoder(data, settings);
+    return { ...fitted, rule: `${fitted.rule} (reconstruction: ${pairs.n} cross-season pairs, fewer than ${MIN_CROSS_SEASON_PAIRS})` };
+  }
+  const fitted = embedAutoencoder({ x: pairs.x, y: pairs.y, n: pairs.n, d: pairs.d, groups: pairs.groups }, settings, 'pair');
+  if (fitted.model.space !== 'autoencoder') return fitted;
+  return {
+    ...fitted,
+    model: { space: 'autoencoder', model: isometricCode(fitted.model.model) },
+    rule: `cross-season objective (${pairs.n} pairs: a row and the same player's nearest other season); ${fitted.rule}; code distances made the decoder's (isometric code)`,
+  };
+}
+
+/** `unit` names what data's rows are in the rule: profiles ('row') or cross-season pairs ('pair'). */
+function embedAutoencoder(data: EmbedData, settings: EmbedSettings, unit: 'row' | 'pair' = 'row'): Fitted {
   const a = settings.autoencoder;
   const train: Omit<TrainOptions, 'latent' | 'hidden'> = {
     activation: a.activation,
@@ -168,7 +195,7 @@ function embedAutoencoder(data: EmbedData, settings: EmbedSettings): Fitted {
   const kept: GroupHistory = { size: choice.size, hidden: choice.hidden, bestEpoch: final.bestEpoch, history: final.history };
   return {
     model: { space: 'autoencoder', model: final.model },
-    rule: `${rule}, on ${searchData.n} of ${data.n} rows (whole players); the chosen size then trained on every row`,
+    rule: `${rule}, on ${searchData.n} of ${data.n} ${unit}s (whole players); the chosen size then trained on every ${unit}`,
     searchRows: searchData.n,
     rows,
     histories: [...histories, kept],

@@ -48,7 +48,7 @@ export async function embedProfiles(g: GroupProfiles, settings: EmbedSettings): 
   const scale = settings.input === 'weighted' ? Float64Array.from(g.redundancy, Math.sqrt) : new Float64Array(d).fill(1);
   const x = Float64Array.from(g.z, (v, i) => v * (scale[i % d] ?? 1));
   const data: EmbedData = { x, n, d, groups: players };
-  const fitted = embedGroup(data, settings);
+  const fitted = embedGroup(data, settings, g.meta.map((m) => m.season));
   const { dim, codes } = fitted;
   const encode = scaledEncoder((v) => fitted.model.model.encode(v), scale);
   const names = g.dims.map((x) => x.name);

@@ -47,6 +47,27 @@ describe('embedGroup(data, settings)', () => {
     expect(a.rule).toBe('fixed latent size 2');
   });
 
+  it('the cross-season objective trains on pairs of a row and the same player\'s other season, then encodes every row', () => {
+    const data = inventedProfiles(300, 6, { factors: 2, perPlayer: 3, seed: 9 });
+    const seasons = data.groups.map((_, i) => 2020 + (i % 3));
+    const settings = resolveEmbedSettings({ method: 'autoencoder', seed: 3, autoencoder: { objective: 'cross-season', latent: 2, maxEpochs: 3 } });
+    const e = embedGroup(data, settings, seasons);
+    // three seasons a player: the middle one pairs with both others, the first and last with the middle
+    expect(e.rule).toBe('cross-season objective (400 pairs: a row and the same player\'s nearest other season); fixed latent size 2; code distances made the decoder\'s (isometric code)');
+    expect(e.searchRows).toBe(400);
+    expect(e.codes.length).toBe(300 * 2);
+    const plain = embedGroup(data, resolveEmbedSettings({ method: 'autoencoder', seed: 3, autoencoder: { latent: 2, maxEpochs: 3 } }));
+    expect(Array.from(e.codes)).not.toEqual(Array.from(plain.codes));
+    expect(() => embedGroup(data, settings)).toThrow(/season/);
+  });
+
+  it('the cross-season objective falls back to reconstruction, and says so, when players have too few other seasons', () => {
+    const data = inventedProfiles(60, 6, { factors: 2, perPlayer: 1, seed: 9 });
+    const settings = resolveEmbedSettings({ method: 'autoencoder', seed: 3, autoencoder: { objective: 'cross-season', latent: 2, maxEpochs: 2 } });
+    const e = embedGroup(data, settings, data.groups.map(() => 2020));
+    expect(e.rule).toBe('fixed latent size 2 (reconstruction: 0 cross-season pairs, fewer than 40)');
+  });
+
   it('refuses a group with one dimension', () => {
     const data = { x: Float64Array.of(1, 2, 3, 4), n: 4, d: 1, groups: ['a', 'b', 'c', 'd'] };
     expect(() => embedGroup(data, resolveEmbedSettings({ method: 'pca' }))).toThrow(UsageError);

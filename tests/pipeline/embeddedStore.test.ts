@@ -108,7 +108,7 @@ describe('kindred build --embed', () => {
     expect(second.comps).toEqual(first.comps);
     const model = 'group-IF.model.json';
     expect(await readFile(join(again, model), 'utf8')).toBe(await readFile(join(dir, 'autoencoder', model), 'utf8'));
-  });
+  }, 180_000); // a full build: over 60 s once under a full suite with a bench beside it on 2 cores
 
   it('refuses a store whose model JSON was changed after the build (checksum)', async () => {
     const copy = join(dir, 'tampered');
@@ -125,7 +125,7 @@ describe('kindred build --embed', () => {
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(/group-IF\.model\.json has sha256 [0-9a-f]{64} \(expected [0-9a-f]{64}/);
     expect(r.stderr).toContain('[kindred.store.corrupt]');
-  });
+  }, 180_000);
 
   it('writes the learning curve and drivers charts beside the store, and `kindred embedding` lists them', async () => {
     const store = join(dir, 'autoencoder');
@@ -155,7 +155,24 @@ describe('kindred build --embed', () => {
     await expect(stat(`${store}.charts`)).rejects.toThrow();
     const r = await comps(store);
     expect(r.query.space).toBe('input');
-  });
+  }, 180_000);
+
+  it('--objective cross-season (linear: --hidden none --activation identity) trains on pairs of seasons, records it, and answers with attributions that add up', async () => {
+    const store = join(dir, 'cross-season');
+    const b = await runCli('build', roster, '--store', store, '--embed', 'autoencoder', '--objective', 'cross-season', '--hidden', 'none', '--activation', 'identity', '--latent', '4', ...QUICK);
+    expect(b.code, b.stderr).toBe(0);
+    const summary = JSON.parse(await readFile(join(store, 'group-IF.embedding.json'), 'utf8')) as { search: { rule: string }; training: { settings: { autoencoder: { objective: string } } } };
+    expect(summary.search.rule).toMatch(/^cross-season objective \(\d+ pairs: a row and the same player's nearest other season\); fixed latent size 4; code distances made the decoder's \(isometric code\)$/);
+    expect(summary.training.settings.autoencoder.objective).toBe('cross-season');
+    const model = JSON.parse(await readFile(join(store, 'group-IF.model.json'), 'utf8')) as { hidden: number[]; layers: unknown[] };
+    expect([model.hidden, model.layers.length]).toEqual([[], 2]);
+    const r = await comps(store);
+    expect(r.query.space).toBe('autoencoder');
+    for (const c of r.comps) expect(c.dimensions.reduce((a, d) => a + (d.attribution ?? NaN), 0)).toBeCloseTo(c.attribution_total ?? NaN, 9);
+    const bad = await runCli('build', roster, '--store', join(dir, 'y'), '--embed', 'autoencoder', '--objective', 'talent');
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toContain('expected reconstruct or cross-season');
+  }, 180_000);
 
   it('refuses an unknown space with a usage error (exit code 2)', async () => {
     const r = await runCli('build', roster, '--store', join(dir, 'x'), '--embed', 'umap');

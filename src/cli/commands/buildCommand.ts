@@ -18,6 +18,7 @@ const buildOptionsSchema = z.object({
   embed: z.enum(['none', 'pca', 'autoencoder']),
   seed: z.number(),
   pcaVariance: z.number(),
+  objective: z.enum(['reconstruct', 'cross-season']),
   hidden: z.array(z.number()).optional(),
   latent: z.union([z.number(), z.literal('search')]),
   activation: z.enum(['tanh', 'relu', 'identity']),

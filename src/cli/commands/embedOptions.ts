@@ -4,6 +4,8 @@ import {
   DEFAULT_EMBED_SETTINGS,
   EMBED_INPUTS,
   EMBED_METHODS,
+  EMBED_OBJECTIVES,
+  type EmbedObjective,
   type EmbedInput,
   type EmbedMethod,
   type EmbedSettingsInput,
@@ -75,6 +77,12 @@ function embedInput(value: string): EmbedInput {
   return found;
 }
 
+function objective(value: string): EmbedObjective {
+  const found = EMBED_OBJECTIVES.find((x) => x === value.trim().toLowerCase());
+  if (!found) throw new InvalidArgumentError(`expected ${EMBED_OBJECTIVES.join(' or ')}, got "${value}"`);
+  return found;
+}
+
 function activation(value: string): Activation {
   const found = ACTIVATIONS.find((a) => a === value.trim());
   if (!found) throw new InvalidArgumentError(`expected ${ACTIVATIONS.join(', ')}, got "${value}"`);
@@ -88,6 +96,7 @@ export function addEmbedOptions(cmd: Command): Command {
     .option('--embed <space>', 'rank comps in: none (the weighted input space), pca or autoencoder', method, CLI_DEFAULT_EMBED)
     .option('--seed <n>', 'seed of the embedding (split, weights, batches, samples)', wholeNumber(0), DEFAULT_EMBED_SETTINGS.seed)
     .option('--pca-variance <share>', 'PCA: keep the fewest components reaching this share of variance', share(false), DEFAULT_EMBED_SETTINGS.pcaVariance)
+    .option('--objective <name>', 'autoencoder target: reconstruct (the profile itself) or cross-season (the same player\'s nearest other season)', objective, a.objective)
     .option('--hidden <widths>', 'autoencoder hidden widths, e.g. 16 or 24,12 (default: the search ladder, or 16)', hidden)
     .option('--latent <n|search>', 'autoencoder code size, or search (grow while validation improves)', latent, a.latent)
     .option('--activation <name>', `autoencoder hidden activation: ${ACTIVATIONS.join(', ')}`, activation, a.activation)
@@ -111,6 +120,7 @@ export interface EmbedOptionValues {
   readonly embed: EmbedMethod;
   readonly seed: number;
   readonly pcaVariance: number;
+  readonly objective: EmbedObjective;
   readonly hidden?: number[] | undefined;
   readonly latent: number | 'search';
   readonly activation: Activation;
@@ -137,6 +147,7 @@ export function embedSettingsFrom(o: EmbedOptionValues): EmbedSettingsInput {
     driverTargets: o.drivers,
     pcaVariance: o.pcaVariance,
     autoencoder: {
+      objective: o.objective,
       hidden: o.hidden ?? null,
       latent: o.latent,
       activation: o.activation,
