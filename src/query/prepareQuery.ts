@@ -7,6 +7,7 @@ import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { storedGroup } from './storedGroup.ts';
 import type { Target } from './Target.ts';
 import { userWeights, type WeightPreset } from './weightPresets.ts';
+import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts';
 
 /** What decides a query's pool and weights (the part of CompsOptions every job shares). */
 export interface QuerySettings {
@@ -17,7 +18,7 @@ export interface QuerySettings {
   readonly weighting: 'redundancy' | 'plain';
   /** How the filter's playing-time floor was scaled (poolRules), for the echo; absent without a floor from the rules. */
   readonly sampleFloor?: SampleFloor;
-  /** A dimension the target has and a pool row lacks: left out and the rest rescaled (`rescale`, default) or counted at its expected gap (`expected`; missingAwareDistance). */
+  /** A dimension the target has and a pool row lacks: left out and the rest rescaled (`rescale`) or counted at its expected gap (`expected`; missingAwareDistance); default missingRuleOf(group). */
   readonly missing?: MissingRule;
 }
 
@@ -54,6 +55,21 @@ export function effectiveWeights(g: StoredGroup, settings: QuerySettings): Float
 }
 
 /**
+ * The default rule for a dimension the target has and a pool row lacks: pitchers count it at its
+ * expected gap (pitch tracking covers only recent seasons, and with the rest rescaled an untracked
+ * season looked as close to a tracked starter as a tracked one: median true-talent ratio SP 1.643 ->
+ * 1.538, RP 1.813 -> 1.654 with windows of 3, better in every bench league; bench/pitcherQuality.bench.ts,
+ * docs/jobs.md); hitters keep the rescaled distance (it won in two or three leagues of four only).
+ *
+ * @example
+ * missingRuleOf('SP'); // => 'expected'
+ * missingRuleOf('IF'); // => 'rescale'
+ */
+export function missingRuleOf(group: PositionGroup): MissingRule {
+  return isPitcherGroup(group) ? 'expected' : 'rescale';
+}
+
+/**
  * The first step of every job: the target's group (storedGroup), the pool as a mask without the
  * target's own player (eligibleRows), the weights and the target's weight. Throws
  * `kindred.query.badTarget` when the target has no value on any weighted dimension.
@@ -71,6 +87,6 @@ export function prepareQuery(store: ProfileStore, target: Target, settings: Quer
   return {
     store, group, target, filter: settings.filter, weights, preset: settings.preset, targetWeight: wT, mask, eligible: count, defaultMetric,
     sampleFloor: settings.sampleFloor ?? null,
-    missing: settings.missing ?? 'rescale',
+    missing: settings.missing ?? missingRuleOf(target.group),
   };
 }

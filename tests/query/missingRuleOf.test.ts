@@ -1,0 +1,22 @@
+import { describe, expect, it } from 'vitest';
+import { missingRuleOf } from '../../src/query/prepareQuery.ts';
+import { missingAwareDistance } from '../../src/query/missingAwareDistance.ts';
+
+// A dimension the target has and the comp lacks (hand-worked): target z [1, 2], comp [1, missing],
+// weights [1, 1]. Rescaled: only the first is shared, d^2 = 0 * W_T / W_S = 0. At its expected gap:
+// an unknown standardised value has mean 0 and variance 1, so E(t - c)^2 = t^2 + 1 = 5, d^2 = 0 + 5.
+describe('missingRuleOf (the default rule for a dimension the comp lacks)', () => {
+  it('counts it at its expected gap for pitchers and rescales for hitters', () => {
+    expect(missingRuleOf('SP')).toBe('expected');
+    expect(missingRuleOf('RP')).toBe('expected');
+    for (const g of ['C', 'IF', 'OF', 'DH'] as const) expect(missingRuleOf(g)).toBe('rescale');
+  });
+
+  it('so an untracked comp no longer looks as close as a tracked one (worked example)', () => {
+    const target = new Float64Array([1, 2]);
+    const untracked = new Float64Array([1, NaN]);
+    const weights = new Float64Array([1, 1]);
+    expect(missingAwareDistance(target, untracked, 0, weights, 2, 'rescale').d2).toBeCloseTo(0, 12);
+    expect(missingAwareDistance(target, untracked, 0, weights, 2, 'expected').d2).toBeCloseTo(5, 12);
+  });
+});
