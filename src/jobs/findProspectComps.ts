@@ -217,7 +217,7 @@ function scoreProspects(q: PreparedQuery, pool: ProspectPool, steps: readonly Ta
     if (pathTarget) {
       const offsets = pool.offsetsOf(row);
       if (!offsets) continue;
-      const ps = pathDistance(pathTarget, g.z, offsets, q.weights);
+      const ps = pathDistance(pathTarget, g.z, offsets, q.weights, q.missing);
       scored.push({ ...base, d2: ps.d2, weight: ps.weight, coverage: ps.coverage, offsets, steps: ps.steps });
     } else {
       const p = scoreRow(q, row, null);

@@ -44,7 +44,7 @@ export function matchPlayers(store: ProfileStore, target: Target, candidate: num
       player_id: p?.playerId ?? '',
     });
   }
-  const standing = poolPercentile(store, g, target.z, target.player, candidate, pair.d2, q.weights, options.comps.filter, options.comps.minCoverage);
+  const standing = poolPercentile(store, g, target.z, target.player, candidate, pair.d2, q.weights, options.comps.filter, options.comps.minCoverage, q.missing);
   return {
     query: reference.result.query,
     pool: echoPool(q),

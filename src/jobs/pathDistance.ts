@@ -1,4 +1,4 @@
-import { missingAwareDistance, targetWeight } from '../query/missingAwareDistance.ts';
+import { missingAwareDistance, targetWeight, type MissingRule } from '../query/missingAwareDistance.ts';
 import { likeness } from '../query/likeness.ts';
 
 /** The target's profile at one aligned season. */
@@ -38,13 +38,13 @@ export function pathTargetSteps(zs: readonly Float64Array[], weights: Float64Arr
  * // two steps, each target [0, 0], candidates [1, 0] and [0, 1], weights [1, 1]:
  * // d2 = 1 + 1 = 2, W = 4, likeness = 100 exp(-2 / 8) = 77.9
  */
-export function pathDistance(target: readonly PathTargetStep[], z: Float32Array, offsets: readonly number[], weights: Float64Array): PathScore {
+export function pathDistance(target: readonly PathTargetStep[], z: Float32Array, offsets: readonly number[], weights: Float64Array, missing: MissingRule = 'rescale'): PathScore {
   let d2 = 0;
   let weight = 0;
   let shared = 0;
   const steps: { d2: number; coverage: number; likeness: number }[] = [];
   target.forEach((t, j) => {
-    const p = missingAwareDistance(t.z, z, offsets[j] ?? NaN, weights, t.weight);
+    const p = missingAwareDistance(t.z, z, offsets[j] ?? NaN, weights, t.weight, missing);
     d2 += p.d2;
     weight += t.weight;
     shared += p.coverage * t.weight;

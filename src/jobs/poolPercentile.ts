@@ -1,6 +1,6 @@
 import { valueAt } from '../query/valueAt.ts';
 import { eligibleRows } from '../query/eligibleRows.ts';
-import { missingAwareDistance, targetWeight } from '../query/missingAwareDistance.ts';
+import { missingAwareDistance, targetWeight, type MissingRule } from '../query/missingAwareDistance.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
 import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 
@@ -36,13 +36,14 @@ export function poolPercentile(
   weights: Float64Array,
   filter: PoolFilter,
   minCoverage: number,
+  missing: MissingRule = 'rescale',
 ): PoolStanding {
   const wT = targetWeight(targetZ, weights);
   const { mask } = eligibleRows(store, g, filter, new Set(targetPlayer >= 0 ? [targetPlayer, candidatePlayer] : [candidatePlayer]));
   const best = new Map<number, number>();
   for (let i = 0; i < g.n; i++) {
     if (mask[i] !== 1) continue;
-    const p = missingAwareDistance(targetZ, g.z, i * g.d, weights, wT);
+    const p = missingAwareDistance(targetZ, g.z, i * g.d, weights, wT, missing);
     if (!(p.coverage >= minCoverage) || !Number.isFinite(p.d2)) continue;
     const player = valueAt(g.player, i);
     const known = best.get(player);

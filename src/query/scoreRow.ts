@@ -37,7 +37,7 @@ export function scoreRows(q: PreparedQuery, rows: readonly number[], space: Quer
   const out = new Array<ScoredRow>(rows.length);
   for (let i = 0; i < rows.length; i++) {
     const row = rows[i] ?? -1;
-    const p = missingAwareDistance(target, z, row * d, weights, wT);
+    const p = missingAwareDistance(target, z, row * d, weights, wT, q.missing);
     out[i] = space
       ? { row, d2: codeDistance2(space.targetCode, space.embedding.codes, row * space.embedding.dim), coverage: p.coverage }
       : { row, d2: p.d2, coverage: p.coverage };

@@ -55,7 +55,7 @@ describe('kindred match <player-a> <player-b>', () => {
   it('prints the likeness, the standing and every dimension with grades', async () => {
     const out = await runCli('match', target, tenth.id, '--store', store);
     expect(out.code).toBe(0);
-    expect(out.stdout).toMatch(/^.* \(p\d+\), \d{4} \w+ (SP|RP)/);
+    expect(out.stdout).toMatch(/^.* \(p\d+\), \d{4}(-\d{2})? \w+ (SP|RP)/);
     expect(out.stdout).toMatch(/Likeness \d+ /);
     expect(out.stdout).toMatch(/In the pool: rank [\d,]+ of [\d,]+ players, more alike than [\d.]+% of the others/);
     expect(out.stdout).toMatch(/K% +\.\d{3} \(\d{2}\) +\.\d{3} \(\d{2}\)/);
