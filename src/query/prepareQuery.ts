@@ -7,7 +7,7 @@ import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { storedGroup } from './storedGroup.ts';
 import type { Target } from './Target.ts';
 import { userWeights, type WeightPreset } from './weightPresets.ts';
-import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts';
+import { missingRuleOf } from './missingRuleOf.ts';
 
 /** What decides a query's pool and weights (the part of CompsOptions every job shares). */
 export interface QuerySettings {
@@ -52,21 +52,6 @@ export interface PreparedQuery {
 export function effectiveWeights(g: StoredGroup, settings: QuerySettings): Float64Array {
   const user = userWeights(g.dims, settings.preset, settings.weightOverrides);
   return Float64Array.from(user, (u, j) => u * (settings.weighting === 'redundancy' ? (g.redundancy[j] ?? 0) : 1));
-}
-
-/**
- * The default rule for a dimension the target has and a pool row lacks: pitchers count it at its
- * expected gap (pitch tracking covers only recent seasons, and with the rest rescaled an untracked
- * season looked as close to a tracked starter as a tracked one: median true-talent ratio SP 1.643 ->
- * 1.538, RP 1.813 -> 1.654 with windows of 3, better in every bench league; bench/pitcherQuality.bench.ts,
- * docs/jobs.md); hitters keep the rescaled distance (it won in two or three leagues of four only).
- *
- * @example
- * missingRuleOf('SP'); // => 'expected'
- * missingRuleOf('IF'); // => 'rescale'
- */
-export function missingRuleOf(group: PositionGroup): MissingRule {
-  return isPitcherGroup(group) ? 'expected' : 'rescale';
 }
 
 /**

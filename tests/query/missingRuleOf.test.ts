@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { missingRuleOf } from '../../src/query/prepareQuery.ts';
+import { missingRuleOf } from '../../src/query/missingRuleOf.ts';
 import { missingAwareDistance } from '../../src/query/missingAwareDistance.ts';
 
 // A dimension the target has and the comp lacks (hand-worked): target z [1, 2], comp [1, missing],
