@@ -1,14 +1,12 @@
+import { windowedTarget } from './windowedTarget.ts';
 import { ParameterError } from '../errors/ParameterError.ts';
 import { matchPlayers, type MatchOptions } from '../jobs/matchPlayers.ts';
 import type { MatchResult } from '../jobs/MatchResult.ts';
-import { windowView } from '../query/windowView.ts';
-import { requestWindow } from './requestWindow.ts';
 import type { ProfileStore } from '../store/ProfileStore.ts';
 import { resolvePlayer } from '../query/resolvePlayer.ts';
 import { compsOptionsFrom } from './compsOptionsFrom.ts';
 import type { JobRequest } from './JobRequest.ts';
 import type { Target } from '../query/Target.ts';
-import { targetFrom } from './targetFrom.ts';
 
 /** The match options of a request: the pool and weighting, and the candidate's season and level if given. */
 export function matchOptionsFrom(req: JobRequest, store: ProfileStore, target: Target): MatchOptions {
@@ -22,8 +20,7 @@ export function matchOptionsFrom(req: JobRequest, store: ProfileStore, target: T
 
 /** The match job: one candidate against the target, likeness, percentile in the pool and every dimension. */
 export function answerMatch(stored: ProfileStore, req: JobRequest): MatchResult {
-  const store = windowView(stored, requestWindow(req, stored));
-  const target = targetFrom(store, req);
+  const { store, target } = windowedTarget(stored, req);
   const options = matchOptionsFrom(req, store, target);
   const candidate = req.get('candidate');
   if (candidate === undefined) {

@@ -251,3 +251,18 @@ describe('kindred comps: playing time of every comp', () => {
     expect(table.stdout).toMatch(/ Age\s+PA\s+Like /);
   });
 });
+
+describe('kindred comps: the default window gives way to the season asked for', () => {
+  // In the demo league p001292 started through 2021 and also relieved in 2021: that relief season
+  // has no 3-season RP window of its own (his window that year is a starter's).
+  it('answers a season without a window of its own from single seasons, unless a window is asked for', async () => {
+    const out = await runCli('comps', 'p001292', '--season', '2021', '--position', 'RP', '--format', 'json', '--store', store);
+    expect(out.code, out.stderr).toBe(0);
+    const r = compsResultSchema.parse(JSON.parse(out.stdout));
+    expect(r.query.position).toBe('RP');
+    expect(r.query.window ?? 1).toBe(1);
+    const asked = await runCli('comps', 'p001292', '--season', '2021', '--position', 'RP', '--window', '3', '--store', store);
+    expect(asked.code).toBe(1);
+    expect(asked.stderr).toMatch(/kindred\.query\.noSeason/);
+  });
+});

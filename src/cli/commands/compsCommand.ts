@@ -34,10 +34,10 @@ export function compsCommand(io: CliIo, setExit: (code: number) => void): Comman
     const batch = req.get('batch');
     if (batch !== undefined) {
       if (player !== undefined || req.has('want')) throw new UsageError('--batch takes its targets from the file: give no player or --want');
-      setExit(await runBatch(io, batch, format, (t) => answerComps(store, req.with({ player: t.playerId, season: t.season, level: t.level })), (r) => compsCsv(r)));
+      setExit(await runBatch(io, batch, format, (t) => answerComps(stored, req.with({ player: t.playerId, season: t.season, level: t.level })), (r) => compsCsv(r)));
       return;
     }
-    writeResult(io, store, answerComps(store, req), format);
+    writeResult(io, store, answerComps(stored, req), format);
   });
   return cmd;
 }

@@ -3,8 +3,7 @@ import type { CliIo } from '../CliIo.ts';
 import { addRequestOptions, requestFrom } from '../requestOptions.ts';
 import { runBatch } from './runBatch.ts';
 import { UsageError } from '../../errors/KindredError.ts';
-import { windowView } from '../../query/windowView.ts';
-import { requestWindow } from '../../request/requestWindow.ts';
+import { windowedTarget } from '../../request/windowedTarget.ts';
 import { openProfileStore } from '../../store/openProfileStore.ts';
 import type { ProfileStore } from '../../store/ProfileStore.ts';
 import { resolvePlayer } from '../../query/resolvePlayer.ts';
@@ -14,7 +13,6 @@ import { matchTable } from '../../report/matchTable.ts';
 import { matchCsv } from '../../report/matchCsv.ts';
 import { answerMatch, matchOptionsFrom } from '../../request/answerMatch.ts';
 import { helpOf } from '../../request/parameters.ts';
-import { targetFrom } from '../../request/targetFrom.ts';
 import type { OutputFormat } from '../../request/valueParsers.ts';
 
 /** Writes one match in the chosen format. */
@@ -35,12 +33,11 @@ export function matchCommand(io: CliIo, setExit: (code: number) => void): Comman
     if (withWant && second !== undefined) throw new UsageError('with --want give only the candidate (player-b)');
     const req = requestFrom(cmd, 'match', withWant ? { candidate: first } : { player: first, candidate: second });
     const stored = await openProfileStore(req.need('store'));
-    const store = windowView(stored, requestWindow(req, stored));
     const format = req.need('format');
     const batch = req.get('batch');
     if (batch !== undefined) {
       if (req.has('candidate')) throw new UsageError('--batch takes the candidates from the file: give only the target');
-      const target = targetFrom(store, req);
+      const { store, target } = windowedTarget(stored, req);
       const options = matchOptionsFrom(req, store, target);
       setExit(
         await runBatch(
@@ -54,7 +51,7 @@ export function matchCommand(io: CliIo, setExit: (code: number) => void): Comman
       );
       return;
     }
-    writeMatch(io, store, answerMatch(store, req), format);
+    writeMatch(io, stored, answerMatch(stored, req), format);
   });
   return cmd;
 }
