@@ -23,7 +23,7 @@ import { DEFAULT_REACH, poolRules } from '../src/query/poolDefaults.ts';
 import type { PoolFilter } from '../src/query/PoolFilter.ts';
 import type { Target } from '../src/query/Target.ts';
 import type { PositionGroup } from '../src/profiles/positionGroup.ts';
-import { TALENTS_SHOWN } from './lib/compsQuality.ts';
+import { groupTalents, sampleStream } from './lib/compsQuality.ts';
 
 const GROUPS: PositionGroup[] = ['C', 'IF', 'OF', 'SP', 'RP'];
 const POOLS = ['group', 'level', 'default', 'adjacent'] as const;
@@ -49,32 +49,6 @@ interface Score {
   comps: number;
 }
 
-/** True talents of every row of a group, standardised over the group (NaN where the truth is missing). */
-function groupTalents(store: ProfileStore, g: StoredGroup, truth: SimTruth): { talents: Float64Array; t: number } {
-  const seasonTruth = (row: number) => truth.find(store.players[g.player[row] as number]?.playerId ?? '', g.season[row] as number);
-  let first: ReturnType<typeof seasonTruth>;
-  for (let i = 0; i < g.n && !first; i++) first = seasonTruth(i);
-  if (!first) return { talents: new Float64Array(0), t: 0 };
-  const shown = TALENTS_SHOWN[g.group];
-  const keep = truth.talentNames[first.kind].map((n, i) => (shown === null || shown.includes(n) ? i : -1)).filter((i) => i >= 0);
-  const t = keep.length;
-  const talents = new Float64Array(g.n * t).fill(NaN);
-  for (let r = 0; r < g.n; r++) {
-    const s = seasonTruth(r);
-    if (s) keep.forEach((k, j) => (talents[r * t + j] = s.talents[k] as number));
-  }
-  for (let j = 0; j < t; j++) {
-    let m = 0;
-    let c = 0;
-    for (let r = 0; r < g.n; r++) if (!Number.isNaN(talents[r * t + j] as number)) (m += talents[r * t + j] as number), c++;
-    m /= c;
-    let v = 0;
-    for (let r = 0; r < g.n; r++) if (!Number.isNaN(talents[r * t + j] as number)) v += ((talents[r * t + j] as number) - m) ** 2;
-    const sd = Math.sqrt(v / (c - 1)) || 1;
-    for (let r = 0; r < g.n; r++) talents[r * t + j] = ((talents[r * t + j] as number) - m) / sd;
-  }
-  return { talents, t };
-}
 
 function scoreGroup(store: ProfileStore, g: StoredGroup, truth: SimTruth, level: number, targetsPerGroup: number, seed: number): Map<Pool, Score[]> {
   const out = new Map<Pool, Score[]>(POOLS.map((p) => [p, []]));
@@ -87,15 +61,7 @@ function scoreGroup(store: ProfileStore, g: StoredGroup, truth: SimTruth, level:
   };
   const candidates: number[] = [];
   for (let i = 0; i < g.n; i++) if (g.level[i] === level && !Number.isNaN(talents[i * t] as number)) candidates.push(i);
-  let state = seed >>> 0 || 1;
-  const next = (): number => {
-    state ^= state << 13;
-    state >>>= 0;
-    state ^= state >>> 17;
-    state ^= state << 5;
-    state >>>= 0;
-    return state / 2 ** 32;
-  };
+  const next = sampleStream(seed);
   let done = 0;
   for (let attempt = 0; attempt < targetsPerGroup * 3 && done < targetsPerGroup && candidates.length > 4 * K; attempt++) {
     const row = candidates[Math.floor(next() * candidates.length)] as number;

@@ -25,7 +25,7 @@ import { eligibleRows } from '../../src/query/eligibleRows.ts';
 import { DEFAULT_REACH, poolRules, type PoolReach } from '../../src/query/poolDefaults.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 import { quantileSorted } from '../../src/stats/quantile.ts';
-import { TALENTS_SHOWN } from './compsQuality.ts';
+import { groupTalents, sampleStream } from './compsQuality.ts';
 
 export interface QualityCase {
   readonly name: string;
@@ -60,18 +60,6 @@ export interface ChosenTargets {
   readonly twins: readonly (readonly CaseTarget[])[];
 }
 
-/** A small deterministic xorshift stream for sampling targets. */
-function stream(seed: number): () => number {
-  let state = seed >>> 0 || 1;
-  return () => {
-    state ^= state << 13;
-    state >>>= 0;
-    state ^= state >>> 17;
-    state ^= state << 5;
-    state >>>= 0;
-    return state / 2 ** 32;
-  };
-}
 
 /** Up to `n` of `xs`, drawn without replacement by a seeded shuffle. */
 function sample<T>(xs: readonly T[], n: number, next: () => number): T[] {
@@ -86,7 +74,7 @@ function sample<T>(xs: readonly T[], n: number, next: () => number): T[] {
 /** The targets of every case, from the single-season store: `perCase` ratio targets and up to `twinsPerCase` twin targets. */
 export function chooseTargets(store: ProfileStore, league: SimLeague, perCase: number, twinsPerCase: number, seed: number): ChosenTargets {
   const top = store.levels.length - 1;
-  const next = stream(seed);
+  const next = sampleStream(seed);
   const simIndex = store.players.map((p) => playerIndexOf(p.playerId));
   const storeIndex = new Map(simIndex.map((s, i) => [s, i]));
   const ratio: CaseTarget[][] = [];
@@ -115,33 +103,6 @@ export function chooseTargets(store: ProfileStore, league: SimLeague, perCase: n
   return { ratio, twins };
 }
 
-/** True talents of every row of a group (of the truth season: a window's last), standardised over the group; NaN where unknown. */
-function groupTalents(store: ProfileStore, g: StoredGroup, league: SimLeague): { talents: Float64Array; t: number; names: readonly string[] } {
-  const truth = league.truth;
-  const seasonTruth = (row: number) => truth.find(store.players[g.player[row] as number]?.playerId ?? '', g.season[row] as number);
-  let first: ReturnType<typeof seasonTruth>;
-  for (let i = 0; i < g.n && !first; i++) first = seasonTruth(i);
-  if (!first) return { talents: new Float64Array(0), t: 0, names: [] };
-  const shown = TALENTS_SHOWN[g.group];
-  const keep = truth.talentNames[first.kind].map((n, i) => (shown === null || shown.includes(n) ? i : -1)).filter((i) => i >= 0);
-  const t = keep.length;
-  const talents = new Float64Array(g.n * t).fill(NaN);
-  for (let r = 0; r < g.n; r++) {
-    const s = seasonTruth(r);
-    if (s) keep.forEach((k, j) => (talents[r * t + j] = s.talents[k] as number));
-  }
-  for (let j = 0; j < t; j++) {
-    let m = 0;
-    let c = 0;
-    for (let r = 0; r < g.n; r++) if (!Number.isNaN(talents[r * t + j] as number)) (m += talents[r * t + j] as number), c++;
-    m /= c;
-    let v = 0;
-    for (let r = 0; r < g.n; r++) if (!Number.isNaN(talents[r * t + j] as number)) v += ((talents[r * t + j] as number) - m) ** 2;
-    const sd = Math.sqrt(v / (c - 1)) || 1;
-    for (let r = 0; r < g.n; r++) talents[r * t + j] = ((talents[r * t + j] as number) - m) / sd;
-  }
-  return { talents, t, names: keep.map((k) => truth.talentNames[first.kind][k] ?? '') };
-}
 
 export interface CaseScores {
   /** Per case: the median ratio over its targets (NaN when none could be scored). */
@@ -181,7 +142,7 @@ export function scoreCases(view: ProfileStore, league: SimLeague, chosen: Chosen
     if (!g) return undefined;
     const rowOf = new Map<string, number>();
     for (let r = 0; r < g.n; r++) rowOf.set(`${g.player[r]}|${g.season[r]}|${g.level[r]}`, r);
-    c = { rowOf, ...groupTalents(view, g, league) };
+    c = { rowOf, ...groupTalents(view, g, league.truth) };
     cache.set(group, c);
     return c;
   };

@@ -111,15 +111,7 @@ function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: Q
     return Math.sqrt(s);
   };
   // deterministic sample of targets
-  let state = o.seed >>> 0 || 1;
-  const next = (): number => {
-    state ^= state << 13;
-    state >>>= 0;
-    state ^= state >>> 17;
-    state ^= state << 5;
-    state >>>= 0;
-    return state / 2 ** 32;
-  };
+  const next = sampleStream(o.seed);
   const candidates = poolRows.filter((r) => {
     const s = o.sampleOf ? o.sampleOf(g, r) : (g.sample[r] as number);
     return !o.sampleRange || (s >= o.sampleRange[0] && s <= o.sampleRange[1]);
@@ -164,4 +156,48 @@ function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: Q
 function truthOf(store: ProfileStore, g: StoredGroup, truth: SimTruth, row: number): ReturnType<SimTruth['find']> {
   const id = store.players[g.player[row] as number]?.playerId ?? '';
   return truth.find(id, g.season[row] as number);
+}
+
+/** True talents of every row of a group (of the truth season: a window's last), standardised over the group; NaN where unknown. */
+export function groupTalents(store: ProfileStore, g: StoredGroup, truth: SimTruth): { talents: Float64Array; t: number; names: readonly string[] } {
+  const seasonTruth = (row: number) => truth.find(store.players[g.player[row] as number]?.playerId ?? '', g.season[row] as number);
+  let first: ReturnType<typeof seasonTruth>;
+  for (let i = 0; i < g.n && !first; i++) first = seasonTruth(i);
+  if (!first) return { talents: new Float64Array(0), t: 0, names: [] };
+  const shown = TALENTS_SHOWN[g.group];
+  const keep = truth.talentNames[first.kind].map((n, i) => (shown === null || shown.includes(n) ? i : -1)).filter((i) => i >= 0);
+  const t = keep.length;
+  const talents = new Float64Array(g.n * t).fill(NaN);
+  for (let r = 0; r < g.n; r++) {
+    const s = seasonTruth(r);
+    if (s) keep.forEach((k, j) => (talents[r * t + j] = s.talents[k] as number));
+  }
+  for (let j = 0; j < t; j++) {
+    let m = 0;
+    let c = 0;
+    for (let r = 0; r < g.n; r++) if (!Number.isNaN(talents[r * t + j] as number)) (m += talents[r * t + j] as number), c++;
+    m /= c;
+    let v = 0;
+    for (let r = 0; r < g.n; r++) if (!Number.isNaN(talents[r * t + j] as number)) v += ((talents[r * t + j] as number) - m) ** 2;
+    const sd = Math.sqrt(v / (c - 1)) || 1;
+    for (let r = 0; r < g.n; r++) talents[r * t + j] = ((talents[r * t + j] as number) - m) / sd;
+  }
+  return { talents, t, names: keep.map((k) => truth.talentNames[first.kind][k] ?? '') };
+}
+
+/**
+ * The benches' deterministic stream for sampling targets (xorshift32, Marsaglia 2003), uniform in
+ * [0, 1). Kept apart from src/random/SeededRandom so that the benches' published figures keep their
+ * targets.
+ */
+export function sampleStream(seed: number): () => number {
+  let state = seed >>> 0 || 1;
+  return () => {
+    state ^= state << 13;
+    state >>>= 0;
+    state ^= state >>> 17;
+    state ^= state << 5;
+    state >>>= 0;
+    return state / 2 ** 32;
+  };
 }

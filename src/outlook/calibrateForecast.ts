@@ -146,14 +146,8 @@ function peakAnchorOf(r: RawForecast, overallPeak: number): number {
   return finiteOr(r.matched.peak.p50, overallPeak);
 }
 
-interface Centres {
-  readonly overall: number;
-  readonly overallPeak: number;
-  readonly sampleCentre: ReadonlyMap<number, number>;
-  readonly seasonSampleCentre: ReadonlyMap<number, number>;
-  readonly ageCentre: ReadonlyMap<number, number>;
-  readonly profileDims: readonly string[];
-}
+/** What the features are centred on: the part of a fitted calibration that featuresOf reads. */
+type Centres = Pick<FittedCalibration, 'overall' | 'overallPeak' | 'sampleCentre' | 'seasonSampleCentre' | 'ageCentre' | 'profileDims'>;
 
 function featuresOf(r: RawForecast, features: readonly CalibrationFeature[], target: 'reach' | 'peak', c: CalibrationChoice, k: Centres): number[] {
   const out: number[] = [];
