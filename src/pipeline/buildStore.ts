@@ -134,7 +134,11 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
     skipped: profiles.skipped,
     playerIndex: playerIndexOf(roster),
     levels: [...roster.levels],
-    playersFile: encodePlayersFile(roster, new Map([...profiles.groups].map(([group, g]) => [group, g.meta]))),
+    playersFile: encodePlayersFile(
+      roster,
+      metaOf(profiles.groups),
+      new Map(windowSets.map(({ size, set }) => [size, metaOf(set.groups)])),
+    ),
     outcomesFile: encodeOutcomesFile(computeOutcomes(roster)),
     rowsRead: roster.rowsRead,
     rejected: roster.rejected.length,
@@ -142,6 +146,9 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
     notices: roster.notices,
   };
 }
+
+/** Each group's row metadata (for the players file's row lists). */
+const metaOf = (groups: ReadonlyMap<PositionGroup, GroupProfiles>): Map<PositionGroup, GroupProfiles['meta']> => new Map([...groups].map(([group, g]) => [group, g.meta]));
 
 type ProgressFn = NonNullable<BuildOptions['onProgress']>;
 

@@ -26,7 +26,6 @@ export function windowView(store: ProfileStore, window: number): ProfileStore {
       built,
     });
   }
-  const rows = rowsByPlayer(groups);
   return {
     dir: store.dir,
     opened: store.opened,
@@ -37,28 +36,10 @@ export function windowView(store: ProfileStore, window: number): ProfileStore {
     get salaries() {
       return store.salaries;
     },
-    rowsOf: (player: number): readonly StoredRowRef[] => rows().get(player) ?? [],
+    rowsOf: (player: number): readonly StoredRowRef[] => store.rowsOfWindow(window, player),
+    rowsOfWindow: (size: number, player: number): readonly StoredRowRef[] => store.rowsOfWindow(size, player),
     groups,
     windows: store.windows,
     outcomes: () => store.outcomes(),
-  };
-}
-
-/** Each player's window rows in every group, gathered on first use (groups in their stored order). */
-function rowsByPlayer(groups: ReadonlyMap<PositionGroup, StoredGroup>): () => ReadonlyMap<number, readonly StoredRowRef[]> {
-  let kept: Map<number, StoredRowRef[]> | undefined;
-  return () => {
-    if (kept) return kept;
-    const out = new Map<number, StoredRowRef[]>();
-    for (const [group, g] of groups) {
-      for (let row = 0; row < g.n; row++) {
-        const p = g.player[row] ?? -1;
-        let list = out.get(p);
-        if (!list) out.set(p, (list = []));
-        list.push({ group, row });
-      }
-    }
-    kept = out;
-    return out;
   };
 }

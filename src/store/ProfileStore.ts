@@ -81,6 +81,8 @@ export interface ProfileStore {
    * players table: only the player's own groups are read.
    */
   rowsOf(player: number): readonly StoredRowRef[];
+  /** The same over windows of `size` seasons (the groups of `windows.get(size)`); none when the store has no such windows. */
+  rowsOfWindow(size: number, player: number): readonly StoredRowRef[];
   /** Salary by player index and season. */
   readonly salaries: ReadonlyMap<number, ReadonlyMap<number, number>>;
   readonly groups: ReadonlyMap<PositionGroup, StoredGroup>;

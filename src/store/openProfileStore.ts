@@ -4,7 +4,7 @@ import { Outcomes } from '../outlook/Outcomes.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
 import { decodeOutcomesFile } from './outcomesFile.ts';
 import { openStore, type OpenStore } from './openStore.ts';
-import { decodePlayersFile } from './playersFile.ts';
+import { decodePlayersFile, type PlayerRows } from './playersFile.ts';
 import { corruptFile } from './parseStoreJson.ts';
 import type { ProfileStore, StoredGroup, StoredPlayer, StoredRowRef } from './ProfileStore.ts';
 import { once, readGroup } from './readGroup.ts';
@@ -43,7 +43,9 @@ export async function openProfileStore(dir: string, options: OpenProfileOptions 
 }
 
 function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
-  const pf = decodePlayersFile(store.readBytesSync(PLAYERS_FILE), `${store.dir}/${PLAYERS_FILE}`);
+  const playersWhere = `${store.dir}/${PLAYERS_FILE}`;
+  const windowSizes = storedWindows(store.manifest.params);
+  const pf = decodePlayersFile(store.readBytesSync(PLAYERS_FILE), playersWhere, windowSizes);
   const players: readonly StoredPlayer[] = pf.players;
   const playerById = new Map<string, number>();
   players.forEach((p, i) => playerById.set(p.playerId, i));
@@ -61,13 +63,17 @@ function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
   const refs = { players: players.length, levels: pf.levels.length };
   const groups = new LazyGroups(
     POSITION_GROUPS.filter((g) => groupFileNames(g).json in store.manifest.files),
-    (group) => readWholeGroup(readGroup(store, group, refs)),
+    (group) => checkPlayerRows(readWholeGroup(readGroup(store, group, refs)), group, pf.rows, playersWhere),
   );
   const windows = new Map<number, ReadonlyMap<PositionGroup, StoredGroup>>();
-  for (const size of storedWindows(store.manifest.params)) {
+  for (const size of windowSizes) {
+    const rows = pf.windowRows.get(size);
     windows.set(size, new LazyGroups(
       POSITION_GROUPS.filter((g) => groupFileNames(g, size).json in store.manifest.files),
-      (group) => readWholeGroup(readGroup(store, group, refs, size)),
+      (group) => {
+        const g = readWholeGroup(readGroup(store, group, refs, size));
+        return rows ? checkPlayerRows(g, group, rows, playersWhere, size) : g;
+      },
     ));
   }
   const outcomes = once((): Outcomes => {
@@ -87,19 +93,10 @@ function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
     levels: pf.levels,
     players,
     playerById,
-    rowsOf(p: number): readonly StoredRowRef[] {
-      const { start, group, row } = pf.rows;
-      const out: StoredRowRef[] = [];
-      for (let i = start[p] ?? 0; i < (start[p + 1] ?? 0); i++) {
-        const name = POSITION_GROUPS[group[i] ?? -1];
-        const r = row[i] ?? -1;
-        const g = name === undefined ? undefined : groups.get(name);
-        if (name === undefined || !g || r >= g.n || g.player[r] !== p) {
-          throw corruptFile(`${store.dir}/${PLAYERS_FILE}`, `lists row ${r} of group ${name ?? group[i]} for player ${p}, which the group does not hold`);
-        }
-        out.push({ group: name, row: r });
-      }
-      return out;
+    rowsOf: (p: number): readonly StoredRowRef[] => rowRefs(pf.rows, p),
+    rowsOfWindow(size: number, p: number): readonly StoredRowRef[] {
+      const rows = pf.windowRows.get(size);
+      return rows ? rowRefs(rows, p) : [];
     },
     get salaries() {
       return salaries();
@@ -108,6 +105,36 @@ function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
     windows,
     outcomes,
   };
+}
+
+/** Player p's entries in a players-file row list, as row references (checked when their group is read: checkPlayerRows). */
+function rowRefs(rows: PlayerRows, p: number): StoredRowRef[] {
+  const out: StoredRowRef[] = [];
+  for (let i = rows.start[p] ?? 0; i < (rows.start[p + 1] ?? 0); i++) {
+    const name = POSITION_GROUPS[rows.group[i] ?? -1];
+    if (name !== undefined) out.push({ group: name, row: rows.row[i] ?? -1 });
+  }
+  return out;
+}
+
+/**
+ * Checks, when a group is read, that every entry the players file lists for it names a row of the
+ * group that belongs to that player (so a player's rows are found from the players file alone,
+ * without reading his groups first, and a players file that disagrees with a group is refused by the
+ * read of that group). Returns the group.
+ */
+function checkPlayerRows(g: StoredGroup, group: PositionGroup, rows: PlayerRows, where: string, window = 1): StoredGroup {
+  const gi = POSITION_GROUPS.indexOf(group);
+  const players = rows.start.length - 1;
+  const name = window === 1 ? group : `${group}.w${window}`;
+  for (let p = 0; p < players; p++) {
+    for (let i = rows.start[p] ?? 0; i < (rows.start[p + 1] ?? 0); i++) {
+      if (rows.group[i] !== gi) continue;
+      const r = rows.row[i] ?? -1;
+      if (r >= g.n || g.player[r] !== p) throw corruptFile(where, `lists row ${r} of group ${name} for player ${p}, which the group does not hold`);
+    }
+  }
+  return g;
 }
 
 /**

@@ -10,12 +10,14 @@
  * every player's profile rows, so that a player's seasons are found without reading every group:
  * `rows_start` (i32, one more than the players: player i's rows are entries rows_start[i] to
  * rows_start[i + 1] - 1), `rows_group` (u8, index in POSITION_GROUPS), `rows_row` (i32, row in that group),
- * in POSITION_GROUPS order and row order.
+ * in POSITION_GROUPS order and row order; and the same for the profiles over windows of N >= 2 seasons
+ * (`rows_w<N>_start`, `rows_w<N>_group`, `rows_w<N>_row`, rows of the groups `<G>.w<N>`), so that a
+ * query over windows finds a player's windows without reading every group's windows either.
  */
 import { BATS, THROWS } from '../ingest/playersColumns.ts';
 import type { Bats, Roster, Throws } from '../ingest/Roster.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
-import { decodeColumns, encodeColumns } from './columnsFile.ts';
+import { decodeColumns, encodeColumns, type ColumnInput } from './columnsFile.ts';
 import { corruptFile } from './parseStoreJson.ts';
 import type { StoredPlayer } from './ProfileStore.ts';
 
@@ -25,8 +27,20 @@ export interface PlayersFile {
   readonly players: readonly StoredPlayer[];
   readonly contracts: { readonly player: Int32Array; readonly season: Int32Array; readonly salary: Float64Array };
   /** Each player's profile rows (see the columns above). */
-  readonly rows: { readonly start: Int32Array; readonly group: Uint8Array; readonly row: Int32Array };
+  readonly rows: PlayerRows;
+  /** Each player's rows over windows of N >= 2 seasons, by N. */
+  readonly windowRows: ReadonlyMap<number, PlayerRows>;
 }
+
+/** Player i's profile rows are entries start[i] to start[i + 1] - 1: the group (index in POSITION_GROUPS) and the row in it. */
+export interface PlayerRows {
+  readonly start: Int32Array;
+  readonly group: Uint8Array;
+  readonly row: Int32Array;
+}
+
+/** The row metadata of a roster's groups (single seasons, or windows of one size). */
+type GroupRows = ReadonlyMap<PositionGroup, readonly { readonly playerId: string }[]>;
 
 /** Player ids in store order, and each one's store index. */
 export function playerIndexOf(roster: Roster): ReadonlyMap<string, number> {
@@ -37,9 +51,9 @@ export function playerIndexOf(roster: Roster): ReadonlyMap<string, number> {
 
 /**
  * The players file of a roster whose players have the store indices of playerIndexOf, with the rows
- * of each group (by player id, in row order).
+ * of each group (by player id, in row order), and of each group over windows by window size.
  */
-export function encodePlayersFile(roster: Roster, groups: ReadonlyMap<PositionGroup, readonly { readonly playerId: string }[]>): Uint8Array {
+export function encodePlayersFile(roster: Roster, groups: GroupRows, windows: ReadonlyMap<number, GroupRows> = new Map()): Uint8Array {
   const playerIndex = playerIndexOf(roster);
   const ids: string[] = [];
   const names: string[] = [];
@@ -63,13 +77,6 @@ export function encodePlayersFile(roster: Roster, groups: ReadonlyMap<PositionGr
     cSeason.push(c.season);
     cSalary.push(c.salaryUsd);
   }
-  const lists: { group: number; row: number }[][] = ids.map(() => []);
-  POSITION_GROUPS.forEach((group, gi) => {
-    groups.get(group)?.forEach((m, row) => lists[playerIndex.get(m.playerId) ?? -1]?.push({ group: gi, row }));
-  });
-  const start: number[] = [0];
-  for (const list of lists) start.push((start[start.length - 1] ?? 0) + list.length);
-  const all = lists.flat();
   return encodeColumns([
     { name: 'level', type: 'strings', values: [...roster.levels] },
     { name: 'player_id', type: 'strings', values: ids },
@@ -80,14 +87,48 @@ export function encodePlayersFile(roster: Roster, groups: ReadonlyMap<PositionGr
     { name: 'contract_player', type: 'i32', values: cPlayer },
     { name: 'contract_season', type: 'i32', values: cSeason },
     { name: 'contract_salary', type: 'f64', values: cSalary },
-    { name: 'rows_start', type: 'i32', values: start },
-    { name: 'rows_group', type: 'u8', values: all.map((r) => r.group) },
-    { name: 'rows_row', type: 'i32', values: all.map((r) => r.row) },
+    ...rowColumns('rows', playerIndex, groups),
+    ...[...windows].sort(([a], [b]) => a - b).flatMap(([size, rows]) => rowColumns(`rows_w${size}`, playerIndex, rows)),
   ]);
 }
 
-/** Decodes and checks players.bin (`where` names it in errors: StoreError `kindred.store.corrupt`). */
-export function decodePlayersFile(bytes: Uint8Array, where: string): PlayersFile {
+/** The three columns `<prefix>_start`, `<prefix>_group`, `<prefix>_row` of every player's rows in `groups`. */
+function rowColumns(prefix: string, playerIndex: ReadonlyMap<string, number>, groups: GroupRows): ColumnInput[] {
+  const counts = new Int32Array(playerIndex.size + 1);
+  for (const group of POSITION_GROUPS) {
+    for (const m of groups.get(group) ?? []) {
+      const p = playerIndex.get(m.playerId);
+      if (p !== undefined) counts[p + 1] = (counts[p + 1] ?? 0) + 1;
+    }
+  }
+  const start = new Int32Array(playerIndex.size + 1);
+  for (let i = 0; i < playerIndex.size; i++) start[i + 1] = (start[i] ?? 0) + (counts[i + 1] ?? 0);
+  const total = start[playerIndex.size] ?? 0;
+  const group = new Uint8Array(total);
+  const row = new Int32Array(total);
+  const next = start.slice(0, playerIndex.size);
+  POSITION_GROUPS.forEach((name, gi) => {
+    groups.get(name)?.forEach((m, r) => {
+      const p = playerIndex.get(m.playerId);
+      if (p === undefined) return;
+      const at = next[p] ?? 0;
+      next[p] = at + 1;
+      group[at] = gi;
+      row[at] = r;
+    });
+  });
+  return [
+    { name: `${prefix}_start`, type: 'i32', values: start },
+    { name: `${prefix}_group`, type: 'u8', values: group },
+    { name: `${prefix}_row`, type: 'i32', values: row },
+  ];
+}
+
+/**
+ * Decodes and checks players.bin (`where` names it in errors: StoreError `kindred.store.corrupt`),
+ * with the rows over each of `windows` (the window sizes the manifest lists; each must be there).
+ */
+export function decodePlayersFile(bytes: Uint8Array, where: string, windows: readonly number[] = []): PlayersFile {
   const bad = (what: string): Error => corruptFile(where, what);
   const cols = decodeColumns(bytes, where);
   const levels = cols.strings('level');
@@ -115,15 +156,20 @@ export function decodePlayersFile(bytes: Uint8Array, where: string): PlayersFile
     if (p < 0 || p >= n) throw bad(`contract ${i} names player ${p} (the store has ${n})`);
     if (!Number.isFinite(salary[i] ?? NaN)) throw bad(`contract ${i} has salary ${salary[i]} (expected a finite number)`);
   }
-  const start = cols.i32('rows_start', n + 1);
-  const total = start[n] ?? 0;
-  const group = cols.u8('rows_group', total);
-  const row = cols.i32('rows_row', total);
-  for (let i = 0; i < n; i++) {
-    if ((start[i] ?? 0) > (start[i + 1] ?? 0) || (start[0] ?? 0) !== 0) throw bad(`rows_start of player ${i} runs backwards`);
-  }
-  for (let i = 0; i < total; i++) {
-    if ((group[i] ?? POSITION_GROUPS.length) >= POSITION_GROUPS.length || (row[i] ?? -1) < 0) throw bad(`profile row entry ${i} names group ${group[i]} row ${row[i]}`);
-  }
-  return { levels, players, contracts: { player, season, salary }, rows: { start, group, row } };
+  const rowsOf = (prefix: string): PlayerRows => {
+    const start = cols.i32(`${prefix}_start`, n + 1);
+    const total = start[n] ?? 0;
+    const group = cols.u8(`${prefix}_group`, total);
+    const row = cols.i32(`${prefix}_row`, total);
+    for (let i = 0; i < n; i++) {
+      if ((start[i] ?? 0) > (start[i + 1] ?? 0) || (start[0] ?? 0) !== 0) throw bad(`${prefix}_start of player ${i} runs backwards`);
+    }
+    for (let i = 0; i < total; i++) {
+      if ((group[i] ?? POSITION_GROUPS.length) >= POSITION_GROUPS.length || (row[i] ?? -1) < 0) throw bad(`${prefix} entry ${i} names group ${group[i]} row ${row[i]}`);
+    }
+    return { start, group, row };
+  };
+  const rows = rowsOf('rows');
+  const windowRows = new Map(windows.map((size) => [size, rowsOf(`rows_w${size}`)] as const));
+  return { levels, players, contracts: { player, season, salary }, rows, windowRows };
 }

@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { POSITION_GROUPS } from '../../src/profiles/positionGroup.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
+import { windowView } from '../../src/query/windowView.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { StoreHolder } from '../../src/server/StoreHolder.ts';
@@ -89,6 +90,26 @@ describe('openProfileStore (lazy by default)', () => {
     store.outcomes();
     // every file once, but the windows of the groups no query over windows asked for (never)
     for (const f of files) expect([f, store.opened.reads(f)]).toEqual([f, /^group-[A-Z]+\.w\d+\./.test(f) && !f.startsWith('group-IF.w') ? 0 : 1]);
+  });
+
+  it("finds a player's seasons and windows from the players file: a windowed target reads only its own window group", async () => {
+    const store = await openProfileStore(sim.storeDir);
+    const eager = await openProfileStore(sim.storeDir, { load: 'eager' });
+    const view = windowView(store, 3);
+    const eagerView = windowView(eager, 3);
+    const player = eagerView.groups.get('OF')?.player[5];
+    if (player === undefined) throw new Error('no OF windows');
+    // the scan over every window group that the players file replaces
+    const scanned: string[] = [];
+    for (const [group, g] of eagerView.groups) for (let row = 0; row < g.n; row++) if (g.player[row] === player) scanned.push(`${group} ${row}`);
+    expect(view.rowsOf(player).map((r) => `${r.group} ${r.row}`)).toEqual(scanned);
+    const files = Object.keys(store.opened.manifest.files);
+    expect(files.filter((f) => f.startsWith('group-')).every((f) => store.opened.reads(f) === 0)).toBe(true);
+    const target = playerTarget(view, { group: 'OF', row: 5 });
+    expect(JSON.stringify(findComps(view, target, DEFAULT_COMPS_OPTIONS))).toEqual(JSON.stringify(findComps(eagerView, playerTarget(eagerView, { group: 'OF', row: 5 }), DEFAULT_COMPS_OPTIONS)));
+    const read = files.filter((f) => store.opened.reads(f) > 0 && f.startsWith('group-'));
+    expect(read.length).toBeGreaterThan(0);
+    expect(read.every((f) => f.startsWith('group-OF.w3.'))).toBe(true);
   });
 
   it('refuses a file damaged after the open when it is first read, with the code an open gives', async () => {
