@@ -15,19 +15,20 @@ interface Pending {
 }
 
 /**
- * Builds HNSW indexes in up to `threads` worker threads (node:worker_threads), largest waiting job
- * first, and hands back each saved file's bytes. With `threads` 1 every index is built in the calling
- * thread instead. Either way an index is built by GuardedIndex with the same parameters, seed and
- * insertion order, so its file is byte for byte the same (hnswlib builds are deterministic under those).
+ * Builds HNSW indexes in up to `threads` worker threads (node:worker_threads) and hands back each saved
+ * file's bytes. Each job is sent to its worker at once, to the one with the least work queued (by
+ * vector count), and waits in that worker's own queue: a worker never waits for this thread to hand
+ * it its next job, so the indexes go on building while this thread computes (the build profiles the
+ * windows meanwhile). With `threads` 1 every index is built in the calling thread instead. Either way
+ * an index is built by GuardedIndex with the same parameters, seed and insertion order, so its file is
+ * byte for byte the same (hnswlib builds are deterministic under those).
  * The vectors given to `build` are handed over to the worker (their buffer is transferred, not copied),
  * so memory stays at one copy of each index's rows.
  */
 export class IndexBuildPool {
   readonly threads: number;
-  readonly #idle: Worker[] = [];
-  readonly #busy = new Map<Worker, Pending>();
-  readonly #waiting: Pending[] = [];
-  #started = 0;
+  /** Each worker's jobs sent and not yet answered, in the order sent (a worker answers in that order). */
+  readonly #queues = new Map<Worker, Pending[]>();
   #nextId = 0;
   #failed: unknown = null;
 
@@ -48,52 +49,51 @@ export class IndexBuildPool {
         reject(this.#failed);
         return;
       }
-      this.#waiting.push({ job: { id: this.#nextId++, vectors, dim, params, path }, resolve, reject });
-      this.#dispatch();
+      const pending: Pending = { job: { id: this.#nextId++, vectors, dim, params, path }, resolve, reject };
+      const worker = this.#leastLoaded();
+      this.#queues.get(worker)?.push(pending);
+      const buffer = vectors.buffer;
+      worker.postMessage(pending.job, buffer instanceof ArrayBuffer ? [buffer] : []);
     });
   }
 
   /** Stops the worker threads (after the jobs handed out have been answered or failed). */
   async close(): Promise<void> {
-    const workers = [...this.#idle, ...this.#busy.keys()];
-    this.#idle.length = 0;
+    const workers = [...this.#queues.keys()];
+    this.#queues.clear();
     await Promise.all(workers.map((w) => w.terminate()));
   }
 
-  #dispatch(): void {
-    while (this.#waiting.length > 0) {
-      let worker = this.#idle.pop();
-      if (!worker && this.#started < this.threads) worker = this.#spawn();
-      if (!worker) return;
-      // the largest waiting job first, so that one long build does not start last
-      let at = 0;
-      for (let i = 1; i < this.#waiting.length; i++) {
-        if ((this.#waiting[i]?.job.vectors.length ?? 0) > (this.#waiting[at]?.job.vectors.length ?? 0)) at = i;
+  /** An idle worker (a new one while fewer than `threads` run), else the one with the fewest vector values queued. */
+  #leastLoaded(): Worker {
+    let best: Worker | null = null;
+    let bestLoad = Infinity;
+    for (const [worker, queue] of this.#queues) {
+      const load = queue.reduce((a, p) => a + p.job.vectors.length, 0);
+      if (load < bestLoad) {
+        best = worker;
+        bestLoad = load;
       }
-      const [next] = this.#waiting.splice(at, 1);
-      if (!next) return;
-      this.#busy.set(worker, next);
-      const buffer = next.job.vectors.buffer;
-      worker.postMessage(next.job, buffer instanceof ArrayBuffer ? [buffer] : []);
     }
+    if (best && (bestLoad === 0 || this.#queues.size >= this.threads)) return best;
+    return this.#spawn();
   }
 
   #spawn(): Worker {
-    this.#started++;
     // The worker runs TypeScript: it registers the loader the CLI uses (by absolute path), then imports it.
     const tsxDir = dirname(createRequire(import.meta.url).resolve('tsx/package.json'));
     const loader = pathToFileURL(join(tsxDir, 'dist', 'esm', 'api', 'index.mjs')).href;
     const entry = new URL('./indexWorker.ts', import.meta.url).href;
     const boot = `import(${JSON.stringify(loader)}).then((m) => { m.register(); return import(${JSON.stringify(entry)}); })`;
     const worker = new Worker(boot, { eval: true });
+    this.#queues.set(worker, []);
     worker.on('message', (message: unknown) => {
-      const pending = this.#busy.get(worker);
+      const pending = this.#queues.get(worker)?.[0];
       if (!pending || !isIndexJobDone(message) || message.id !== pending.job.id) {
         this.#fail(new IndexError('kindred.index.native', 'a build worker answered out of turn', { stage: 'build' }));
         return;
       }
-      this.#busy.delete(worker);
-      this.#idle.push(worker);
+      this.#queues.get(worker)?.shift();
       const error = message.error;
       if (error) {
         pending.reject(
@@ -104,11 +104,10 @@ export class IndexBuildPool {
       } else {
         readFile(pending.job.path).then(pending.resolve, pending.reject);
       }
-      this.#dispatch();
     });
     worker.on('error', (error) => this.#fail(new IndexError('kindred.index.native', `a build worker stopped: ${error.message}`, { stage: 'build' })));
     worker.on('exit', (code) => {
-      if (this.#busy.has(worker)) this.#fail(new IndexError('kindred.index.native', `a build worker exited (code ${code}) during a build`, { stage: 'build' }));
+      if ((this.#queues.get(worker)?.length ?? 0) > 0) this.#fail(new IndexError('kindred.index.native', `a build worker exited (code ${code}) during a build`, { stage: 'build' }));
     });
     return worker;
   }
@@ -116,8 +115,6 @@ export class IndexBuildPool {
   /** A worker that broke fails every job in flight or waiting; later builds are refused. */
   #fail(error: IndexError): void {
     if (!this.#failed) this.#failed = error;
-    for (const p of this.#busy.values()) p.reject(error);
-    this.#busy.clear();
-    for (const p of this.#waiting.splice(0)) p.reject(error);
+    for (const queue of this.#queues.values()) for (const p of queue.splice(0)) p.reject(error);
   }
 }

@@ -125,8 +125,13 @@ export function buildProfiles(roster: Roster, options: ProfileOptions = DEFAULT_
  * overlapping windows share seasons, so their season-to-season correlation would overstate reliability.
  * `window` 1 is buildProfiles itself.
  */
-export function buildWindowProfiles(roster: Roster, options: ProfileOptions, window: number, single: ProfileSet): ProfileSet {
-  if (window === 1) return single;
+export function buildWindowProfiles(
+  roster: Roster,
+  options: ProfileOptions,
+  window: number,
+  single: { readonly groups: ReadonlyMap<PositionGroup, Pick<GroupProfiles, 'reliability' | 'redundancy'>> },
+): ProfileSet {
+  if (window === 1) return buildProfiles(roster, options);
   const wr = windowRoster(roster, window);
   const built = buildProfiles(wr.roster, options);
   const groups = new Map<PositionGroup, GroupProfiles>();

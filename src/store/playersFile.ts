@@ -39,8 +39,8 @@ export interface PlayerRows {
   readonly row: Int32Array;
 }
 
-/** The row metadata of a roster's groups (single seasons, or windows of one size). */
-type GroupRows = ReadonlyMap<PositionGroup, readonly { readonly playerId: string }[]>;
+/** The rows of a store's groups (single seasons, or windows of one size): per group, each row's player store index. */
+type GroupRows = ReadonlyMap<PositionGroup, ArrayLike<number>>;
 
 /** Player ids in store order, and each one's store index. */
 export function playerIndexOf(roster: Roster): ReadonlyMap<string, number> {
@@ -51,7 +51,7 @@ export function playerIndexOf(roster: Roster): ReadonlyMap<string, number> {
 
 /**
  * The players file of a roster whose players have the store indices of playerIndexOf, with the rows
- * of each group (by player id, in row order), and of each group over windows by window size.
+ * of each group (each row's player store index, in row order), and of each group over windows by window size.
  */
 export function encodePlayersFile(roster: Roster, groups: GroupRows, windows: ReadonlyMap<number, GroupRows> = new Map()): Uint8Array {
   const playerIndex = playerIndexOf(roster);
@@ -87,35 +87,37 @@ export function encodePlayersFile(roster: Roster, groups: GroupRows, windows: Re
     { name: 'contract_player', type: 'i32', values: cPlayer },
     { name: 'contract_season', type: 'i32', values: cSeason },
     { name: 'contract_salary', type: 'f64', values: cSalary },
-    ...rowColumns('rows', playerIndex, groups),
-    ...[...windows].sort(([a], [b]) => a - b).flatMap(([size, rows]) => rowColumns(`rows_w${size}`, playerIndex, rows)),
+    ...rowColumns('rows', ids.length, groups),
+    ...[...windows].sort(([a], [b]) => a - b).flatMap(([size, rows]) => rowColumns(`rows_w${size}`, ids.length, rows)),
   ]);
 }
 
 /** The three columns `<prefix>_start`, `<prefix>_group`, `<prefix>_row` of every player's rows in `groups`. */
-function rowColumns(prefix: string, playerIndex: ReadonlyMap<string, number>, groups: GroupRows): ColumnInput[] {
-  const counts = new Int32Array(playerIndex.size + 1);
+function rowColumns(prefix: string, players: number, groups: GroupRows): ColumnInput[] {
+  const counts = new Int32Array(players + 1);
   for (const group of POSITION_GROUPS) {
-    for (const m of groups.get(group) ?? []) {
-      const p = playerIndex.get(m.playerId);
-      if (p !== undefined) counts[p + 1] = (counts[p + 1] ?? 0) + 1;
+    const rows = groups.get(group);
+    for (let r = 0; r < (rows?.length ?? 0); r++) {
+      const p = rows?.[r] ?? -1;
+      if (p >= 0 && p < players) counts[p + 1] = (counts[p + 1] ?? 0) + 1;
     }
   }
-  const start = new Int32Array(playerIndex.size + 1);
-  for (let i = 0; i < playerIndex.size; i++) start[i + 1] = (start[i] ?? 0) + (counts[i + 1] ?? 0);
-  const total = start[playerIndex.size] ?? 0;
+  const start = new Int32Array(players + 1);
+  for (let i = 0; i < players; i++) start[i + 1] = (start[i] ?? 0) + (counts[i + 1] ?? 0);
+  const total = start[players] ?? 0;
   const group = new Uint8Array(total);
   const row = new Int32Array(total);
-  const next = start.slice(0, playerIndex.size);
+  const next = start.slice(0, players);
   POSITION_GROUPS.forEach((name, gi) => {
-    groups.get(name)?.forEach((m, r) => {
-      const p = playerIndex.get(m.playerId);
-      if (p === undefined) return;
+    const rows = groups.get(name);
+    for (let r = 0; r < (rows?.length ?? 0); r++) {
+      const p = rows?.[r] ?? -1;
+      if (!(p >= 0 && p < players)) continue;
       const at = next[p] ?? 0;
       next[p] = at + 1;
       group[at] = gi;
       row[at] = r;
-    });
+    }
   });
   return [
     { name: `${prefix}_start`, type: 'i32', values: start },
