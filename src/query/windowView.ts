@@ -12,9 +12,25 @@ import type { ProfileStore, StoredGroup, StoredRowRef } from '../store/ProfileSt
  *
  * @example
  * windowView(store, 3).groups.get('IF')?.window?.size; // => 3 (a store built with --windows 1,3)
+ *
+ * One view per store and window, made on first use and kept as long as the store (a server answers
+ * every request from it: gathering each player's rows anew took a pass over every group per answer).
  */
 export function windowView(store: ProfileStore, window: number): ProfileStore {
   if (window === 1) return store;
+  let views = VIEWS.get(store);
+  if (!views) VIEWS.set(store, (views = new Map()));
+  const kept = views.get(window);
+  if (kept) return kept;
+  const view = makeView(store, window);
+  views.set(window, view);
+  return view;
+}
+
+/** The views made so far, per store (dropped with the store). */
+const VIEWS = new WeakMap<ProfileStore, Map<number, ProfileStore>>();
+
+function makeView(store: ProfileStore, window: number): ProfileStore {
   const groups = store.windows.get(window);
   if (!groups) {
     const have = [1, ...store.windows.keys()].sort((a, b) => a - b);
