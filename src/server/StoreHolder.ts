@@ -1,11 +1,14 @@
 import { LoadedStore } from './LoadedStore.ts';
 import { loadServedStore, type ServedStore } from './loadServedStore.ts';
+import type { ProfileStore } from '../store/ProfileStore.ts';
 
-export type StoreLoader = (dir: string) => Promise<ServedStore>;
+/** Loads the store in `dir`; `previous`, on a reload, is the store served until now (its unchanged parts may be taken over). */
+export type StoreLoader = (dir: string, previous?: ProfileStore) => Promise<ServedStore>;
 
 /**
- * The store the server answers from. Queries read `current` and never wait; `reload` reads the
- * store folder again in full (manifest and checksums verified by openProfileStore) and swaps it in
+ * The store the server answers from. Queries read `current` and never wait; `reload` opens the
+ * store folder again (manifest and checksums verified by openProfileStore; the groups whose files
+ * are unchanged are taken over from the current store instead of read again) and swaps it in
  * only when that succeeded, so a query sees the old store or the new one, never a mix. A failed
  * reload leaves the old store in place and rejects with the load error. Reloads run one at a time.
  */
@@ -34,7 +37,7 @@ export class StoreHolder {
 
   reload(): Promise<LoadedStore> {
     const next = this.#queue.then(async () => {
-      const served = await this.#load(this.dir);
+      const served = await this.#load(this.dir, this.#current.store);
       this.#current = new LoadedStore(served, this.#current.generation + 1, this.#cacheEntries);
       return this.#current;
     });

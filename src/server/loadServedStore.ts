@@ -32,11 +32,13 @@ const manifestText = (dir: string): Promise<string> => readFile(join(dir, MANIFE
  * has swapped a new folder in meanwhile; the manifest is read before and after the open, and a store
  * swapped in between is opened again. Why lazily: at 1M player-seasons decoding outcomes.json took
  * about 0.7 s of CPU at every load and reload, while only the prospect and backtest answers read it.
+ * `previous` (a reload): the groups it has read are taken over where the files are unchanged
+ * (openProfileStore's `reuse`), so a reload of an unchanged store reads none of them again.
  */
-export async function loadServedStore(dir: string): Promise<ServedStore> {
+export async function loadServedStore(dir: string, previous?: ProfileStore): Promise<ServedStore> {
   for (let attempt = 1; ; attempt++) {
     const before = await manifestText(dir);
-    const store = await openProfileStore(dir);
+    const store = await openProfileStore(dir, previous ? { reuse: previous } : {});
     const outcomes = (): Outcomes | StoreError => outcomesOf(store);
     const backtest = await readBacktestFile(store);
     if ((await manifestText(dir)) === before) return { store, outcomes, backtest };

@@ -4,6 +4,7 @@ import { Outcomes } from '../outlook/Outcomes.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
 import { decodeOutcomesFile } from './outcomesFile.ts';
 import { openStore, type OpenStore } from './openStore.ts';
+import type { FileEntry, Manifest } from './manifest.ts';
 import { decodePlayersFile, type PlayerRows } from './playersFile.ts';
 import { corruptFile } from './parseStoreJson.ts';
 import type { ProfileStore, StoredGroup, StoredPlayer, StoredRowRef } from './ProfileStore.ts';
@@ -18,6 +19,14 @@ export interface OpenProfileOptions {
    * `eager`: all of it now, so that any damaged file is refused by the open itself.
    */
   readonly load?: 'lazy' | 'eager';
+  /**
+   * A store opened before from the same folder (a server's reload): each group it has read already
+   * is taken over instead of read again when the new manifest lists every file of that group, and
+   * the players file and the build parameters, with the same size and sha256 as the old one (the
+   * bytes the old store verified are then the bytes the new manifest names). Any other group is read
+   * from the new files, verified when first read, as without `reuse`.
+   */
+  readonly reuse?: ProfileStore;
 }
 
 /**
@@ -33,7 +42,7 @@ export interface OpenProfileOptions {
 export async function openProfileStore(dir: string, options: OpenProfileOptions = {}): Promise<ProfileStore> {
   const store = await openStore(dir, { verify: 'read' });
   try {
-    const profile = profileStoreOf(dir, store);
+    const profile = profileStoreOf(dir, store, options.reuse);
     if (options.load === 'eager') touchAll(profile);
     return profile;
   } catch (error) {
@@ -42,7 +51,7 @@ export async function openProfileStore(dir: string, options: OpenProfileOptions 
   }
 }
 
-function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
+function profileStoreOf(dir: string, store: OpenStore, reuse: ProfileStore | undefined): ProfileStore {
   const playersWhere = `${store.dir}/${PLAYERS_FILE}`;
   const windowSizes = storedWindows(store.manifest.params);
   const pf = decodePlayersFile(store.readBytesSync(PLAYERS_FILE), playersWhere, windowSizes);
@@ -61,9 +70,20 @@ function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
     return out;
   });
   const refs = { players: players.length, levels: pf.levels.length };
+  // taken now, so the new store holds the old one's groups but not the old store itself
+  const carried = (from: ReadonlyMap<PositionGroup, StoredGroup> | undefined): ReadonlyMap<PositionGroup, StoredGroup> => {
+    const out = new Map<PositionGroup, StoredGroup>();
+    if (!reuse || !(from instanceof LazyGroups)) return out;
+    for (const group of POSITION_GROUPS) {
+      const g = from.loaded(group);
+      if (g && sameGroupFiles(reuse.opened.manifest, store.manifest, group)) out.set(group, g);
+    }
+    return out;
+  };
   const groups = new LazyGroups(
     POSITION_GROUPS.filter((g) => groupFileNames(g).json in store.manifest.files),
     (group) => checkPlayerRows(readWholeGroup(readGroup(store, group, refs)), group, pf.rows, playersWhere),
+    carried(reuse?.groups),
   );
   const windows = new Map<number, ReadonlyMap<PositionGroup, StoredGroup>>();
   for (const size of windowSizes) {
@@ -74,6 +94,7 @@ function profileStoreOf(dir: string, store: OpenStore): ProfileStore {
         const g = readWholeGroup(readGroup(store, group, refs, size));
         return rows ? checkPlayerRows(g, group, rows, playersWhere, size) : g;
       },
+      carried(reuse?.windows.get(size)),
     ));
   }
   const outcomes = once((): Outcomes => {
@@ -138,6 +159,21 @@ function checkPlayerRows(g: StoredGroup, group: PositionGroup, rows: PlayerRows,
 }
 
 /**
+ * Whether a group read from the store of manifest `old` holds exactly what manifest `now` lists: the
+ * same build parameters, the same players file and the same files named `group-<G>.*` (every window
+ * and the learned space included, so the test errs towards reading again), each of the same size and sha256.
+ */
+function sameGroupFiles(old: Manifest, now: Manifest, group: PositionGroup): boolean {
+  const same = (a: FileEntry | undefined, b: FileEntry | undefined): boolean => a !== undefined && b !== undefined && a.sha256 === b.sha256 && a.bytes === b.bytes;
+  if (JSON.stringify(old.params) !== JSON.stringify(now.params)) return false;
+  if (!same(old.files[PLAYERS_FILE], now.files[PLAYERS_FILE])) return false;
+  const prefix = `group-${group}.`;
+  const names = new Set([...Object.keys(old.files), ...Object.keys(now.files)].filter((name) => name.startsWith(prefix)));
+  for (const name of names) if (!same(old.files[name], now.files[name])) return false;
+  return names.size > 0;
+}
+
+/**
  * Reads the rest of a group now: its matrices and every index. A group is read whole when it is first
  * asked for, so any damaged file of it is refused then, whichever of its parts the query would use.
  */
@@ -165,9 +201,16 @@ class LazyGroups implements ReadonlyMap<PositionGroup, StoredGroup> {
   readonly #read: (group: PositionGroup) => StoredGroup;
   readonly #loaded = new Map<PositionGroup, StoredGroup>();
 
-  constructor(order: readonly PositionGroup[], read: (group: PositionGroup) => StoredGroup) {
+  /** `carried`: groups read before with the same files (openProfileStore's `reuse`), taken instead of read. */
+  constructor(order: readonly PositionGroup[], read: (group: PositionGroup) => StoredGroup, carried: ReadonlyMap<PositionGroup, StoredGroup> = new Map()) {
     this.#order = order;
     this.#read = read;
+    for (const [group, g] of carried) if (order.includes(group)) this.#loaded.set(group, g);
+  }
+
+  /** The group when it has been read (or taken over) already, without reading it. */
+  loaded(key: PositionGroup): StoredGroup | undefined {
+    return this.#loaded.get(key);
   }
 
   get size(): number {
