@@ -199,6 +199,12 @@ function readWhole(root: string, name: string, fd: number, bytes: number): Uint8
   return out;
 }
 
+/** Whether a file-system error says the path is not there (as opposed to unreadable: EACCES, EMFILE, EIO ...). */
+function isNotFound(error: unknown): boolean {
+  const code = error instanceof Error && 'code' in error ? error.code : undefined;
+  return code === 'ENOENT' || code === 'ENOTDIR';
+}
+
 function describe(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
@@ -208,6 +214,10 @@ async function readManifest(root: string): Promise<Manifest> {
   try {
     text = await readFile(join(root, MANIFEST_NAME), 'utf8');
   } catch (error) {
+    if (!isNotFound(error)) {
+      const reason = `store at ${root}: ${MANIFEST_NAME} is there but cannot be read (${describe(error)}); check the folder's permissions and the process's open-file limit`;
+      throw withCause(new StoreError('kindred.store.corrupt', reason, { dir: root, file: MANIFEST_NAME }), error);
+    }
     throw withCause(
       new StoreError('kindred.store.missing', `no store at ${root} (no ${MANIFEST_NAME}); run kindred build`, { dir: root }),
       error,

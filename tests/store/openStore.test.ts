@@ -1,5 +1,5 @@
 import { STORE_FORMAT_VERSION } from '../../src/store/manifest.ts';
-import { readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { bytesToFloat32, float32ToBytes } from '../../src/store/float32Bytes.ts';
@@ -112,6 +112,15 @@ describe('openStore(dir)', () => {
     });
     rmSync(join(dir, 'manifest.json'));
     await expect(openStore(dir)).rejects.toMatchObject({ code: 'kindred.store.missing' });
+  });
+
+  it('says a manifest that is there but cannot be read is unreadable, not missing (a full file table or a permission is not "no store")', async () => {
+    rmSync(join(dir, 'manifest.json'));
+    mkdirSync(join(dir, 'manifest.json')); // reading it fails with EISDIR, not ENOENT
+    await expect(openStore(dir)).rejects.toMatchObject({
+      code: 'kindred.store.corrupt',
+      message: expect.stringMatching(/manifest\.json.*cannot be read \(EISDIR/),
+    });
   });
 
   it('refuses a manifest that is not JSON, is badly shaped, or lists a path outside the store', async () => {
