@@ -17,13 +17,12 @@ import { benchLeagues, withBenchLeague } from './leagues.ts';
 import type { ProfileStore, StoredGroup } from '../src/store/ProfileStore.ts';
 import type { SimTruth } from '../src/sim/SimTruth.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../src/query/findComps.ts';
-import { findCompsWithRows } from '../src/query/findComps.ts';
 import { playerTarget } from '../src/query/playerTarget.ts';
 import { DEFAULT_REACH, poolRules } from '../src/query/poolDefaults.ts';
 import type { PoolFilter } from '../src/query/PoolFilter.ts';
 import type { Target } from '../src/query/Target.ts';
 import type { PositionGroup } from '../src/profiles/positionGroup.ts';
-import { groupTalents, sampleStream } from './lib/compsQuality.ts';
+import { compRowsOrNone, groupTalents, sampleStream } from './lib/compsQuality.ts';
 
 const GROUPS: PositionGroup[] = ['C', 'IF', 'OF', 'SP', 'RP'];
 const POOLS = ['group', 'level', 'default', 'adjacent'] as const;
@@ -80,7 +79,8 @@ function scoreGroup(store: ProfileStore, g: StoredGroup, truth: SimTruth, level:
     if (!(ideal > 0) || nearest.length < K) continue;
     const scores = new Map<Pool, Score>();
     for (const pool of POOLS) {
-      const { rows } = findCompsWithRows(store, target, { ...DEFAULT_COMPS_OPTIONS, exact: true, k: K, filter: poolFilter(store, g, target, pool) });
+      const rows = compRowsOrNone(store, target, { ...DEFAULT_COMPS_OPTIONS, exact: true, k: K, filter: poolFilter(store, g, target, pool) });
+      if (rows === null) break;
       const known = rows.filter((r) => !Number.isNaN(talents[r * t] as number));
       if (known.length < K) break;
       const targetSample = g.sample[row] as number;
@@ -143,7 +143,8 @@ export async function runPoolQuality(playerSeasons: number, leagueCount = 4, tar
     }).join(' | '),
   );
   lines.push('per group over leagues and levels, mean ratio (' + POOLS.join('/') + '):');
-  lines.push(GROUPS.map((grp) => `${grp} ${POOLS.map((p) => mean(perGroup.get(`${grp}|${p}`) ?? []).toFixed(2)).join('/')}`).join('  '));
+  const groupCell = (xs: readonly number[]): string => (xs.length === 0 ? 'no targets' : mean(xs).toFixed(2));
+  lines.push(GROUPS.map((grp) => `${grp} ${POOLS.map((p) => groupCell(perGroup.get(`${grp}|${p}`) ?? [])).join('/')}`).join('  '));
   return lines;
 }
 

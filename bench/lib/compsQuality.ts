@@ -12,6 +12,7 @@ import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts'
 import { findCompsWithRows, type CompsOptions } from '../../src/query/findComps.ts';
 import { quantileSorted } from '../../src/stats/quantile.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
+import type { Target } from '../../src/query/Target.ts';
 import { QueryError } from '../../src/errors/KindredError.ts';
 import type { PositionGroup } from '../../src/profiles/positionGroup.ts';
 
@@ -124,15 +125,8 @@ function groupQuality(store: ProfileStore, g: StoredGroup, truth: SimTruth, o: Q
     const row = candidates[Math.floor(next() * candidates.length)] as number;
     if (Number.isNaN(talents[row * t] as number)) continue;
     const target = playerTarget(store, { group: g.group, row });
-    let rows: readonly number[];
-    try {
-      ({ rows } = findCompsWithRows(store, target, { ...o.compsOptions, k: o.k, filter }));
-    } catch (e) {
-      // a season with no value on any weighted dimension cannot be a target (kindred.query.badTarget): draw another
-      if (e instanceof QueryError && e.code === 'kindred.query.badTarget') continue;
-      throw e;
-    }
-    if (rows.length < o.k) continue;
+    const rows = compRowsOrNone(store, target, { ...o.compsOptions, k: o.k, filter });
+    if (rows === null || rows.length < o.k) continue;
     const compMean = rows.reduce((a, r) => a + dist(row, r), 0) / rows.length;
     // the k truly nearest other players (each at his nearest season)
     const best = new Map<number, number>();
@@ -159,6 +153,19 @@ function truthOf(store: ProfileStore, g: StoredGroup, truth: SimTruth, row: numb
 }
 
 /** True talents of every row of a group (of the truth season: a window's last), standardised over the group; NaN where unknown. */
+/**
+ * The comps' rows for a bench target, or null when the season cannot be a target (no value on any
+ * weighted dimension: kindred.query.badTarget, common in tiny leagues), so the bench draws another.
+ */
+export function compRowsOrNone(store: ProfileStore, target: Target, options: CompsOptions): readonly number[] | null {
+  try {
+    return findCompsWithRows(store, target, options).rows;
+  } catch (e) {
+    if (e instanceof QueryError && e.code === 'kindred.query.badTarget') return null;
+    throw e;
+  }
+}
+
 export function groupTalents(store: ProfileStore, g: StoredGroup, truth: SimTruth): { talents: Float64Array; t: number; names: readonly string[] } {
   const seasonTruth = (row: number) => truth.find(store.players[g.player[row] as number]?.playerId ?? '', g.season[row] as number);
   let first: ReturnType<typeof seasonTruth>;
