@@ -7,6 +7,7 @@ import { spawn } from 'node:child_process';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
+import { servingUrl } from '../../src/server/servingUrl.ts';
 
 const kindred = join(fileURLToPath(new URL('../..', import.meta.url)), 'bin', 'kindred.js');
 
@@ -24,15 +25,7 @@ export interface ServeLoad {
 export async function serveUnderLoad(load: ServeLoad): ReturnType<typeof autocannon> {
   const args = [kindred, 'serve', '--store', load.storeDir, '--port', '0', ...load.serveArgs];
   const child = spawn(process.execPath, args, { stdio: ['ignore', 'pipe', 'ignore'] });
-  const url = await new Promise<string>((resolve, reject) => {
-    let out = '';
-    child.stdout.on('data', (c: Buffer) => {
-      out += c.toString('utf8');
-      const m = /serving (http:\/\/\S+)/.exec(out);
-      if (m?.[1]) resolve(m[1]);
-    });
-    child.once('exit', (code) => reject(new Error(`kindred serve exited with ${code ?? 'a signal'} before listening`)));
-  });
+  const url = await servingUrl(child);
   try {
     let next = 0;
     const warm = await fetch(new URL(load.paths[0] ?? '/api/info', url));

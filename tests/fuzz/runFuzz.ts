@@ -18,6 +18,7 @@ import { SeededRandom } from '../../src/random/SeededRandom.ts';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import { servingUrl } from '../../src/server/servingUrl.ts';
 import type { CommandOutcome, FuzzJob } from './fuzzWorker.ts';
 import { randomCommandLine, randomRequest } from './parameterMutations.ts';
 import { RosterMutator } from './rosterMutations.ts';
@@ -313,15 +314,7 @@ async function fuzzServer(
     exited = signal ?? `exit ${code}`;
   });
   try {
-    const url = await new Promise<string>((resolve, reject) => {
-      let out = '';
-      child.stdout.on('data', (c: Buffer) => {
-        out += c.toString('utf8');
-        const m = /serving (http:\/\/\S+)/.exec(out);
-        if (m?.[1]) resolve(m[1]);
-      });
-      child.once('exit', () => reject(new Error(`kindred serve ended before listening: ${log}`)));
-    });
+    const url = await servingUrl(child, () => log);
     for (let i = 0; i < plan.requests && Date.now() < stopAt; i++) {
       const rng = seedOf(plan, 4, i);
       const { method, path } = randomRequest(rng, players);

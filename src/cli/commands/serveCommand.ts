@@ -4,6 +4,7 @@ import { DEFAULT_STORE } from '../../request/parameters.ts';
 import { createServer, DEFAULT_CACHE_ENTRIES } from '../../server/createServer.ts';
 import { positiveInt } from '../../request/valueParsers.ts';
 import { cliParser } from '../requestOptions.ts';
+import { servingLine } from '../../server/servingUrl.ts';
 
 /** A TCP port: 0 (any free port) to 65535. */
 export function port(value: string): number {
@@ -68,7 +69,7 @@ export function serveCommand(io: CliIo, signals: ServeSignals = processSignals):
         cacheEntries: raw.cache,
         log: (line) => io.stderr.write(line + '\n'),
       });
-      io.stdout.write(`Kindred is serving ${running.url} from ${raw.store}\n`);
+      io.stdout.write(servingLine(running.url, raw.store));
       io.stderr.write('Ctrl-C stops; SIGHUP or POST /api/reload reloads the store after a rebuild.\n');
       await new Promise<void>((resolve) => {
         const offs: (() => void)[] = [];
