@@ -1,8 +1,8 @@
 /**
  * The comps-quality cases and their aims (top-level hitters 400+ PA, SP 500+ BF, RP 150+ BF, planted
  * twins), on the standard varied leagues (bench/leagues.ts) with twins planted in each, for profiles over
- * windows of 1, 2 and 3 seasons, with the comps a user gets by default (default pool rules and weighting):
- * `node --import tsx bench/qualityCases.bench.ts [playerSeasons] [targetsPerCase] [leagues] [twinsPerCase]`
+ * windows of 1, 3 and 5 seasons (others by the 6th argument), with the comps a user gets by default (default pool rules and weighting):
+ * `node --import tsx bench/qualityCases.bench.ts [playerSeasons] [targetsPerCase] [leagues] [twinsPerCase] [windows]`
  * (also run by `npm run bench -- quality`). Scoring: bench/lib/caseQuality.ts. Each league is built once
  * with every window; its figure per case is the median ratio over the case's targets (twins: the share
  * found in the top 10); across leagues the mean, sd and min-max, and the aims on the worst league (an aim
@@ -23,7 +23,8 @@ import { aim, type Aim } from './lib/aim.ts';
 import { chooseTargets, QUALITY_CASES, scoreCases } from './lib/caseQuality.ts';
 import { benchLeagues } from './leagues.ts';
 
-const WINDOWS = [1, 2, 3] as const;
+/** The windows compared (the 6th argument, e.g. `1,3,5`; default 1, 3, 5). */
+const WINDOWS: readonly number[] = (process.argv[6] ?? '1,3,5').split(',').map(Number);
 /** Share of the top-level careers given a planted twin in every bench league. */
 export const TWIN_SHARE = 0.1;
 
@@ -49,7 +50,7 @@ export async function runQualityCases(playerSeasons: number, targetsPerCase: num
       const league = simulateLeague({ ...spec.options, twinShare: TWIN_SHARE });
       await writeLeagueCsv(league, join(dir, 'roster'));
       const storeDir = join(dir, 'store');
-      await buildStore(join(dir, 'roster'), storeDir, { lenient: false, windows: WINDOWS });
+      await buildStore(join(dir, 'roster'), storeDir, { lenient: false, windows: [...new Set([1, ...WINDOWS])] });
       const store = await openProfileStore(storeDir);
       const chosen = chooseTargets(store, league, targetsPerCase, twinsPerCase, spec.options.seed);
       for (const [w, window] of WINDOWS.entries()) {
@@ -91,7 +92,7 @@ export async function runQualityCases(playerSeasons: number, targetsPerCase: num
   for (const [c, kase] of QUALITY_CASES.entries()) {
     lines.push(`${`  of which ${kase.name.replace('top ', '')}`.padEnd(22)}${WINDOWS.map((_, w) => ((twinByCase[c] as string[][])[w] ?? []).join(' ').padStart(40)).join('')}`);
   }
-  const d = WINDOWS.indexOf(DEFAULT_WINDOW as (typeof WINDOWS)[number]);
+  const d = WINDOWS.indexOf(DEFAULT_WINDOW);
   lines.push(`aims (default window ${DEFAULT_WINDOW}, worst league):`);
   for (const [c, kase] of QUALITY_CASES.entries()) {
     const worst = Math.max(...((median[c] as number[][])[d] ?? []));

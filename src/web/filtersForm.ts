@@ -1,5 +1,6 @@
 import type { PoolReachDefaults, StoreInfo } from '../request/apiContract.ts';
 import { h } from './dom.ts';
+import { DEFAULT_WINDOW } from '../query/defaultWindow.ts';
 
 export interface FiltersForm {
   readonly element: HTMLElement;
@@ -60,7 +61,7 @@ export function filtersForm(info: StoreInfo): FiltersForm {
   const weights = h('input', { id: 'opt-weights', type: 'text', placeholder: 'e.g. obp=2,run_speed_ft_s=0', spellcheck: 'false' });
   const coverage = h('input', { id: 'opt-min-coverage', type: 'number', min: '0', max: '1', step: '0.05', value: '0.5' });
   const allSeasons = h('input', { id: 'opt-all-seasons', type: 'checkbox' });
-  const window = h('input', { id: 'opt-window', type: 'number', min: '1', max: '5', value: '', placeholder: 'default', title: 'profiles over his last N seasons at a level (empty: the job\u2019s default, 3 seasons for comps when the store has them; 1: single seasons)' });
+  const window = h('input', { id: 'opt-window', type: 'number', min: '1', max: '5', value: '', placeholder: 'default', title: `profiles over his last N seasons at a level (empty: the job\u2019s default, ${DEFAULT_WINDOW} seasons for comps when the store has them; 1: single seasons)` });
   const element = h(
     'fieldset',
     { class: 'filters' },

@@ -115,7 +115,7 @@ describe('a corrupted store', () => {
   it('is refused with a clear message and exit 1, in a separate process that does not crash', async () => {
     const storeDir = join(dir, 'corrupt');
     expect((await runCli('build', roster, '--store', storeDir, '--no-backtest')).code).toBe(0);
-    // a single-season index (the query below asks for single seasons; windows have their own, group-<G>.w3.hnsw)
+    // a single-season index (the query below asks for single seasons; windows have their own, group-<G>.w5.hnsw)
     const indexFile = (await readdir(storeDir)).find((f) => f.endsWith('.hnsw') && !/\.w\d+\./.test(f));
     if (!indexFile) throw new Error('the demo store has no index file');
     const group = /^group-([A-Z]+)\./.exec(indexFile)?.[1] ?? '';

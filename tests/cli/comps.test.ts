@@ -234,11 +234,11 @@ describe('kindred comps: alike and apart agree with the grade grid', () => {
 
 describe('kindred comps: playing time of every comp', () => {
   it('shows PA for hitters in JSON, CSV and the table, the season sample the store holds', async () => {
-    // the default profiles are windows of 3 seasons: each comp's sample is his window's, summed over its seasons
+    // the default profiles are windows of 5 seasons: each comp's sample is his window's, summed over its seasons
     const json = await runCli('comps', catcher.id, '--store', store, '--format', 'json');
     const result = compsResultSchema.parse(JSON.parse(json.stdout));
-    expect(result.query.window).toBe(3);
-    const c = profiles.windows.get(3)?.get('C');
+    expect(result.query.window).toBe(5);
+    const c = profiles.windows.get(5)?.get('C');
     for (const comp of result.comps) {
       expect(comp.sample_unit).toBe('PA');
       const p = profiles.players.findIndex((x) => x.playerId === comp.player_id);
@@ -254,14 +254,14 @@ describe('kindred comps: playing time of every comp', () => {
 
 describe('kindred comps: the default window gives way to the season asked for', () => {
   // In the demo league p001292 started through 2021 and also relieved in 2021: that relief season
-  // has no 3-season RP window of its own (his window that year is a starter's).
+  // has no 5-season RP window of its own (his window that year is a starter's).
   it('answers a season without a window of its own from single seasons, unless a window is asked for', async () => {
     const out = await runCli('comps', 'p001292', '--season', '2021', '--position', 'RP', '--format', 'json', '--store', store);
     expect(out.code, out.stderr).toBe(0);
     const r = compsResultSchema.parse(JSON.parse(out.stdout));
     expect(r.query.position).toBe('RP');
     expect(r.query.window ?? 1).toBe(1);
-    const asked = await runCli('comps', 'p001292', '--season', '2021', '--position', 'RP', '--window', '3', '--store', store);
+    const asked = await runCli('comps', 'p001292', '--season', '2021', '--position', 'RP', '--window', '5', '--store', store);
     expect(asked.code).toBe(1);
     expect(asked.stderr).toMatch(/kindred\.query\.noSeason/);
   });

@@ -11,7 +11,8 @@ import { openProfileStore } from '../../src/store/openProfileStore.ts';
 let single: string;
 let windowed: string;
 /** A hitter with at least four top-level seasons, and his third one. */
-let hitter: { id: string; season: number };
+/** An infielder at his third top-level season, and the first top-level season his window of 5 holds. */
+let hitter: { id: string; season: number; first: number };
 /** The roster's top level. */
 let top: string;
 
@@ -22,10 +23,10 @@ beforeAll(async () => {
   single = join(dir, 'single');
   windowed = join(dir, 'windowed');
   expect((await runCli('build', join(dir, 'roster'), '--store', single, '--no-backtest', '--windows', '1')).code).toBe(0);
-  // the build's default windows: single seasons and 3 seasons
+  // the build's default windows: single seasons and 5 seasons
   const built = await runCli('build', join(dir, 'roster'), '--store', windowed, '--no-backtest');
   expect(built.code).toBe(0);
-  expect(built.stderr).toMatch(/Profiles over 3 seasons: C \d/);
+  expect(built.stderr).toMatch(/Profiles over 5 seasons: C \d/);
   const store = await openProfileStore(single);
   const g = store.groups.get('IF');
   if (!g) throw new Error('no infielders');
@@ -34,7 +35,8 @@ beforeAll(async () => {
   const seasons = new Map<number, number[]>();
   for (let r = 0; r < g.n; r++) if (g.level[r] === topIdx) seasons.set(g.player[r] as number, [...(seasons.get(g.player[r] as number) ?? []), g.season[r] as number]);
   const [player, list] = [...seasons].find(([, s]) => s.length >= 4) ?? [-1, []];
-  hitter = { id: store.players[player]?.playerId ?? '', season: [...list].sort((a, b) => a - b)[2] ?? 0 };
+  const sorted = [...list].sort((a, b) => a - b);
+  hitter = { id: store.players[player]?.playerId ?? '', season: sorted[2] ?? 0, first: sorted.slice(0, 3).find((x) => x > (sorted[2] ?? 0) - 5) ?? 0 };
 });
 
 describe('kindred comps --window', () => {
@@ -47,55 +49,55 @@ describe('kindred comps --window', () => {
     }
   });
 
-  it('defaults comps to windows of 3 seasons in a store that has them; cheaper keeps single seasons', async () => {
+  it('defaults comps to windows of 5 seasons in a store that has them; cheaper keeps single seasons', async () => {
     const at = ['--season', String(hitter.season), '--level', top, '--format', 'json'];
     const plain = await runCli('comps', hitter.id, '--store', windowed, ...at);
-    const three = await runCli('comps', hitter.id, '--store', windowed, ...at, '--window', '3');
+    const five = await runCli('comps', hitter.id, '--store', windowed, ...at, '--window', '5');
     expect(plain.code).toBe(0);
-    expect(plain.stdout).toBe(three.stdout);
-    expect(compsResultSchema.parse(JSON.parse(plain.stdout)).query.window).toBe(3);
+    expect(plain.stdout).toBe(five.stdout);
+    expect(compsResultSchema.parse(JSON.parse(plain.stdout)).query.window).toBe(5);
     const cheaper = await runCli('cheaper', hitter.id, '--store', windowed, ...at, '--max-share', '1');
     expect(cheaper.code).toBe(0);
-    expect(cheaper.stdout).not.toMatch(/"window": 3/);
+    expect(cheaper.stdout).not.toMatch(/"window": 5/);
   });
 
-  it('--window 3 compares his window ending at the asked season with windows ending at any season, each with the seasons it spans (JSON)', async () => {
-    const out = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--format', 'json', '--window', '3', '--k', '15');
+  it('--window 5 compares his window ending at the asked season with windows ending at any season, each with the seasons it spans (JSON)', async () => {
+    const out = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--format', 'json', '--window', '5', '--k', '15');
     expect(out.code).toBe(0);
     const r = compsResultSchema.parse(JSON.parse(out.stdout));
-    expect(r.query.window).toBe(3);
+    expect(r.query.window).toBe(5);
     expect(r.query.seasons?.[1]).toBe(hitter.season);
-    // his third top-level season: the window holds the two before it, and never a season after it
-    expect(r.query.seasons?.[0]).toBe(hitter.season - 2);
+    // his third top-level season: the window reaches back to his first top-level season, and never a season after it
+    expect(r.query.seasons?.[0]).toBe(hitter.first);
     expect(r.comps.length).toBeGreaterThanOrEqual(3);
     for (const c of r.comps) {
       const [first, last] = c.seasons ?? [NaN, NaN];
       expect(last).toBe(c.season);
       expect(first).toBeLessThanOrEqual(c.season);
-      expect(c.season - first).toBeLessThanOrEqual(2);
+      expect(c.season - first).toBeLessThanOrEqual(4);
     }
     expect(new Set(r.comps.map((c) => c.season)).size).toBeGreaterThan(1);
   });
 
   it('shows each comp\u2019s window in the table (e.g. 2019-21) and in the CSV (first_season beside season)', async () => {
-    const table = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '3');
-    expect(table.stdout).toMatch(/windows of 3 seasons/);
+    const table = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '5');
+    expect(table.stdout).toMatch(/windows of 5 seasons/);
     expect(table.stdout).toMatch(/ \d{4}-\d{2} +Top /);
-    const csv = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '3', '--format', 'csv');
+    const csv = await runCli('comps', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '5', '--format', 'csv');
     const [head, first] = csv.stdout.split('\n');
     const cols = (head ?? '').split(',');
     expect(cols.slice(0, 4)).toEqual(['target_player_id', 'target_first_season', 'target_season', 'target_level']);
     const cells = (first ?? '').split(',');
     expect(Number(cells[cols.indexOf('first_season')])).toBeLessThanOrEqual(Number(cells[cols.indexOf('season')]));
-    expect(Number(cells[1])).toBe(hitter.season - 2);
+    expect(Number(cells[1])).toBe(hitter.first);
   });
 
   it('refuses a window the store was not built with, naming the windows it has (kindred.query.noWindow)', async () => {
     const out = await runCli('comps', hitter.id, '--store', windowed, '--window', '2', '--format', 'json');
     expect(out.code).toBe(1);
-    expect(out.stderr).toMatch(/no profiles over 2 seasons \(it has windows of 1, 3\)/);
+    expect(out.stderr).toMatch(/no profiles over 2 seasons \(it has windows of 1, 5\)/);
     // the rebuild it suggests is one shell word, sizes in order, as kindred build --windows parses it
-    expect(out.stderr).toMatch(/rebuild it with kindred build --windows 1,2,3(\s|$)/);
+    expect(out.stderr).toMatch(/rebuild it with kindred build --windows 1,2,5(\s|$)/);
     const suggested = /--windows (\S+)/.exec(out.stderr)?.[1] ?? '';
     const rebuilt = await runCli('build', join(windowed, '..', 'roster'), '--store', join(windowed, '..', 'suggested'), '--no-backtest', '--windows', suggested);
     expect(rebuilt.code).toBe(0);
@@ -104,8 +106,8 @@ describe('kindred comps --window', () => {
   });
 
   it('serves the other jobs over windows too: match and cheaper name the window', async () => {
-    const cheaper = await runCli('cheaper', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '3', '--format', 'json', '--max-share', '1');
+    const cheaper = await runCli('cheaper', hitter.id, '--store', windowed, '--season', String(hitter.season), '--level', top, '--window', '5', '--format', 'json', '--max-share', '1');
     expect(cheaper.code).toBe(0);
-    expect(cheaper.stdout).toMatch(/"window": 3/);
+    expect(cheaper.stdout).toMatch(/"window": 5/);
   });
 });

@@ -193,11 +193,11 @@ export async function runFuzz(plan: FuzzPlan, log: (line: string) => void = () =
         const { copy, mutator } = kinds[i % kinds.length] ?? (kinds[0] as (typeof kinds)[number]);
         const mutant = mutator.mutate(rng);
         const formats = ['json', 'table', 'csv'];
-        // each group's comps over single seasons and over windows of 3 (the build's default windows; the
+        // each group's comps over single seasons and over windows of 5 (the build's default windows; the
         // default comps of an input-space store): every group file is read by one of them
         const commands: string[][] = targets.comps.flatMap((t, j) => [
           ['comps', ...t.args, '--store', copy, '--format', formats[(i + j) % 3] ?? 'json', '--window', '1'],
-          ['comps', ...t.args, '--store', copy, '--format', formats[(i + j + 1) % 3] ?? 'json', '--window', '3'],
+          ['comps', ...t.args, '--store', copy, '--format', formats[(i + j + 1) % 3] ?? 'json', '--window', '5'],
         ]);
         if (targets.prospect) commands.push(['prospect', ...targets.prospect.args, '--store', copy]);
         if (i % 8 === 0) commands.push(['dims', '--store', copy]);

@@ -55,7 +55,7 @@ describe.each(['C', 'IF', 'OF', 'SP', 'RP'] as const)('comps table for a %s targ
       const cell = (k: number): string => row.slice(end(k - 1), end(k)).trim();
       expect(row.slice(0, at[1]).trim()).toBe(String(c.rank));
       expect(row.slice(at[1], at[2]).trim()).toBe(c.name);
-      // the default profiles are windows of 3 seasons: a window that spans seasons reads 2019-21 (README "Profiles over several seasons")
+      // the default profiles are windows of 5 seasons: a window that spans seasons reads 2019-21 (README "Profiles over several seasons")
       const span = c.seasons && c.seasons[0] !== c.seasons[1] ? `${c.seasons[0]}-${String(c.seasons[1]).slice(2)}` : String(c.season);
       expect(row.slice(at[2], at[3]).trim()).toBe(span);
       expect(row.slice(at[3], at[4]).trim()).toBe(c.level);

@@ -74,13 +74,13 @@ describe('openProfileStore (lazy by default)', () => {
     const g = store.groups.get('IF');
     if (!g) throw new Error('no IF group');
     // the group is read whole when first asked for (so any damaged file of it is refused then)
-    // (its windows, group-IF.w3.*, are another group to the store: read when a query over windows asks for them)
+    // (its windows, group-IF.w5.*, are another group to the store: read when a query over windows asks for them)
     const single = files.filter((x) => x.startsWith('group-IF.') && !/^group-IF\.w\d+\./.test(x));
     for (const f of single) expect([f, store.opened.reads(f)]).toEqual([f, 1]);
     for (const f of files.filter((x) => x.startsWith('group-IF.w'))) expect([f, store.opened.reads(f)]).toEqual([f, 0]);
-    const windows = store.windows.get(3)?.get('IF');
-    expect(windows?.window?.size).toBe(3);
-    for (const f of files.filter((x) => x.startsWith('group-IF.w3.'))) expect([f, store.opened.reads(f)]).toEqual([f, 1]);
+    const windows = store.windows.get(5)?.get('IF');
+    expect(windows?.window?.size).toBe(5);
+    for (const f of files.filter((x) => x.startsWith('group-IF.w5.'))) expect([f, store.opened.reads(f)]).toEqual([f, 1]);
     for (const row of [1, 2, 3]) findComps(store, playerTarget(store, { group: 'IF', row }), DEFAULT_COMPS_OPTIONS);
     expect(store.opened.reads('group-IF.z.f32')).toBe(1);
     expect(store.opened.reads('group-OF.json')).toBe(0);

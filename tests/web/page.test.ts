@@ -192,7 +192,7 @@ describe('the comps view', () => {
     const csv = await readFile(await csvDownload.path(), 'utf8');
     const lines = csv.trimEnd().split('\n');
     // the CLI's CSV convention, values included: each dimension's value, grade and share after alike and apart
-    // comps default to windows of 3 seasons: each window's first season beside its last
+    // comps default to windows of 5 seasons: each window's first season beside its last
     expect(lines[0]?.startsWith('target_player_id,target_first_season,target_season,target_level,rank,player_id,name,first_season,season,level,position,age,sample,sample_unit,ip,likeness,distance,coverage,alike,apart,')).toBe(true);
     expect(lines[0]).toContain(',obp,obp_grade,obp_share,');
     expect(lines.length).toBe(6);
@@ -204,7 +204,7 @@ describe('the comps view', () => {
     expect(exported.pool.filters).toMatchObject({ levels: ['Elite', 'Top'], age_min: 22, age_max: 30, positions: [exported.query.position] });
     expect(exported.pool.filters.min_sample).toBe(exported.pool.sample_floor?.min);
     expect(await page.textContent('#pool-rules')).toBe(`Pool: ${exported.pool.summary}`);
-    expect(exported.query.window).toBe(3);
+    expect(exported.query.window).toBe(5);
     expect(lines.slice(1).map((l) => l.split(',')[5])).toEqual(exported.comps.map((c) => c.player_id));
   });
 
