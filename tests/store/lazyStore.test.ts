@@ -15,6 +15,7 @@ import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { StoreHolder } from '../../src/server/StoreHolder.ts';
 import { simStore, type SimStore } from '../helpers/simStore.ts';
+import { DEFAULT_WINDOW } from '../../src/query/defaultWindow.ts';
 
 let sim: SimStore;
 let other: SimStore;
@@ -95,8 +96,8 @@ describe('openProfileStore (lazy by default)', () => {
   it("finds a player's seasons and windows from the players file: a windowed target reads only its own window group", async () => {
     const store = await openProfileStore(sim.storeDir);
     const eager = await openProfileStore(sim.storeDir, { load: 'eager' });
-    const view = windowView(store, 3);
-    const eagerView = windowView(eager, 3);
+    const view = windowView(store, DEFAULT_WINDOW);
+    const eagerView = windowView(eager, DEFAULT_WINDOW);
     const player = eagerView.groups.get('OF')?.player[5];
     if (player === undefined) throw new Error('no OF windows');
     // the scan over every window group that the players file replaces
@@ -109,7 +110,7 @@ describe('openProfileStore (lazy by default)', () => {
     expect(JSON.stringify(findComps(view, target, DEFAULT_COMPS_OPTIONS))).toEqual(JSON.stringify(findComps(eagerView, playerTarget(eagerView, { group: 'OF', row: 5 }), DEFAULT_COMPS_OPTIONS)));
     const read = files.filter((f) => store.opened.reads(f) > 0 && f.startsWith('group-'));
     expect(read.length).toBeGreaterThan(0);
-    expect(read.every((f) => f.startsWith('group-OF.w3.'))).toBe(true);
+    expect(read.every((f) => f.startsWith(`group-OF.w${DEFAULT_WINDOW}.`))).toBe(true);
   });
 
   it('refuses a file damaged after the open when it is first read, with the code an open gives', async () => {
