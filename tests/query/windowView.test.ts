@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEFAULT_WINDOW } from '../../src/query/defaultWindow.ts';
 import { join } from 'node:path';
 import { buildDemoStore, tempDir } from '../server/serverFixture.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
@@ -27,16 +28,16 @@ describe('windowView', () => {
   });
 
   it('gives one view per store and window, so a server does not gather rows per answer', async () => {
-    const view = windowView(store, 3);
-    expect(windowView(store, 3)).toBe(view);
+    const view = windowView(store, DEFAULT_WINDOW);
+    expect(windowView(store, DEFAULT_WINDOW)).toBe(view);
     const other = await openProfileStore(storeDir);
-    expect(windowView(other, 3)).not.toBe(view);
+    expect(windowView(other, DEFAULT_WINDOW)).not.toBe(view);
   });
 
   it("finds every window row of a player, in the view's groups", () => {
-    const view = windowView(store, 3);
+    const view = windowView(store, DEFAULT_WINDOW);
     const [group, g] = [...view.groups][0] ?? [];
-    if (!group || !g) throw new Error('the demo store has no 3-season window groups');
+    if (!group || !g) throw new Error('the demo store has no 5-season window groups');
     const player = g.player[0] ?? -1;
     let expected = 0;
     for (const vg of view.groups.values()) for (let r = 0; r < vg.n; r++) if (vg.player[r] === player) expected++;
@@ -46,6 +47,6 @@ describe('windowView', () => {
   });
 
   it('refuses a window the store was not built with, naming the ones it has', () => {
-    expect(() => windowView(store, 7)).toThrow(/windows of 1, 3/);
+    expect(() => windowView(store, 7)).toThrow(/windows of 1, 5/);
   });
 });
