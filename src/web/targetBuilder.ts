@@ -28,9 +28,17 @@ export function targetBuilder(): TargetBuilder {
     rows,
   );
   let dims: readonly DimensionInfo[] = [];
+  // Each change of position starts a load; only the latest one may draw its rows, so a slow answer for
+  // the position shown before cannot replace (and wipe) the rows of the one chosen since.
+  let latest = 0;
 
   async function load(): Promise<void> {
-    dims = await fetchDims(position.value);
+    const mine = ++latest;
+    const wanted = position.value;
+    const loaded = await fetchDims(wanted);
+    if (mine !== latest) return;
+    dims = loaded;
+    rows.dataset['position'] = wanted;
     rows.replaceChildren(
       ...dims.map((d) => {
         const use = h('input', { type: 'checkbox', id: `want-use-${d.name}`, 'data-dim': d.name, class: 'want-use' });

@@ -277,7 +277,8 @@ describe('the build-a-target view', () => {
   it('finds comps for a profile set in grades and natural units', async () => {
     await openView('target');
     await page.selectOption('#want-position', 'SS');
-    await page.waitForSelector('#want-grade-obp');
+    // the rows are the chosen position's once the builder marks them so (the first position's may come first)
+    await page.waitForSelector('#want-rows[data-position="SS"] #want-grade-obp');
     await page.locator('#want-grade-obp').fill('65');
     await page.fill('#want-value-iso', '.180');
     await page.locator('#want-grade-k_pct').fill('40');
