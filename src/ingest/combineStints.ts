@@ -15,7 +15,7 @@ import { WeightedMean, addCount } from './WeightedMean.ts';
  * // => PA 180, bbe 120, evAvgMph (88.5*80 + 85.5*40) / 120 = 87.5
  */
 export function combineStints<T extends ColumnTable>(table: T, stints: readonly RecordOf<T>[]): RecordOf<T> {
-  const rows: readonly RowFields[] = stints.map((s) => ({ ...s }));
+  const rows: readonly RowFields[] = stints;
   const first = rows[0];
   if (first === undefined) throw new RangeError('combineStints needs at least one stint');
   const out: RowFields = {};
@@ -45,8 +45,18 @@ export function combineStints<T extends ColumnTable>(table: T, stints: readonly 
       if (value !== undefined) out[field] = value;
     }
   }
-  if (!isRecordOf(table, out)) throw new TypeError('combined stints do not fit the column table');
+  const shape = shapeOf(table);
+  if (!isRecordOf(table, out, shape.names, shape.present)) throw new TypeError('combined stints do not fit the column table');
   return out;
+}
+
+/** Each table's field names and which fields a record must have (isRecordOf's arguments), made once per table. */
+const shapes = new WeakMap<ColumnTable, { readonly names: readonly string[]; readonly present: readonly boolean[] }>();
+
+function shapeOf(table: ColumnTable): { readonly names: readonly string[]; readonly present: readonly boolean[] } {
+  let shape = shapes.get(table);
+  if (!shape) shapes.set(table, (shape = { names: table.map((s) => s.field), present: table.map((s) => s.required || s.kind === 'team') }));
+  return shape;
 }
 
 function numberAt(s: RowFields, field: string): number | undefined {

@@ -2,8 +2,10 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { readRoster, type ColumnMap } from '../ingest/readRoster.ts';
+import type { Roster } from '../ingest/Roster.ts';
+import { windowRoster } from '../profiles/windowRoster.ts';
 import { writeRejects } from '../ingest/writeRejects.ts';
-import { buildProfiles, buildWindowProfiles, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
+import { buildProfiles, profileWindowRoster, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
 import type { GroupFile } from '../store/groupFile.ts';
 import { encodeGroupFiles, type GroupIndexes } from '../store/encodeGroupFiles.ts';
 import { encodePlayersFile, playerIndexOf } from '../store/playersFile.ts';
@@ -112,13 +114,13 @@ type WriteGroups = (groups: Map<PositionGroup, GroupProfiles>, size: number, pla
 
 /**
  * Reads the roster, writes its rejects, builds the single-season profiles and hands them to
- * `writeGroups` (which starts their index builds in the worker threads), then builds the profiles over
- * each window while those indexes build, and hands them over too; last the players and outcomes
- * files. Only the summary leaves the function, so the parsed roster (the build's largest object)
- * can be collected before the build waits for its indexes.
+ * `writeGroups` (which starts their index builds in the worker threads), writes the outcomes file,
+ * then builds the profiles over each window while those indexes build, and hands them over too; last
+ * the players file. The roster's season lines (the build's largest object) are let go once the last
+ * window's lines are combined, and only the summary leaves the function.
  */
 async function readAndProfile(rosterDir: string, storeDir: string, options: BuildOptions, progress: ProgressFn, writer: StoreWriter, writeGroups: WriteGroups): Promise<ReadRoster> {
-  const roster = await readRoster(rosterDir, {
+  let roster: Roster | null = await readRoster(rosterDir, {
     lenient: options.lenient,
     ...(options.columnMap ? { columnMap: options.columnMap } : {}),
     onProgress: (file, rows) => progress(`reading ${file}`, rows, 0),
@@ -128,6 +130,7 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
     rejectsPath = options.rejectsPath ?? `${storeDir.replace(/\/+$/, '')}.rejects.csv`;
     await writeRejects(rejectsPath, roster.rejected);
   }
+  const summary: Omit<ReadRoster, 'skipped' | 'windows'> = { rowsRead: roster.rowsRead, rejected: roster.rejected.length, rejectsPath, notices: roster.notices };
   const playerIndex = playerIndexOf(roster);
   const levels = [...roster.levels];
   progress('profiles', 0, 1);
@@ -136,24 +139,24 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
   // the windows take the single seasons' default weights: only those are kept of the single profiles
   const weights = { groups: new Map([...single.groups].map(([group, g]) => [group, { reliability: g.reliability, redundancy: g.redundancy }])) };
   await writeGroups(single.groups, 1, playerIndex, levels);
+  // The outcomes are the last use of the roster's season lines, and the players file needs none of them
+  // (players, contracts and levels only): both are taken now, so that the lines can go before the last window's profiles.
+  await writer.add(OUTCOMES_FILE, encodeOutcomesFile(computeOutcomes(roster)));
+  const people: Roster = { ...roster, batting: [], fielding: [], pitching: [] };
   const windowSizes = [...new Set(options.windows ?? DEFAULT_BUILD_WINDOWS)].filter((n) => n !== 1).sort((a, b) => a - b);
   const windowRows = new Map<number, ReadonlyMap<PositionGroup, Int32Array>>();
   for (const size of windowSizes) {
     progress(`profiles over ${size} seasons`, 0, 1);
-    const set = profileSet(buildWindowProfiles(roster, profileOptions, size, weights), playerIndex);
+    if (!roster) throw new Error('internal: the roster was let go before its last window');
+    const combined = windowRoster(roster, size);
+    // after the last window's lines are combined, nothing needs the single seasons' lines: let them go
+    if (size === windowSizes[windowSizes.length - 1]) roster = null;
+    const set = profileSet(profileWindowRoster(combined, profileOptions, weights), playerIndex);
     windowRows.set(size, set.rows);
     await writeGroups(set.groups, size, playerIndex, levels);
   }
-  await writer.add(PLAYERS_FILE, encodePlayersFile(roster, single.rows, windowRows));
-  await writer.add(OUTCOMES_FILE, encodeOutcomesFile(computeOutcomes(roster)));
-  return {
-    skipped: single.skipped,
-    windows: windowSizes.length,
-    rowsRead: roster.rowsRead,
-    rejected: roster.rejected.length,
-    rejectsPath,
-    notices: roster.notices,
-  };
+  await writer.add(PLAYERS_FILE, encodePlayersFile(people, single.rows, windowRows));
+  return { ...summary, skipped: single.skipped, windows: windowSizes.length };
 }
 
 /**

@@ -33,7 +33,7 @@ export type Measure<L> =
       readonly kind: 'derived';
       /** Raw (observed) value from the line alone. */
       readonly raw: (line: L, league: LeagueContext) => number | undefined;
-      /** Regressed value from the line's regressed inputs. */
+      /** Regressed value from the line's regressed inputs (the map is only valid during the call: it is refilled for the next line). */
       readonly regressed: (line: L, regressed: ReadonlyMap<string, number>, league: LeagueContext) => number | undefined;
     };
 

@@ -11,7 +11,7 @@ import { HITTER_DIMENSIONS } from './hitterDimensions.ts';
 import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
 import { leagueFip } from '../stats/leagueFip.ts';
 import type { PitchingSeason } from '../ingest/Roster.ts';
-import { windowKey, windowRoster } from './windowRoster.ts';
+import { windowKey, windowRoster, type WindowRoster } from './windowRoster.ts';
 
 /** The profiles of one position group, row-major n x d. */
 export interface GroupProfiles {
@@ -132,7 +132,20 @@ export function buildWindowProfiles(
   single: { readonly groups: ReadonlyMap<PositionGroup, Pick<GroupProfiles, 'reliability' | 'redundancy'>> },
 ): ProfileSet {
   if (window === 1) return buildProfiles(roster, options);
-  const wr = windowRoster(roster, window);
+  return profileWindowRoster(windowRoster(roster, window), options, single);
+}
+
+/**
+ * buildWindowProfiles on a roster already combined into windows (windowRoster), so that a caller can let
+ * the roster of single seasons go before the window profiles are built (the build does, for its last window).
+ */
+export function profileWindowRoster(
+  wr: WindowRoster,
+  options: ProfileOptions,
+  single: { readonly groups: ReadonlyMap<PositionGroup, Pick<GroupProfiles, 'reliability' | 'redundancy'>> },
+): ProfileSet {
+  const window = wr.window;
+  if (window === 1) return buildProfiles(wr.roster, options);
   const built = buildProfiles(wr.roster, options);
   const groups = new Map<PositionGroup, GroupProfiles>();
   for (const [group, g] of built.groups) {
@@ -175,6 +188,13 @@ function assembleGroup(
   const shrinkage = new Map<string, ReadonlyMap<string, ShrinkageUsed>>();
   const seen = new Set<string>();
   for (const m of meta) seen.add(`${m.season}|${m.level}`).add(`${m.season}|${m.level}|${m.position}`);
+  // each row's standardisation base per scope (level and group, or level and position), made once
+  const basesByScope = new Map<Dimension<never>['scope'], readonly string[]>();
+  const basesOf = (scope: Dimension<never>['scope']): readonly string[] => {
+    let bases = basesByScope.get(scope);
+    if (!bases) basesByScope.set(scope, (bases = meta.map((m) => (scope === 'group' ? `${m.level}|${group}` : `${m.level}|${m.position}`))));
+    return bases;
+  };
   dims.forEach((dim, j) => {
     const col = cols.get(dim.name);
     if (!col) throw new Error(`internal: dimension ${dim.name} was not measured`);
@@ -185,11 +205,8 @@ function assembleGroup(
       values[r] = col.regressed[src] as number;
       raw[r * d + j] = col.raw[src] as number;
     }
-    const scoped = (r: number): string => {
-      const m = meta[r] as SeasonMeta;
-      return dim.scope === 'group' ? `${m.level}|${group}` : `${m.level}|${m.position}`;
-    };
-    const st = standardiseByStratum(values, (r) => (meta[r] as SeasonMeta).season, scoped, standardise);
+    const bases = basesOf(dim.scope);
+    const st = standardiseByStratum(values, (r) => (meta[r] as SeasonMeta).season, (r) => bases[r] as string, standardise);
     for (let r = 0; r < n; r++) {
       const v = st.z[r] as number;
       z[r * d + j] = v;

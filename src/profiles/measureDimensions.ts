@@ -43,11 +43,19 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
   const n = input.lines.length;
   const options = input.shrinkage ?? DEFAULT_SHRINKAGE;
   const out = new Map<string, MeasuredColumn>();
+  // each line's league stratum key per scope, made once (not once per dimension and pass)
+  const keysByScope = new Map<'group' | 'position', readonly string[]>();
+  const keysOf = (scope: 'group' | 'position'): readonly string[] => {
+    let keys = keysByScope.get(scope);
+    if (!keys) keysByScope.set(scope, (keys = Array.from({ length: n }, (_, i) => input.leagueKey(i, scope))));
+    return keys;
+  };
   for (const dim of dims) {
     const raw = new Float64Array(n).fill(NaN);
     const regressed = new Float64Array(n).fill(NaN);
     const m = dim.measure;
     const shrinkage = new Map<string, ShrinkageUsed>();
+    const keys = m.kind === 'derived' ? [] : keysOf(dim.scope);
     if (m.kind === 'rate') {
       const num = new Float64Array(n).fill(NaN);
       const den = new Float64Array(n).fill(NaN);
@@ -60,7 +68,7 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
         if (!usable(a) || !usable(b) || b <= 0) continue;
         num[i] = a;
         den[i] = b;
-        const key = input.leagueKey(i, dim.scope);
+        const key = keys[i] as string;
         const t = totals.get(key);
         if (t) {
           t[0] += a;
@@ -72,7 +80,13 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
         }
       }
       if (m.stabilisation > 0) {
-        const sample = (rows: readonly number[]): RateSample => ({ successes: rows.map((i) => num[i] as number), trials: rows.map((i) => den[i] as number) });
+        // each stratum's sample, made once (a stratum is in the era of each of its neighbours)
+        const samples = new Map<readonly number[], RateSample>();
+        const sample = (rows: readonly number[]): RateSample => {
+          let s = samples.get(rows);
+          if (!s) samples.set(rows, (s = { successes: rows.map((i) => num[i] as number), trials: rows.map((i) => den[i] as number) }));
+          return s;
+        };
         const eras = new Map<string, { season: number; rows: readonly number[] }[]>();
         const eraOfKey = new Map<string, { key: string; season: number }>();
         for (const [key, rows] of members) {
@@ -93,7 +107,7 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
         const a = num[i] as number;
         const b = den[i] as number;
         if (Number.isNaN(a)) continue;
-        const key = input.leagueKey(i, dim.scope);
+        const key = keys[i] as string;
         const t = totals.get(key) as [number, number];
         raw[i] = a / b;
         const used = shrinkage.get(key);
@@ -111,7 +125,7 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
         const e = m.events(line);
         if (!usable(e) || e <= 0) continue;
         evs[i] = e;
-        const key = input.leagueKey(i, dim.scope);
+        const key = keys[i] as string;
         const t = totals.get(key);
         if (t) {
           t[0] += v * e;
@@ -123,7 +137,7 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
         if (Number.isNaN(v)) continue;
         raw[i] = v;
         const e = evs[i] as number;
-        const key = input.leagueKey(i, dim.scope);
+        const key = keys[i] as string;
         const t = totals.get(key);
         const k = m.stabilisation * options.tableScale;
         if (m.stabilisation > 0 && t && !shrinkage.has(key)) shrinkage.set(key, { k, table: k, source: 'table', players: 0 });
@@ -138,12 +152,14 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
     const raw = new Float64Array(n).fill(NaN);
     const regressed = new Float64Array(n).fill(NaN);
     const others = [...out.entries()];
+    // one map refilled for each line (a derived measure reads it during its call only)
+    const values = new Map<string, number>();
     for (let i = 0; i < n; i++) {
       const line = input.lines[i] as L;
       const league = input.league(i);
       const r = m.raw(line, league);
       if (usable(r)) raw[i] = r;
-      const values = new Map<string, number>();
+      values.clear();
       for (const [name, col] of others) {
         const v = col.regressed[i] as number;
         if (!Number.isNaN(v)) values.set(name, v);

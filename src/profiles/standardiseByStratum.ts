@@ -46,13 +46,18 @@ export function standardiseByStratum(
   const n = values.length;
   // base (level|scope) -> season -> [count, sum, sum of squares]
   const acc = new Map<string, Map<number, [number, number, number]>>();
+  // each value's base and season, taken once
+  const bases: string[] = new Array<string>(n);
+  const seasons = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const x = values[i] as number;
     if (Number.isNaN(x)) continue;
     const b = base(i);
+    bases[i] = b;
+    seasons[i] = season(i);
     let bySeason = acc.get(b);
     if (!bySeason) acc.set(b, (bySeason = new Map()));
-    const s = season(i);
+    const s = seasons[i] as number;
     const t = bySeason.get(s);
     if (t) {
       t[0]++;
@@ -61,7 +66,11 @@ export function standardiseByStratum(
     } else bySeason.set(s, [1, x, x * x]);
   }
   const strata = new Map<string, StratumStats>();
+  /** The same stats by base, then season (looked up without making each value's key). */
+  const byBase = new Map<string, Map<number, StratumStats>>();
   for (const [b, bySeason] of acc) {
+    const statsBySeason = new Map<number, StratumStats>();
+    byBase.set(b, statsBySeason);
     for (const s of bySeason.keys()) {
       let count = 0;
       let sum = 0;
@@ -84,19 +93,16 @@ export function standardiseByStratum(
       const mean = sum / count;
       const variance = count > 1 ? Math.max(0, (sumSq - count * mean * mean) / (count - 1)) : NaN;
       const [level, ...scope] = b.split('|');
-      strata.set(stratumKey(s, level ?? '', scope.join('|')), {
-        mean,
-        sd: Math.sqrt(variance),
-        n: count,
-        seasons: [s - width, s + width],
-      });
+      const stats: StratumStats = { mean, sd: Math.sqrt(variance), n: count, seasons: [s - width, s + width] };
+      strata.set(stratumKey(s, level ?? '', scope.join('|')), stats);
+      statsBySeason.set(s, stats);
     }
   }
   const z = new Float64Array(n).fill(NaN);
   for (let i = 0; i < n; i++) {
     const x = values[i] as number;
     if (Number.isNaN(x)) continue;
-    const st = strata.get(`${season(i)}|${base(i)}`);
+    const st = byBase.get(bases[i] as string)?.get(seasons[i] as number);
     if (!st || Number.isNaN(st.sd)) continue;
     z[i] = st.sd === 0 ? 0 : zScore(x, st.mean, st.sd);
   }

@@ -71,16 +71,24 @@ function combineWindows<T extends ColumnTable>(
 ): RecordOf<T>[] {
   const typed = lines.filter(isSeasonLine);
   const series = new Map<string, (RecordOf<T> & SeasonLine)[]>();
-  for (const l of typed) {
+  /** Each line's series (its index in `typed`), so that its key is made once. */
+  const seriesAt = new Array<(RecordOf<T> & SeasonLine)[]>(typed.length);
+  typed.forEach((l, i) => {
     const key = seriesOf(l);
-    const list = series.get(key);
-    if (list) list.push(l);
-    else series.set(key, [l]);
-  }
+    let list = series.get(key);
+    if (!list) series.set(key, (list = []));
+    list.push(l);
+    seriesAt[i] = list;
+  });
   for (const list of series.values()) list.sort((a, b) => b.season - a.season);
-  return typed.map((l) => {
-    const held = (series.get(seriesOf(l)) ?? [l]).filter((o) => o.season <= l.season && o.season > l.season - window);
-    const first = held.reduce((m, o) => Math.min(m, o.season), l.season);
+  return typed.map((l, i) => {
+    const held: (RecordOf<T> & SeasonLine)[] = [];
+    let first = l.season;
+    for (const o of seriesAt[i] ?? [l]) {
+      if (o.season > l.season || o.season <= l.season - window) continue;
+      held.push(o);
+      if (o.season < first) first = o.season;
+    }
     note(l.playerId, l.season, l.level, first);
     return held.length === 1 ? l : combineStints(table, held);
   });
