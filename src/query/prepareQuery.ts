@@ -18,7 +18,7 @@ export interface QuerySettings {
   readonly weighting: 'redundancy' | 'plain';
   /** How the filter's playing-time floor was scaled (poolRules), for the echo; absent without a floor from the rules. */
   readonly sampleFloor?: SampleFloor;
-  /** A dimension the target has and a pool row lacks: left out and the rest rescaled (`rescale`) or counted at its expected gap (`expected`; missingAwareDistance); default missingRuleOf(group). */
+  /** A dimension the target has and a pool row lacks: left out and the rest rescaled (`rescale`), counted at its expected gap (`expected`) or at its expected gap given the row's core dimensions (`{ impute }`; MissingRule); default missingRuleOf(group). */
   readonly missing?: MissingRule;
 }
 
@@ -72,6 +72,6 @@ export function prepareQuery(store: ProfileStore, target: Target, settings: Quer
   return {
     store, group, target, filter: settings.filter, weights, preset: settings.preset, targetWeight: wT, mask, eligible: count, defaultMetric,
     sampleFloor: settings.sampleFloor ?? null,
-    missing: settings.missing ?? missingRuleOf(target.group),
+    missing: settings.missing ?? missingRuleOf(group),
   };
 }

@@ -6,10 +6,14 @@ import { missingAwareDistance } from '../../src/query/missingAwareDistance.ts';
 // weights [1, 1]. Rescaled: only the first is shared, d^2 = 0 * W_T / W_S = 0. At its expected gap:
 // an unknown standardised value has mean 0 and variance 1, so E(t - c)^2 = t^2 + 1 = 5, d^2 = 0 + 5.
 describe('missingRuleOf (the default rule for a dimension the comp lacks)', () => {
-  it('counts it at its expected gap for pitchers and rescales for hitters', () => {
-    expect(missingRuleOf('SP')).toBe('expected');
-    expect(missingRuleOf('RP')).toBe('expected');
-    for (const g of ['C', 'IF', 'OF', 'DH'] as const) expect(missingRuleOf(g)).toBe('rescale');
+  it('counts it at its expected gap for pitchers and at its imputed gap for hitters', () => {
+    const z = new Float32Array([0, 1, 1, NaN]);
+    expect(missingRuleOf({ group: 'SP', z, n: 2, d: 2 })).toBe('expected');
+    expect(missingRuleOf({ group: 'RP', z, n: 2, d: 2 })).toBe('expected');
+    for (const group of ['C', 'IF', 'OF', 'DH'] as const) {
+      const rule = missingRuleOf({ group, z, n: 2, d: 2 });
+      expect(typeof rule === 'object' && Array.from(rule.impute.core)).toEqual([0]);
+    }
   });
 
   it('so an untracked comp no longer looks as close as a tracked one (worked example)', () => {
