@@ -8,6 +8,7 @@ import { DEFAULT_COMPS_OPTIONS, type CompsOptions } from '../query/findComps.ts'
 import { likeness, UNRELATED_LIKENESS } from '../query/likeness.ts';
 import type { PoolFilter } from '../query/PoolFilter.ts';
 import { prepareQuery, type PreparedQuery } from '../query/prepareQuery.ts';
+import { prospectMissingRuleOf } from '../query/missingRuleOf.ts';
 import type { ProfileStore, StoredGroup } from '../store/ProfileStore.ts';
 import { closerFirst, rankScored } from '../query/rankScored.ts';
 import { scoreRow, type ScoredRow } from '../query/scoreRow.ts';
@@ -266,7 +267,7 @@ export function findProspectComps(store: ProfileStore, outcomes: Outcomes, targe
   const kind: OutcomeKind = isPitcherGroup(target.group) ? 'pitcher' : 'hitter';
   const steps = targetSteps(store, g, target, season, options.path);
   const pool = prospectPool(g, steps, season, age, options.comps.filter, options);
-  const q = prepareQuery(store, target, { ...options.comps, filter: pool.filter });
+  const q = prepareQuery(store, target, { ...options.comps, filter: pool.filter, missing: options.comps.missing ?? prospectMissingRuleOf(target.group) });
   const all = scoreProspects(q, pool, steps, horizon, asOf);
   const { censoredRows } = all;
   // a comp no more alike than two unrelated players tells nothing about the target: left out (counted)

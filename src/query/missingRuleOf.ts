@@ -1,4 +1,4 @@
-import { isPitcherGroup } from '../profiles/positionGroup.ts';
+import { isPitcherGroup, type PositionGroup } from '../profiles/positionGroup.ts';
 import type { StoredGroup } from '../store/ProfileStore.ts';
 import { coreImputerOf } from './coreImputerOf.ts';
 import type { MissingRule } from './missingAwareDistance.ts';
@@ -21,4 +21,16 @@ import type { MissingRule } from './missingAwareDistance.ts';
  */
 export function missingRuleOf(g: Pick<StoredGroup, 'group' | 'z' | 'n' | 'd'>): MissingRule {
   return isPitcherGroup(g.group) ? 'expected' : { impute: coreImputerOf(g) };
+}
+
+/**
+ * The prospect job's rule: the one its outlook was backtested and calibrated with
+ * (bench/outlook.bench.ts): pitchers at the expected gap, hitters rescaled. The imputed gap of
+ * missingRuleOf is not yet measured on the outlook, so prospect comps keep this one.
+ *
+ * @example
+ * prospectMissingRuleOf('IF'); // => 'rescale'
+ */
+export function prospectMissingRuleOf(group: PositionGroup): MissingRule {
+  return isPitcherGroup(group) ? 'expected' : 'rescale';
 }

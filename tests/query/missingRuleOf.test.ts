@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { missingRuleOf } from '../../src/query/missingRuleOf.ts';
+import { missingRuleOf, prospectMissingRuleOf } from '../../src/query/missingRuleOf.ts';
 import { missingAwareDistance } from '../../src/query/missingAwareDistance.ts';
 
 // A dimension the target has and the comp lacks (hand-worked): target z [1, 2], comp [1, missing],
@@ -14,6 +14,11 @@ describe('missingRuleOf (the default rule for a dimension the comp lacks)', () =
       const rule = missingRuleOf({ group, z, n: 2, d: 2 });
       expect(typeof rule === 'object' && Array.from(rule.impute.core)).toEqual([0]);
     }
+  });
+
+  it('keeps the rule the outlook was backtested with for prospect comps: expected for pitchers, rescaled for hitters', () => {
+    expect(prospectMissingRuleOf('SP')).toBe('expected');
+    for (const g of ['C', 'IF', 'OF', 'DH'] as const) expect(prospectMissingRuleOf(g)).toBe('rescale');
   });
 
   it('so an untracked comp no longer looks as close as a tracked one (worked example)', () => {
