@@ -19,6 +19,7 @@ import { babip } from '../stats/babip.ts';
 import { stolenBaseAttemptRate } from '../stats/stolenBaseAttemptRate.ts';
 import { stolenBaseSuccess } from '../stats/stolenBaseSuccess.ts';
 import { rangeFactor } from '../stats/rangeFactor.ts';
+import { assistRate } from '../stats/assistRate.ts';
 import { fieldingPercentage } from '../stats/fieldingPercentage.ts';
 import { caughtStealingRate } from '../stats/caughtStealingRate.ts';
 
@@ -26,10 +27,17 @@ type D = Dimension<HitterLine>;
 
 /** Range factor is regressed by adding 300 league-average innings (900 outs): a project choice. */
 const RANGE_STABILISATION_OUTS = 900;
+/**
+ * Outfield assists per nine innings are regressed by adding 900 league-average innings (2,700 outs): a
+ * project choice (an outfielder makes a handful of assists a season); on the four bench leagues 2,700
+ * beat 900 and 0 (docs/jobs.md, "Why hitters' comps miss arm, speed and glove").
+ */
+const ASSIST_STABILISATION_OUTS = 2700;
 
 const HITTERS = ['C', 'IF', 'OF', 'DH'] as const;
 const FIELDERS = ['IF', 'OF'] as const;
 const CATCHERS = ['C'] as const;
+const OUTFIELDERS = ['OF'] as const;
 
 const k = (rate: keyof typeof STABILISATION): number => STABILISATION[rate].sample;
 const batting = (l: HitterLine): BattingSeason => l.batting;
@@ -166,6 +174,13 @@ export const HITTER_DIMENSIONS: readonly D[] = [
     meaning: 'Average velocity of his competitive throws (a measurement, not regressed).', source: 'fielding.csv arm_mph, weighted by innings',
     groups: [...FIELDERS, ...CATCHERS], scope: 'position', digits: 1,
     measure: { kind: 'mean', value: (l) => l.fielding?.armMph, events: (l) => l.fielding?.outs, stabilisation: 0 },
+  },
+  {
+    name: 'of_assist_rate', label: 'OF assists/9', unit: 'assists per 9 innings', direction: 'higher', skill: 'arm', family: 'throwing',
+    meaning: 'Outfield assists per nine innings at his primary position: runners his throws retired, compared with the same position only.',
+    source: rateSource(assistRate),
+    groups: OUTFIELDERS, scope: 'position', digits: 3,
+    measure: rateMeasure(assistRate, fielding, ASSIST_STABILISATION_OUTS, false),
   },
   {
     name: 'pop_2b_s', label: 'Pop time', unit: 's', direction: 'lower', skill: 'catcher throwing', family: 'throwing',

@@ -22,7 +22,7 @@ export const FAMILY_MEANING: Readonly<Record<SkillFamily, string>> = {
   power: 'power and batted ball: slugging, home runs, how hard and at what angle he hits',
   running: 'running: speed, steal attempts and success',
   fielding: 'fielding: range and sure hands at his position',
-  throwing: 'throwing: arm strength; for catchers pop time, exchange, runners caught',
+  throwing: 'throwing: arm strength, outfield assists; for catchers pop time, exchange, runners caught',
   'missing bats': 'missing bats: strikeouts, swings and misses',
   command: 'command: walks',
   'contact allowed': 'contact allowed: home runs, hits on balls in play, ground balls, FIP',
