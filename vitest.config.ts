@@ -7,5 +7,6 @@ export default defineConfig({
     hookTimeout: 120_000,
     pool: 'forks',
     maxWorkers: 2,
+    setupFiles: ['tests/setup/removeScratchDirs.ts'],
   },
 });

@@ -1,11 +1,11 @@
-import { cp, mkdtemp, readFile, readdir, stat, writeFile } from 'node:fs/promises';
+import { cp, readFile, readdir, stat, writeFile } from 'node:fs/promises';
 import { existsSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { spawnSync } from 'node:child_process';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../helpers/runCli.ts';
 import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
+import { scratchDir } from '../helpers/scratchDir.ts';
 
 let dir: string;
 let roster: string;
@@ -21,7 +21,7 @@ async function setCell(file: string, line: number, column: string, value: string
 }
 
 beforeAll(async () => {
-  dir = await mkdtemp(join(tmpdir(), 'kindred-build-'));
+  dir = await scratchDir('kindred-build-');
   roster = join(dir, 'roster');
   await cp(DEMO_ROSTER, roster, { recursive: true });
 });

@@ -1,5 +1,4 @@
-import { mkdtemp, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../helpers/runCli.ts';
@@ -7,6 +6,7 @@ import { compsResultSchema } from './compsContract.ts';
 import { DEMO_ROSTER } from '../../src/cli/commands/demoCommand.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
+import { scratchDir } from '../helpers/scratchDir.ts';
 
 let dir: string;
 let store: string;
@@ -15,7 +15,7 @@ let profiles: ProfileStore;
 let catcher: { id: string; name: string };
 
 beforeAll(async () => {
-  dir = await mkdtemp(join(tmpdir(), 'kindred-cli-'));
+  dir = await scratchDir('kindred-cli-');
   store = join(dir, 'store');
   const built = await runCli('build', DEMO_ROSTER, '--store', store, '--no-backtest');
   expect(built.code).toBe(0);

@@ -1,5 +1,4 @@
-import { mkdtemp } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../helpers/runCli.ts';
@@ -7,6 +6,7 @@ import { compsResultSchema } from './compsContract.ts';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
+import { scratchDir } from '../helpers/scratchDir.ts';
 
 let single: string;
 let windowed: string;
@@ -17,7 +17,7 @@ let hitter: { id: string; season: number; first: number };
 let top: string;
 
 beforeAll(async () => {
-  const dir = await mkdtemp(join(tmpdir(), 'kindred-window-cli-'));
+  const dir = await scratchDir('kindred-window-cli-');
   const league = simulateLeague({ seed: 77, firstSeason: 2010, lastSeason: 2026, targetPlayerSeasons: 3000 });
   await writeLeagueCsv(league, join(dir, 'roster'));
   single = join(dir, 'single');

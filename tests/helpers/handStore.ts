@@ -1,11 +1,11 @@
 /** A hand-made roster of three outfielders and three starting pitchers (one invented season and level), built into a store. */
-import { mkdtemp, mkdir, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { mkdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import { DEFAULT_STANDARDISE } from '../../src/profiles/standardiseByStratum.ts';
+import { scratchDir } from './scratchDir.ts';
 
 export const HAND_ROSTER: Record<string, string> = {
   'levels.csv': 'level\nHigh\nTop\n',
@@ -40,7 +40,7 @@ export const HAND_ROSTER: Record<string, string> = {
 
 /** The hand-made roster written as CSV files, built (sample minimums 30 PA / 30 BF) and loaded. */
 export async function handStore(): Promise<ProfileStore> {
-  const dir = await mkdtemp(join(tmpdir(), 'kindred-hand-roster-'));
+  const dir = await scratchDir('kindred-hand-roster-');
   const roster = join(dir, 'roster');
   await mkdir(roster);
   for (const [name, text] of Object.entries(HAND_ROSTER)) await writeFile(join(roster, name), `${text}\n`);

@@ -1,6 +1,5 @@
 /** A store built from a small simulated league in a temp folder, for query and CLI tests. */
-import { mkdtemp } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+
 import { join } from 'node:path';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
@@ -8,6 +7,7 @@ import { buildStore } from '../../src/pipeline/buildStore.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import type { ProfileStore } from '../../src/store/ProfileStore.ts';
 import type { SimLeague } from '../../src/sim/simTypes.ts';
+import { scratchDir } from './scratchDir.ts';
 
 export interface SimStore {
   readonly dir: string;
@@ -18,7 +18,7 @@ export interface SimStore {
 }
 
 export async function simStore(targetPlayerSeasons = 8000, seed = 4242): Promise<SimStore> {
-  const dir = await mkdtemp(join(tmpdir(), 'kindred-test-'));
+  const dir = await scratchDir('kindred-test-');
   const league = simulateLeague({ seed, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons });
   const rosterDir = join(dir, 'roster');
   const storeDir = join(dir, 'store');

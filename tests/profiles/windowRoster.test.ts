@@ -1,5 +1,4 @@
-import { mkdtemp, mkdir, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { mkdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readRoster } from '../../src/ingest/readRoster.ts';
@@ -7,6 +6,7 @@ import type { Roster } from '../../src/ingest/Roster.ts';
 import { windowKey, windowRoster } from '../../src/profiles/windowRoster.ts';
 import { buildProfiles, buildWindowProfiles } from '../../src/profiles/buildProfiles.ts';
 import { DEFAULT_STANDARDISE } from '../../src/profiles/standardiseByStratum.ts';
+import { scratchDir } from '../helpers/scratchDir.ts';
 
 /**
  * A hand-made two-season roster (invented players): h1 at AA in 2024 and 2025 (and 2026, and Top in 2025),
@@ -47,7 +47,7 @@ const FILES: Record<string, string> = {
 let roster: Roster;
 
 beforeAll(async () => {
-  const dir = await mkdtemp(join(tmpdir(), 'kindred-window-roster-'));
+  const dir = await scratchDir('kindred-window-roster-');
   await mkdir(join(dir, 'roster'));
   for (const [name, text] of Object.entries(FILES)) await writeFile(join(dir, 'roster', name), `${text}\n`);
   roster = await readRoster(join(dir, 'roster'), { lenient: false });

@@ -1,11 +1,11 @@
 /** A small simulated league shared by the sim tests, written once per test file. */
-import { mkdtemp, readFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { simulateLeague } from '../../src/sim/simulateLeague.ts';
 import type { SimLeague, SimOptions } from '../../src/sim/simTypes.ts';
 import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
+import { scratchDir } from '../helpers/scratchDir.ts';
 
 export const SMALL_OPTIONS: SimOptions = { seed: 12345, firstSeason: 2003, lastSeason: 2026, targetPlayerSeasons: 6000 };
 
@@ -14,7 +14,7 @@ export function smallLeague(options: SimOptions = SMALL_OPTIONS): SimLeague {
 }
 
 export async function writeToTemp(league: SimLeague): Promise<{ dir: string; files: Record<string, number> }> {
-  const dir = await mkdtemp(join(tmpdir(), 'kindred-sim-'));
+  const dir = await scratchDir('kindred-sim-');
   const { files } = await writeLeagueCsv(league, dir);
   return { dir, files };
 }
