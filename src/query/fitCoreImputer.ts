@@ -25,6 +25,13 @@ export const CORE_MAX_MISSING = 0.05;
 export const MIN_FIT_ROWS = 200;
 /** At most this many rows per line, taken at an even stride (project choice: the fit settles long before). */
 export const MAX_FIT_ROWS = 4000;
+/**
+ * At most this many of the group's rows are looked at, at an even stride (project choice): which
+ * dimensions are core and the lines' rows are taken from them. The fit runs at a group's first query,
+ * and scanning every row of a 285,000-row group cost about 0.18 s of a cold command at 1,000,000
+ * player-seasons; groups up to this size are scanned whole, as before.
+ */
+export const SCAN_ROWS = 40_000;
 /** Ridge penalty of the lines (standardised features; barely more than least squares, keeps collinear rates solvable). */
 const RIDGE = 1;
 
@@ -41,9 +48,13 @@ export function fitCoreImputer(
 ): CoreImputer {
   const ridge = o.ridge ?? RIDGE;
   const minRows = o.minRows ?? MIN_FIT_ROWS;
+  const scan = Math.max(1, Math.ceil(n / SCAN_ROWS));
   const present = new Float64Array(d);
-  for (let r = 0; r < n; r++) for (let j = 0; j < d; j++) if (!Number.isNaN(z[r * d + j] as number)) present[j] = (present[j] as number) + 1;
-  const core = Int32Array.from({ length: d }, (_, j) => j).filter((j) => n > 0 && 1 - (present[j] as number) / n < CORE_MAX_MISSING);
+  let scanned = 0;
+  for (let r = 0; r < n; r += scan, scanned++) {
+    for (let j = 0; j < d; j++) if (!Number.isNaN(z[r * d + j] as number)) present[j] = (present[j] as number) + 1;
+  }
+  const core = Int32Array.from({ length: d }, (_, j) => j).filter((j) => scanned > 0 && 1 - (present[j] as number) / scanned < CORE_MAX_MISSING);
   const lines: (Float64Array | null)[] = [];
   const residual = new Float64Array(d).fill(1);
   const features = (r: number): number[] => Array.from(core, (k) => {
@@ -59,7 +70,7 @@ export function fitCoreImputer(
     const x: number[][] = [];
     const y: number[] = [];
     let seen = 0;
-    for (let r = 0; r < n; r++) {
+    for (let r = 0; r < n; r += scan) {
       const v = z[r * d + j] as number;
       if (Number.isNaN(v) || seen++ % stride !== 0) continue;
       x.push(features(r));

@@ -22,19 +22,27 @@ export function fitRidge(x: readonly (readonly number[])[], y: readonly number[]
   if (x.length !== y.length) throw new RangeError(`fitRidge: ${x.length} rows but ${y.length} values`);
   if (!(ridge >= 0)) throw new RangeError(`fitRidge: ridge ${ridge}: expected 0 or more`);
   const d = (x[0]?.length ?? 0) + 1;
-  const a = Matrix.zeros(d, d);
-  const b = Matrix.zeros(d, 1);
+  // The normal equations are summed in plain arrays (row-major), in the same order as element by element,
+  // and handed to ml-matrix once: get/set per product cost about 0.05 s per 4,000 x 16 fit.
+  const a = new Float64Array(d * d);
+  const b = new Float64Array(d);
+  const v = new Float64Array(d);
   x.forEach((row, i) => {
-    const v = [1, ...row];
+    v[0] = 1;
+    for (let p = 1; p < d; p++) v[p] = row[p - 1] as number;
+    const yi = y[i] as number;
     for (let p = 0; p < d; p++) {
-      b.set(p, 0, b.get(p, 0) + (v[p] as number) * (y[i] as number));
-      for (let q = 0; q < d; q++) a.set(p, q, a.get(p, q) + (v[p] as number) * (v[q] as number));
+      const vp = v[p] as number;
+      b[p] = (b[p] as number) + vp * yi;
+      for (let q = 0; q < d; q++) a[p * d + q] = (a[p * d + q] as number) + vp * (v[q] as number);
     }
   });
-  for (let p = 1; p < d; p++) a.set(p, p, a.get(p, p) + ridge);
+  for (let p = 1; p < d; p++) a[p * d + p] = (a[p * d + p] as number) + ridge;
   // a tiny jitter keeps a rank-deficient system (a constant feature) solvable
-  for (let p = 0; p < d; p++) a.set(p, p, a.get(p, p) + 1e-9);
-  const solved = new CholeskyDecomposition(a).solve(b);
+  for (let p = 0; p < d; p++) a[p * d + p] = (a[p * d + p] as number) + 1e-9;
+  const matrix = new Matrix(Array.from({ length: d }, (_, p) => Array.from(a.subarray(p * d, (p + 1) * d))));
+  const column = Matrix.columnVector(Array.from(b));
+  const solved = new CholeskyDecomposition(matrix).solve(column);
   return { coefficients: solved.getColumn(0) };
 }
 
