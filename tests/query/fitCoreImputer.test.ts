@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fitCoreImputer, lineValue } from '../../src/query/fitCoreImputer.ts';
+import { SCAN_ROWS, fitCoreImputer, lineValue } from '../../src/query/fitCoreImputer.ts';
 import { missingAwareDistance } from '../../src/query/missingAwareDistance.ts';
 import { SeededRandom } from '../../src/random/SeededRandom.ts';
 
@@ -42,6 +42,28 @@ describe('fitCoreImputer (lines from the dimensions every profile has)', () => {
       z[2 * r + 1] = r % 10 === 0 ? NaN : 0.8 * x + 0.6 * rng.normal();
     }
     const imp = fitCoreImputer(z, n, 2);
+    expect(imp.lines[1]?.[1]).toBeGreaterThan(0.8 - 0.04);
+    expect(imp.lines[1]?.[1]).toBeLessThan(0.8 + 0.04);
+    expect(imp.residual[1]).toBeGreaterThan(0.36 - 0.04);
+    expect(imp.residual[1]).toBeLessThan(0.36 + 0.04);
+  });
+
+  it('fits a group larger than SCAN_ROWS from rows at an even stride, with the same slope, noise and core', () => {
+    // the same model at 150,000 rows (4 times SCAN_ROWS); the second half of the rows has y missing a third
+    // of the time, so a sample taken from the first rows alone would misjudge which columns are core
+    const rng = new SeededRandom(11);
+    const n = 150_000;
+    const z = new Float64Array(3 * n);
+    for (let r = 0; r < n; r++) {
+      const x = rng.normal();
+      z[3 * r] = x;
+      z[3 * r + 1] = r >= n / 2 && r % 3 === 0 ? NaN : 0.8 * x + 0.6 * rng.normal();
+      z[3 * r + 2] = r % 500 === 0 ? NaN : rng.normal();
+    }
+    expect(n).toBeGreaterThan(SCAN_ROWS);
+    const imp = fitCoreImputer(z, n, 3);
+    // column 1 misses a sixth of its values (not core), column 2 one in 500 (core)
+    expect(Array.from(imp.core)).toEqual([0, 2]);
     expect(imp.lines[1]?.[1]).toBeGreaterThan(0.8 - 0.04);
     expect(imp.lines[1]?.[1]).toBeLessThan(0.8 + 0.04);
     expect(imp.residual[1]).toBeGreaterThan(0.36 - 0.04);
