@@ -3,7 +3,7 @@ import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { readRoster, type ColumnMap } from '../ingest/readRoster.ts';
 import type { Roster } from '../ingest/Roster.ts';
-import { windowRoster } from '../profiles/windowRoster.ts';
+import { windowRoster, type WindowRoster } from '../profiles/windowRoster.ts';
 import { writeRejects } from '../ingest/writeRejects.ts';
 import { buildProfiles, profileWindowRoster, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
 import type { GroupFile } from '../store/groupFile.ts';
@@ -148,10 +148,16 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
   for (const size of windowSizes) {
     progress(`profiles over ${size} seasons`, 0, 1);
     if (!roster) throw new Error('internal: the roster was let go before its last window');
-    const combined = windowRoster(roster, size);
-    // after the last window's lines are combined, nothing needs the single seasons' lines: let them go
-    if (size === windowSizes[windowSizes.length - 1]) roster = null;
-    const set = profileSet(profileWindowRoster(combined, profileOptions, weights), playerIndex);
+    let combined: WindowRoster | null = windowRoster(roster, size);
+    if (size === windowSizes[windowSizes.length - 1]) {
+      // after the last window's lines are combined, nothing needs the single seasons' lines: they are
+      // collected now, before the window profiles allocate (V8 would keep them until the heap grows)
+      roster = null;
+      collectGarbage();
+    }
+    const profiled = profileWindowRoster(combined, profileOptions, weights);
+    combined = null; // the window lines are garbage once profiled, before the groups are written
+    const set = profileSet(profiled, playerIndex);
     windowRows.set(size, set.rows);
     await writeGroups(set.groups, size, playerIndex, levels);
   }
