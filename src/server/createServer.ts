@@ -12,6 +12,7 @@ import type { LoadedStore } from './LoadedStore.ts';
 import type { Endpoint } from './Endpoint.ts';
 import { API_ENDPOINTS } from './apiEndpoints.ts';
 import { cacheKey } from './AnswerCache.ts';
+import { TurnQueue } from './TurnQueue.ts';
 import { KindredError } from '../errors/KindredError.ts';
 
 /** Where `npm run build:web` writes the page. */
@@ -86,6 +87,8 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
   const holder = await StoreHolder.open(options.storeDir, options.loadStore, options.cacheEntries ?? DEFAULT_CACHE_ENTRIES);
   const files = await loadStaticFiles(options.webRoot ?? DEFAULT_WEB_ROOT);
   let hosts: ReadonlySet<string> = new Set();
+  /** Uncached answers are computed here, a slice at a time, so that a burst never starves new connections. */
+  const turns = new TurnQueue();
 
   const server = http.createServer(
     {
@@ -127,13 +130,20 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
           sendJson(res, method, 200, JSON.stringify(await endpoint.answer({ holder, query })));
           return;
         }
-        const loaded = holder.current;
         const key = cacheKey(path, query);
-        let text = loaded.answers.get(key);
-        if (text === undefined) {
-          text = JSON.stringify(await endpoint.answer({ holder, query }));
-          loaded.answers.set(key, text);
-        }
+        const text =
+          holder.current.answers.get(key) ??
+          (await turns.run<string>(() => {
+            // Read when the task runs: the answer and the cache it is kept in belong to the same store.
+            const loaded = holder.current;
+            const keep = (answer: unknown): string => {
+              const text = JSON.stringify(answer);
+              if (holder.current === loaded) loaded.answers.set(key, text);
+              return text;
+            };
+            const answer = endpoint.answer({ holder, query });
+            return answer instanceof Promise ? answer.then(keep) : keep(answer);
+          }));
         sendJson(res, method, 200, text);
         return;
       }
