@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SCAN_ROWS, fitCoreImputer, lineValue } from '../../src/query/fitCoreImputer.ts';
+import { SCAN_ROWS, fitCoreImputer, lineValue, type CoreImputer } from '../../src/query/fitCoreImputer.ts';
 import { missingAwareDistance } from '../../src/query/missingAwareDistance.ts';
 import { SeededRandom } from '../../src/random/SeededRandom.ts';
 
@@ -12,6 +12,14 @@ const Y = [8.04, 6.95, 7.58, 8.81, 8.33, 9.96, 7.24, 4.26, 10.84, 4.82, 5.68];
 /** Rows [x, y], plus one row without y so that y is not a core column (1 of 12 missing). */
 function anscombe(): Float64Array {
   return Float64Array.from([...X.flatMap((x, i) => [x, Y[i] as number]), 9, NaN]);
+}
+
+/** Column 1's line is y = 0.8 x + e with var(e) = 0.36: slope and residual variance within 0.04 (over 4 standard errors). */
+function expectSlopeAndNoise(imp: CoreImputer): void {
+  expect(imp.lines[1]?.[1]).toBeGreaterThan(0.8 - 0.04);
+  expect(imp.lines[1]?.[1]).toBeLessThan(0.8 + 0.04);
+  expect(imp.residual[1]).toBeGreaterThan(0.36 - 0.04);
+  expect(imp.residual[1]).toBeLessThan(0.36 + 0.04);
 }
 
 describe('fitCoreImputer (lines from the dimensions every profile has)', () => {
@@ -42,10 +50,7 @@ describe('fitCoreImputer (lines from the dimensions every profile has)', () => {
       z[2 * r + 1] = r % 10 === 0 ? NaN : 0.8 * x + 0.6 * rng.normal();
     }
     const imp = fitCoreImputer(z, n, 2);
-    expect(imp.lines[1]?.[1]).toBeGreaterThan(0.8 - 0.04);
-    expect(imp.lines[1]?.[1]).toBeLessThan(0.8 + 0.04);
-    expect(imp.residual[1]).toBeGreaterThan(0.36 - 0.04);
-    expect(imp.residual[1]).toBeLessThan(0.36 + 0.04);
+    expectSlopeAndNoise(imp);
   });
 
   it('fits a group larger than SCAN_ROWS from rows at an even stride, with the same slope, noise and core', () => {
@@ -64,10 +69,7 @@ describe('fitCoreImputer (lines from the dimensions every profile has)', () => {
     const imp = fitCoreImputer(z, n, 3);
     // column 1 misses a sixth of its values (not core), column 2 one in 500 (core)
     expect(Array.from(imp.core)).toEqual([0, 2]);
-    expect(imp.lines[1]?.[1]).toBeGreaterThan(0.8 - 0.04);
-    expect(imp.lines[1]?.[1]).toBeLessThan(0.8 + 0.04);
-    expect(imp.residual[1]).toBeGreaterThan(0.36 - 0.04);
-    expect(imp.residual[1]).toBeLessThan(0.36 + 0.04);
+    expectSlopeAndNoise(imp);
   });
 
   it('reads a line at a row of the full matrix or on the core values alone, a missing core value as 0', () => {
