@@ -10,6 +10,11 @@ import { isIndexJobDone, type IndexJob } from './indexJob.ts';
 
 interface Pending {
   readonly job: IndexJob;
+  /**
+   * The job's vector values, counted when it is sent: the vectors' buffer is transferred to the worker,
+   * after which `job.vectors` reads as empty in this thread.
+   */
+  readonly values: number;
   readonly resolve: (bytes: Uint8Array) => void;
   readonly reject: (error: unknown) => void;
 }
@@ -49,12 +54,17 @@ export class IndexBuildPool {
         reject(this.#failed);
         return;
       }
-      const pending: Pending = { job: { id: this.#nextId++, vectors, dim, params, path }, resolve, reject };
+      const pending: Pending = { job: { id: this.#nextId++, vectors, dim, params, path }, values: vectors.length, resolve, reject };
       const worker = this.#leastLoaded();
       this.#queues.get(worker)?.push(pending);
       const buffer = vectors.buffer;
       worker.postMessage(pending.job, buffer instanceof ArrayBuffer ? [buffer] : []);
     });
+  }
+
+  /** Per worker thread started, the vector values of the jobs it has been sent and not yet answered. */
+  queuedValues(): number[] {
+    return [...this.#queues.values()].map((queue) => queue.reduce((a, p) => a + p.values, 0));
   }
 
   /** Stops the worker threads (after the jobs handed out have been answered or failed). */
@@ -69,7 +79,7 @@ export class IndexBuildPool {
     let best: Worker | null = null;
     let bestLoad = Infinity;
     for (const [worker, queue] of this.#queues) {
-      const load = queue.reduce((a, p) => a + p.job.vectors.length, 0);
+      const load = queue.reduce((a, p) => a + p.values, 0);
       if (load < bestLoad) {
         best = worker;
         bestLoad = load;

@@ -37,6 +37,20 @@ describe('IndexBuildPool', () => {
     }
   });
 
+  it('spreads the jobs over its threads by the work queued (the vectors are transferred, so their size is counted before sending)', async () => {
+    const pool = new IndexBuildPool(2);
+    try {
+      const sizes = [1200, 1000, 300, 200];
+      const built = sizes.map((n, i) => pool.build(randomVectors(n, 6, i + 1), 6, params, join(dir, `spread-${i}.bin`)));
+      // largest first, each to the least loaded thread: 1200 | 1000, then 300 to the 1000, 200 to the 1200
+      expect(pool.queuedValues()).toEqual([(1200 + 200) * 6, (1000 + 300) * 6]);
+      await Promise.all(built);
+      expect(pool.queuedValues()).toEqual([0, 0]);
+    } finally {
+      await pool.close();
+    }
+  });
+
   it('turns a build that fails in a worker into a Kindred error, and keeps working for the next job', async () => {
     const pool = new IndexBuildPool(2);
     try {
