@@ -11,6 +11,7 @@ export type HttpErrorCode =
   | 'kindred.http.bodyTooLarge'
   | 'kindred.http.aborted'
   | 'kindred.http.pageNotBuilt'
+  | 'kindred.http.workerFailed'
   | 'kindred.http.internal';
 
 /** Every code an API error body may carry. */

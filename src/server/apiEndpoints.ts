@@ -11,7 +11,7 @@ import { matchEndpoint } from './api/matchEndpoint.ts';
 import { backtestEndpoint } from './api/backtestEndpoint.ts';
 
 /** Every JSON endpoint by its exact path. */
-export const API_ENDPOINTS: ReadonlyMap<string, Endpoint> = new Map([
+export const API_ENDPOINTS: ReadonlyMap<string, Endpoint> = new Map<string, Endpoint>([
   ['/api/comps', compsEndpoint],
   ['/api/prospect', prospectEndpoint],
   ['/api/cheaper', cheaperEndpoint],

@@ -13,6 +13,8 @@ import type { Endpoint } from './Endpoint.ts';
 import { API_ENDPOINTS } from './apiEndpoints.ts';
 import { cacheKey } from './AnswerCache.ts';
 import { TurnQueue } from './TurnQueue.ts';
+import { AnswerPool, type PoolAnswer } from './pool/AnswerPool.ts';
+import { storeAnswerText } from './storeAnswerText.ts';
 import { KindredError } from '../errors/KindredError.ts';
 
 /** Where `npm run build:web` writes the page. */
@@ -61,7 +63,15 @@ export interface ServerOptions {
   readonly loadStore?: StoreLoader;
   /** Answers of comps-like queries kept per loaded store (default DEFAULT_CACHE_ENTRIES; 0: none). */
   readonly cacheEntries?: number;
+  /**
+   * Worker threads computing uncached answers of store endpoints (AnswerPool), each with its own copy
+   * of the store; 0 (the default here): computed on the server's thread, between connections.
+   */
+  readonly workers?: number;
 }
+
+/** `kindred serve --workers` by default (measured in bench/serve.bench.ts; see README). */
+export const DEFAULT_WORKERS = 2;
 
 /** An answer is about 20 KB; the cache is also bounded in bytes (AnswerCache's DEFAULT_CACHE_BYTES). */
 export const DEFAULT_CACHE_ENTRIES = 1000;
@@ -71,6 +81,8 @@ export interface RunningServer {
   /** e.g. `http://127.0.0.1:8080/` */
   readonly url: string;
   readonly holder: StoreHolder;
+  /** The answer workers, when the server has any. */
+  readonly pool: AnswerPool | undefined;
   /** Same as POST /api/reload. */
   readonly reload: () => Promise<LoadedStore>;
   /** Stops listening and ends every open connection. */
@@ -89,6 +101,18 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
   let hosts: ReadonlySet<string> = new Set();
   /** Uncached answers are computed here, a slice at a time, so that a burst never starves new connections. */
   const turns = new TurnQueue();
+  /** An uncached answer on this thread, from the store current when its turn comes. */
+  const inThread = (path: string, query: string): Promise<PoolAnswer> =>
+    turns.run<PoolAnswer>(() => {
+      const endpoint = API_ENDPOINTS.get(path);
+      if (!endpoint?.cacheable) throw new RangeError(`${path} is not a store endpoint`);
+      const loaded = holder.current;
+      const text = storeAnswerText(endpoint, loaded, new URLSearchParams(query));
+      return typeof text === 'string' ? { text, generation: loaded.generation } : text.then((t) => ({ text: t, generation: loaded.generation }));
+    });
+  const workers = options.workers ?? 0;
+  const pool = workers > 0 ? await AnswerPool.start(workers, holder.current, holder.dir, inThread, log) : undefined;
+  if (pool) holder.attach(pool);
 
   const server = http.createServer(
     {
@@ -131,20 +155,17 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
           return;
         }
         const key = cacheKey(path, query);
-        const text =
-          holder.current.answers.get(key) ??
-          (await turns.run<string>(() => {
-            // Read when the task runs: the answer and the cache it is kept in belong to the same store.
-            const loaded = holder.current;
-            const keep = (answer: unknown): string => {
-              const text = JSON.stringify(answer);
-              if (holder.current === loaded) loaded.answers.set(key, text);
-              return text;
-            };
-            const answer = endpoint.answer({ holder, query });
-            return answer instanceof Promise ? answer.then(keep) : keep(answer);
-          }));
-        sendJson(res, method, 200, text);
+        const hit = holder.current.answers.get(key);
+        if (hit !== undefined) {
+          sendJson(res, method, 200, hit);
+          return;
+        }
+        const raw = q < 0 ? '' : target.slice(q + 1);
+        const fresh = await (pool ? pool.run(path, raw) : inThread(path, raw));
+        // kept only in the cache of the store it was computed from, and only while that store is current
+        const loaded = holder.current;
+        if (loaded.generation === fresh.generation) loaded.answers.set(key, fresh.text);
+        sendJson(res, method, 200, fresh.text);
         return;
       }
       if (path.startsWith('/api/')) throw new HttpError(404, 'kindred.http.notFound', `no endpoint ${path}; known: ${[...API_ENDPOINTS.keys()].join(', ')}`);
@@ -163,14 +184,19 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
     }
   }
 
-  await new Promise<void>((resolve, reject) => {
-    const failed = (e: Error): void => reject(listenError(e, options.host ?? '127.0.0.1', options.port ?? 8080));
-    server.once('error', failed);
-    server.listen(options.port ?? 8080, options.host ?? '127.0.0.1', () => {
-      server.off('error', failed);
-      resolve();
+  try {
+    await new Promise<void>((resolve, reject) => {
+      const failed = (e: Error): void => reject(listenError(e, options.host ?? '127.0.0.1', options.port ?? 8080));
+      server.once('error', failed);
+      server.listen(options.port ?? 8080, options.host ?? '127.0.0.1', () => {
+        server.off('error', failed);
+        resolve();
+      });
     });
-  });
+  } catch (e) {
+    await pool?.close();
+    throw e;
+  }
   const address = server.address();
   if (address === null || typeof address === 'string') throw new RangeError('the server is not listening on a TCP port');
   const host = options.host ?? '127.0.0.1';
@@ -182,12 +208,15 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
     server,
     url,
     holder,
+    pool,
     reload: () => holder.reload(),
-    close: () =>
-      new Promise<void>((resolve, reject) => {
+    close: async () => {
+      await new Promise<void>((resolve, reject) => {
         server.close((e) => (e ? reject(e) : resolve()));
         server.closeAllConnections();
-      }),
+      });
+      await pool?.close();
+    },
   };
 }
 

@@ -1,6 +1,7 @@
 import { KindredError, QueryError, StoreError, UsageError } from '../errors/KindredError.ts';
 import { ParameterError, type ParameterNamer } from '../errors/ParameterError.ts';
 import { HttpError, type ApiErrorCode } from './HttpError.ts';
+import { WorkerAnswerError } from './pool/WorkerAnswerError.ts';
 
 export interface ErrorResponse {
   readonly status: number;
@@ -50,7 +51,7 @@ function queryStatus(e: QueryError): number {
 /**
  * The status and body for anything thrown while answering: usage errors are 400 (a parameter's named
  * plainly), unknown players 404, a store that cannot be read 503 (in general words: no paths), HTTP
- * refusals their own status. Anything else is a 500 whose message says nothing about the inside (no stack, no path).
+ * refusals their own status; an error thrown in an answer worker what the worker made of it (the same). Anything else is a 500 whose message says nothing about the inside (no stack, no path).
  */
 export function errorResponse(e: unknown): ErrorResponse {
   const make = (status: number, code: ApiErrorCode, message: string, headers: Readonly<Record<string, string>> = {}, unexpected = false): ErrorResponse => ({
@@ -59,6 +60,7 @@ export function errorResponse(e: unknown): ErrorResponse {
     headers,
     unexpected,
   });
+  if (e instanceof WorkerAnswerError) return e.response;
   if (e instanceof HttpError && e.code === 'kindred.http.aborted') return { ...make(e.status, e.code, e.message, e.headers), logLine: e.message };
   if (e instanceof HttpError) return make(e.status, e.code, e.message, e.headers);
   if (e instanceof ParameterError) return { ...make(400, e.code, apiMessage(e)), body: { error: { code: e.code, message: apiMessage(e), parameter: e.parameter } } };

@@ -1,7 +1,7 @@
 import { Command, InvalidArgumentError } from 'commander';
 import type { CliIo } from '../CliIo.ts';
 import { DEFAULT_STORE } from '../../request/parameters.ts';
-import { createServer, DEFAULT_CACHE_ENTRIES } from '../../server/createServer.ts';
+import { createServer, DEFAULT_CACHE_ENTRIES, DEFAULT_WORKERS } from '../../server/createServer.ts';
 import { positiveInt } from '../../request/valueParsers.ts';
 import { cliParser } from '../requestOptions.ts';
 import { servingLine } from '../../server/servingUrl.ts';
@@ -17,6 +17,16 @@ export function port(value: string): number {
 export function cacheSize(value: string): number {
   return value.trim() === '0' ? 0 : cliParser(positiveInt)(value);
 }
+
+/** Answer workers: 0 (answers computed on the server's thread) up to MAX_WORKERS. */
+export function workerCount(value: string): number {
+  const n = value.trim() === '0' ? 0 : cliParser(positiveInt)(value);
+  if (n > MAX_WORKERS) throw new InvalidArgumentError(`expected at most ${MAX_WORKERS} answer workers (each holds its own copy of the store), got "${value}"`);
+  return n;
+}
+
+/** Most answer workers (a project choice: each holds a copy of the store, and more than the cores only queue). */
+export const MAX_WORKERS = 16;
 
 export interface ServeSignals {
   /** Registers a handler; returns a function that removes it. */
@@ -61,12 +71,14 @@ export function serveCommand(io: CliIo, signals: ServeSignals = processSignals):
     .option('--port <n>', 'TCP port (0: any free port)', port, 8080)
     .option('--host <address>', 'address to listen on (anything but loopback exposes the store to the network)', '127.0.0.1')
     .option('--cache <n>', 'answers kept in memory per loaded store (0: none)', cacheSize, DEFAULT_CACHE_ENTRIES)
-    .action(async (raw: { store: string; port: number; host: string; cache: number }) => {
+    .option('--workers <n>', 'threads computing answers, each with its own copy of the store (0: on the server\'s thread)', workerCount, DEFAULT_WORKERS)
+    .action(async (raw: { store: string; port: number; host: string; cache: number; workers: number }) => {
       const running = await createServer({
         storeDir: raw.store,
         port: raw.port,
         host: raw.host,
         cacheEntries: raw.cache,
+        workers: raw.workers,
         log: (line) => io.stderr.write(line + '\n'),
       });
       io.stdout.write(servingLine(running.url, raw.store));

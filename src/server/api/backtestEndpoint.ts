@@ -3,7 +3,7 @@ import type { BacktestAnswer } from '../../request/apiContract.ts';
 import { answerBacktest } from '../../request/answerBacktest.ts';
 import { readRequest } from '../../request/readRequest.ts';
 import type { LoadedStore } from '../LoadedStore.ts';
-import type { Endpoint } from '../Endpoint.ts';
+import type { StoreEndpoint } from '../Endpoint.ts';
 
 /**
  * `GET /api/backtest[?cuts=2016,2018][&group=hitters]`: what `kindred backtest --format json` prints: the
@@ -16,8 +16,8 @@ export function answerBacktestOver(loaded: LoadedStore, query: URLSearchParams):
   return answerBacktest(loaded.store, loaded.outcomes, req);
 }
 
-export const backtestEndpoint: Endpoint = {
+export const backtestEndpoint: StoreEndpoint = {
   methods: ['GET'],
   cacheable: true,
-  answer: ({ holder, query }) => answerBacktestOver(holder.current, query),
+  answer: answerBacktestOver,
 };

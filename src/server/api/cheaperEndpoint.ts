@@ -1,13 +1,13 @@
 import { answerCheaper } from '../../request/answerCheaper.ts';
 import { readRequest } from '../../request/readRequest.ts';
-import type { Endpoint } from '../Endpoint.ts';
+import type { StoreEndpoint } from '../Endpoint.ts';
 
 /**
  * `GET /api/cheaper?player=ID&max-salary=USD...`: what `kindred cheaper ID ... --format json` prints:
  * comps with a known salary under the limit (default: half the target's), the value frontier marked.
  */
-export const cheaperEndpoint: Endpoint = {
+export const cheaperEndpoint: StoreEndpoint = {
   methods: ['GET'],
   cacheable: true,
-  answer: ({ holder, query }) => answerCheaper(holder.current.store, readRequest('cheaper', 'http', query)),
+  answer: (loaded, query) => answerCheaper(loaded.store, readRequest('cheaper', 'http', query)),
 };

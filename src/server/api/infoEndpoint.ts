@@ -6,7 +6,7 @@ import { noParameters } from '../../request/readRequest.ts';
 import { defaultOf } from '../../request/parameters.ts';
 
 export type { StoreInfo } from '../../request/apiContract.ts';
-import type { Endpoint } from '../Endpoint.ts';
+import type { ServerEndpoint } from '../Endpoint.ts';
 
 /** A reach in JSON: a whole number, or null for no limit (the parameter's `all`). */
 const limit = (n: number | undefined): number | null => (n === undefined || !Number.isFinite(n) ? null : n);
@@ -52,7 +52,7 @@ export function answerInfo(loaded: LoadedStore, query: URLSearchParams): StoreIn
   };
 }
 
-export const infoEndpoint: Endpoint = {
+export const infoEndpoint: ServerEndpoint = {
   methods: ['GET'],
   cacheable: false,
   answer: ({ holder, query }) => answerInfo(holder.current, query),

@@ -3,7 +3,7 @@ import type { ProspectResult } from '../../request/apiContract.ts';
 import { answerProspect } from '../../request/answerProspect.ts';
 import { readRequest } from '../../request/readRequest.ts';
 import type { LoadedStore } from '../LoadedStore.ts';
-import type { Endpoint } from '../Endpoint.ts';
+import type { StoreEndpoint } from '../Endpoint.ts';
 
 /**
  * `GET /api/prospect?player=ID...`: what `kindred prospect ID ... --format json` prints: earlier
@@ -15,8 +15,8 @@ export function answerProspectOver(loaded: LoadedStore, query: URLSearchParams):
   return answerProspect(loaded.store, loaded.outcomes, req, loaded.backtest);
 }
 
-export const prospectEndpoint: Endpoint = {
+export const prospectEndpoint: StoreEndpoint = {
   methods: ['GET'],
   cacheable: true,
-  answer: ({ holder, query }) => answerProspectOver(holder.current, query),
+  answer: answerProspectOver,
 };

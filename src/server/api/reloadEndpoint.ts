@@ -1,4 +1,4 @@
-import type { Endpoint } from '../Endpoint.ts';
+import type { ServerEndpoint } from '../Endpoint.ts';
 import { noParameters } from '../../request/readRequest.ts';
 import { answerInfo, type StoreInfo } from './infoEndpoint.ts';
 
@@ -6,7 +6,7 @@ import { answerInfo, type StoreInfo } from './infoEndpoint.ts';
  * `POST /api/reload`: reads the store folder again in full and swaps it in; answers the new store's
  * info. A store that fails to load (missing, corrupt, half-written) is a 503 and the old one stays.
  */
-export const reloadEndpoint: Endpoint = {
+export const reloadEndpoint: ServerEndpoint = {
   methods: ['POST'],
   cacheable: false,
   answer: async ({ holder, query }): Promise<StoreInfo> => {
