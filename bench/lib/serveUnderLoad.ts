@@ -4,6 +4,7 @@
  * Shared by the serve and core benches.
  */
 import { spawn } from 'node:child_process';
+import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
@@ -22,7 +23,26 @@ export interface ServeLoad {
   readonly beside?: (url: string) => () => Promise<void>;
 }
 
-export async function serveUnderLoad(load: ServeLoad): ReturnType<typeof autocannon> {
+/** The server's memory after the load (Linux: /proc/<pid>/status; undefined elsewhere), in MiB. */
+export interface ServerMemory {
+  /** Resident set size at the end of the load. */
+  readonly rssMiB: number | undefined;
+  /** Peak resident set size since the server started (VmHWM). */
+  readonly peakMiB: number | undefined;
+}
+
+export type ServeResult = Awaited<ReturnType<typeof autocannon>> & { readonly memory: ServerMemory };
+
+async function memoryOf(pid: number | undefined): Promise<ServerMemory> {
+  const status = pid === undefined ? '' : await readFile(`/proc/${pid}/status`, 'utf8').catch(() => '');
+  const kib = (field: string): number | undefined => {
+    const m = new RegExp(`^${field}:\\s+(\\d+) kB`, 'm').exec(status);
+    return m?.[1] === undefined ? undefined : Math.round(Number(m[1]) / 1024);
+  };
+  return { rssMiB: kib('VmRSS'), peakMiB: kib('VmHWM') };
+}
+
+export async function serveUnderLoad(load: ServeLoad): Promise<ServeResult> {
   const args = [kindred, 'serve', '--store', load.storeDir, '--port', '0', ...load.serveArgs];
   const child = spawn(process.execPath, args, { stdio: ['ignore', 'pipe', 'ignore'] });
   const url = await servingUrl(child);
@@ -32,12 +52,13 @@ export async function serveUnderLoad(load: ServeLoad): ReturnType<typeof autocan
     if (warm.status !== 200) throw new Error(`warm-up answered ${warm.status}`);
     const stop = load.beside?.(url);
     try {
-      return await autocannon({
+      const result = await autocannon({
         url,
         connections: load.connections,
         duration: load.seconds,
         requests: [{ setupRequest: (req) => ({ ...req, path: load.paths[next++ % load.paths.length] ?? '/api/info' }) }],
       });
+      return { ...result, memory: await memoryOf(child.pid) };
     } finally {
       await stop?.();
     }
