@@ -1,28 +1,28 @@
+import type { PackedRows } from './packPartition.ts';
+
 /**
  * The `c` rows with the smallest missing-aware distance (see missingAwareDistance) to a target among
- * `rows` that pass `mask` and share at least `minCoverage` of the target's weight, by a scan over
- * only the dimensions in `dims` (those both the rows may have and the target has). Closest first;
- * between equal distances the smaller row. A bounded max-heap keeps the best `c`, so a scan allocates
- * nothing per row.
+ * the packed rows (packPartition) that pass `mask` and share at least `minCoverage` of the target's
+ * weight, by a scan over only the packed dimensions (those the rows may have) that the target has.
+ * Closest first; between equal distances the smaller row. A bounded max-heap keeps the best `c`, so a
+ * scan allocates nothing per row.
  *
- * Rows outside `dims` must lack every other dimension the target has (as the rows of one coverage
- * partition do), so that the distance over `dims` is the distance over all dimensions.
+ * The rows must lack every dimension the target has outside the packed ones (as the rows of one
+ * coverage partition do), so that the distance over them is the distance over all dimensions.
  *
  * @example
  * // target [0, 1], rows 0..2 = [0, 0], [5, 5], [0, 1], weights 1: closestRows(..., c = 2) -> [2, 0]
  */
 export function closestRows(
   target: Float64Array,
-  z: Float32Array,
-  d: number,
-  rows: Int32Array,
+  packed: PackedRows,
   mask: Uint8Array,
-  dims: ArrayLike<number>,
   weights: Float64Array,
   targetWeight: number,
   minCoverage: number,
   c: number,
 ): number[] {
+  const { rows, dims, values } = packed;
   const m = dims.length;
   const js = new Int32Array(m);
   const ws = new Float64Array(m);
@@ -33,7 +33,7 @@ export function closestRows(
     const w = weights[j] as number;
     const t = target[j] as number;
     if (w === 0 || Number.isNaN(t)) continue;
-    js[used] = j;
+    js[used] = k;
     ws[used] = w;
     ts[used] = t;
     used++;
@@ -44,21 +44,29 @@ export function closestRows(
   const heapR = new Int32Array(cap);
   let size = 0;
   const minShared = minCoverage * targetWeight;
+  let sharedAll = 0;
+  for (let k = 0; k < used; k++) sharedAll += ws[k] as number;
+  // Once the heap is full, a row whose partial sum passes `limit` cannot come closer than the worst kept
+  // row: its distance is at least sum * targetWeight / sharedAll (it shares at most every scanned
+  // dimension), so the rest of its dimensions are not read. Kept rows' distances are summed in the
+  // same order as before, so the result is unchanged; the small margin covers rounding in `limit`.
+  let limit = Infinity;
   for (let i = 0; i < rows.length; i++) {
     const r = rows[i] as number;
     if (mask[r] !== 1) continue;
-    const base = r * d;
+    const base = i * m;
     let sum = 0;
     let shared = 0;
     for (let k = 0; k < used; k++) {
-      const v = z[base + (js[k] as number)] as number;
+      const v = values[base + (js[k] as number)] as number;
       if (v !== v) continue;
       const diff = (ts[k] as number) - v;
       const w = ws[k] as number;
       sum += w * diff * diff;
       shared += w;
+      if (sum > limit) break;
     }
-    if (shared === 0 || !(shared >= minShared)) continue;
+    if (sum > limit || shared === 0 || !(shared >= minShared)) continue;
     const d2 = (sum * targetWeight) / shared;
     if (size < cap) {
       // sift up
@@ -89,6 +97,7 @@ export function closestRows(
       heapD[at] = d2;
       heapR[at] = r;
     }
+    if (size === cap) limit = ((heapD[0] as number) * sharedAll * (1 + 1e-9)) / targetWeight;
   }
   const order = Array.from({ length: size }, (_, i) => i);
   order.sort((a, b) => (heapD[a] as number) - (heapD[b] as number) || (heapR[a] as number) - (heapR[b] as number));

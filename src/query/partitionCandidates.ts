@@ -1,6 +1,7 @@
 import { partitionVector } from '../ann/partitionVector.ts';
 import type { StoredGroup } from '../store/ProfileStore.ts';
 import { closestRows } from './closestRows.ts';
+import { packedPartitionOf } from './packPartition.ts';
 import { searchIndexPool } from './searchIndexPool.ts';
 
 /** What the candidates of one input-space query are drawn for. */
@@ -57,7 +58,7 @@ export function partitionCandidates(g: Pick<StoredGroup, 'z' | 'd' | 'partitions
       viaIndex = true;
       continue;
     }
-    for (const r of closestRows(q.z, g.z, g.d, p.rows, q.mask, p.dims, q.weights, q.targetWeight, q.minCoverage, c)) out.push(r);
+    for (const r of closestRows(q.z, packedPartitionOf(g.z, g.d, p), q.mask, q.weights, q.targetWeight, q.minCoverage, c)) out.push(r);
   }
   return { rows: out, viaIndex };
 }
