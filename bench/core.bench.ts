@@ -182,6 +182,8 @@ async function serveLoad(storeDir: string, paths: string[], connections: number,
   return { p50: r.latency.p50, p99: r.latency.p99, requests: r.requests.total, errors: r.errors + r.timeouts, non2xx: r.non2xx };
 }
 
+// the cold command and the server run the compiled CLI: compile it first, or they would time the sources run through tsx
+execFileSync('npm', ['run', '--silent', 'build:cli'], { cwd: root, stdio: 'inherit' });
 console.log('Figures are wall times on this machine; when it is shared they include the other users\' load.');
 if (givenStore) {
   const store = await openProfileStore(givenStore);
