@@ -5,7 +5,7 @@ import { readRoster, type ColumnMap } from '../ingest/readRoster.ts';
 import type { Roster } from '../ingest/Roster.ts';
 import { windowRoster, type WindowRoster } from '../profiles/windowRoster.ts';
 import { writeRejects } from '../ingest/writeRejects.ts';
-import { buildProfiles, profileWindowRoster, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
+import { buildKindProfiles, profileWindowRoster, DEFAULT_PROFILE_OPTIONS, type GroupProfiles, type ProfileOptions, type ProfileSet } from '../profiles/buildProfiles.ts';
 import type { GroupFile } from '../store/groupFile.ts';
 import { encodeGroupFiles, type GroupIndexes } from '../store/encodeGroupFiles.ts';
 import { encodePlayersFile, playerIndexOf } from '../store/playersFile.ts';
@@ -18,7 +18,8 @@ import { StoreWriter } from '../store/writeStore.ts';
 import { checkStoreTarget, cleanLeftovers, lockStore } from '../store/storeTarget.ts';
 import { partitionByCoverage, type CoveragePartition } from '../ann/partitionByCoverage.ts';
 import { partitionVector } from '../ann/partitionVector.ts';
-import type { PositionGroup } from '../profiles/positionGroup.ts';
+import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
+import type { ProfileKind } from '../profiles/assembleSeasons.ts';
 import { resolveEmbedSettings, type EmbedSettingsInput } from './EmbedSettings.ts';
 import { embedProfiles, MIN_EMBED_ROWS, settingsRecord, type EmbeddedGroup } from './embedProfiles.ts';
 import { stageCharts } from './stageCharts.ts';
@@ -114,7 +115,8 @@ type WriteGroups = (groups: Map<PositionGroup, GroupProfiles>, size: number, pla
 
 /**
  * Reads the roster, writes its rejects, builds the single-season profiles and hands them to
- * `writeGroups` (which starts their index builds in the worker threads), writes the outcomes file,
+ * `writeGroups` (which starts their index builds in the worker threads), the pitchers' groups before the
+ * hitters are profiled, writes the outcomes file,
  * then builds the profiles over each window while those indexes build, and hands them over too; last
  * the players file. The roster's season lines (the build's largest object) are let go once the last
  * window's lines are combined, and only the summary leaves the function.
@@ -135,10 +137,40 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
   const levels = [...roster.levels];
   progress('profiles', 0, 1);
   const profileOptions = options.profile ?? DEFAULT_PROFILE_OPTIONS;
-  const single = profileSet(buildProfiles(roster, profileOptions), playerIndex);
+  /**
+   * Profiles the pitchers and writes their groups (their indexes start building in the workers), then
+   * the hitters (measured against leagues of their own kind, so each kind is what one pass over both
+   * makes); `release` is called once the last kind is profiled. Keeps each group's rows and weights.
+   */
+  const profileAndWrite = async (profile: (kind: ProfileKind) => ProfileSet, size: number, release: () => void): Promise<ProfiledKinds> => {
+    const rows = new Map<PositionGroup, Int32Array>();
+    const weights = new Map<PositionGroup, { reliability: Float64Array; redundancy: Float64Array }>();
+    let skipped: ProfileSet['skipped'] = { hittersBelowMinimum: 0, pitchersBelowMinimum: 0, pitchersBatting: 0 };
+    for (const kind of ['pitchers', 'hitters'] as const) {
+      const set = profileSet(profile(kind), playerIndex);
+      if (kind === 'hitters') release();
+      for (const [group, g] of set.groups) weights.set(group, { reliability: g.reliability, redundancy: g.redundancy });
+      for (const [group, r] of set.rows) rows.set(group, r);
+      skipped = {
+        hittersBelowMinimum: skipped.hittersBelowMinimum + set.skipped.hittersBelowMinimum,
+        pitchersBelowMinimum: skipped.pitchersBelowMinimum + set.skipped.pitchersBelowMinimum,
+        pitchersBatting: skipped.pitchersBatting + set.skipped.pitchersBatting,
+      };
+      await writeGroups(set.groups, size, playerIndex, levels);
+    }
+    const ordered = new Map<PositionGroup, Int32Array>();
+    for (const group of POSITION_GROUPS) {
+      const r = rows.get(group);
+      if (r) ordered.set(group, r);
+    }
+    return { rows: ordered, weights, skipped };
+  };
+  const single = await profileAndWrite((kind) => {
+    if (!roster) throw new Error('internal: the roster was let go before the single seasons');
+    return buildKindProfiles(roster, profileOptions, [kind]);
+  }, 1, () => {});
   // the windows take the single seasons' default weights: only those are kept of the single profiles
-  const weights = { groups: new Map([...single.groups].map(([group, g]) => [group, { reliability: g.reliability, redundancy: g.redundancy }])) };
-  await writeGroups(single.groups, 1, playerIndex, levels);
+  const weights = { groups: single.weights };
   // The outcomes are the last use of the roster's season lines, and the players file needs none of them
   // (players, contracts and levels only): both are taken now, so that the lines can go before the last window's profiles.
   await writer.add(OUTCOMES_FILE, encodeOutcomesFile(computeOutcomes(roster)));
@@ -155,14 +187,24 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
       roster = null;
       collectGarbage();
     }
-    const profiled = profileWindowRoster(combined, profileOptions, weights);
-    combined = null; // the window lines are garbage once profiled, before the groups are written
-    const set = profileSet(profiled, playerIndex);
-    windowRows.set(size, set.rows);
-    await writeGroups(set.groups, size, playerIndex, levels);
+    const profiled = await profileAndWrite((kind) => {
+      if (!combined) throw new Error('internal: the window lines were let go before their profiles');
+      return profileWindowRoster(combined, profileOptions, weights, [kind]);
+    }, size, () => {
+      combined = null; // the window lines are garbage once profiled, before the last groups are written
+    });
+    windowRows.set(size, profiled.rows);
   }
   await writer.add(PLAYERS_FILE, encodePlayersFile(people, single.rows, windowRows));
   return { ...summary, skipped: single.skipped, windows: windowSizes.length };
+}
+
+/** What profileAndWrite keeps of a set of groups once they are written. */
+interface ProfiledKinds {
+  /** Each group's rows as player store indices, in POSITION_GROUPS order. */
+  readonly rows: ReadonlyMap<PositionGroup, Int32Array>;
+  readonly weights: ReadonlyMap<PositionGroup, { readonly reliability: Float64Array; readonly redundancy: Float64Array }>;
+  readonly skipped: ProfileSet['skipped'];
 }
 
 /**
@@ -268,8 +310,8 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
         index: indexParams,
         space: embed.method === 'none' ? 'input' : embed.method,
         ...(embed.method === 'none' ? {} : { embedding: settingsRecord(embed) }),
-        groups: counts,
-        ...(read.windows > 0 ? { windows: windowCounts } : {}),
+        groups: inGroupOrder(counts),
+        ...(read.windows > 0 ? { windows: windowsInGroupOrder(windowCounts) } : {}),
       });
     } catch (error) {
       await staged.discard();
@@ -290,12 +332,26 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
     rejected: read.rejected,
     rejectsPath: read.rejectsPath,
     notices: read.notices,
-    profiles: counts,
-    ...(Object.keys(windowCounts).length > 0 ? { windows: windowCounts } : {}),
+    profiles: inGroupOrder(counts),
+    ...(Object.keys(windowCounts).length > 0 ? { windows: windowsInGroupOrder(windowCounts) } : {}),
     skipped: read.skipped,
     seconds: (performance.now() - started) / 1000,
     ...(embed.method === 'none' ? {} : { embedding: { space: embed.method, groups: embedded, chartsDir: chartsFolderOf(storeDir) } }),
   };
+}
+
+/** Counts per group with the groups in POSITION_GROUPS order (the pitchers' groups are written first). */
+function inGroupOrder(counts: Readonly<Partial<Record<PositionGroup, number>>>): Partial<Record<PositionGroup, number>> {
+  const out: Partial<Record<PositionGroup, number>> = {};
+  for (const group of POSITION_GROUPS) {
+    const n = counts[group];
+    if (n !== undefined) out[group] = n;
+  }
+  return out;
+}
+
+function windowsInGroupOrder(windows: Readonly<Record<string, Readonly<Partial<Record<PositionGroup, number>>>>>): Record<string, Partial<Record<PositionGroup, number>>> {
+  return Object.fromEntries(Object.entries(windows).map(([size, counts]) => [size, inGroupOrder(counts)]));
 }
 
 /** sha256 of a group's three embedding files, for its group file (src/store/groupFile.ts). */

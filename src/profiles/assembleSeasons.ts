@@ -33,28 +33,35 @@ export interface AssembledSeasons {
   readonly skipped: { readonly hittersBelowMinimum: number; readonly pitchersBelowMinimum: number; readonly pitchersBatting: number };
 }
 
+/** The lines a profile kind is made of: hitters (batting and fielding) or pitchers (pitching). */
+export type ProfileKind = 'hitters' | 'pitchers';
+
+export const PROFILE_KINDS: readonly ProfileKind[] = ['hitters', 'pitchers'];
+
 const FIELD_ORDER = ['C', 'SS', '2B', 'CF', '3B', 'RF', 'LF', '1B'];
 
 const keyOf = (playerId: string, season: number, level: string): string => `${playerId}\u0000${season}\u0000${level}`;
 
 /**
- * Turns the roster's lines into one hitter line and/or one pitcher line per player, season and level.
+ * Turns the roster's lines into one hitter line and/or one pitcher line per player, season and level
+ * (only those of `kinds`: the other kind's lines are left empty and its skipped counts 0).
  * - A season's position is the fielding position with the most innings (ties: the more demanding
  *   position first, C, SS, 2B, CF, 3B, RF, LF, 1B); a hitter with no fielding row is DH.
  * - A pitcher is SP when at least half his games are starts, RP otherwise.
  * - A player with both lines at one level is profiled as a pitcher, and also as a hitter only when his
  *   plate appearances reach his batters faced (a true two-way season).
  */
-export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAULT_MINIMUMS): AssembledSeasons {
+export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAULT_MINIMUMS, kinds: readonly ProfileKind[] = PROFILE_KINDS): AssembledSeasons {
+  const withHitters = kinds.includes('hitters');
   const fieldingByKey = new Map<string, FieldingSeason[]>();
-  for (const f of roster.fielding) {
+  for (const f of withHitters ? roster.fielding : []) {
     const key = keyOf(f.playerId, f.season, f.level);
     const list = fieldingByKey.get(key);
     if (list) list.push(f);
     else fieldingByKey.set(key, [f]);
   }
   const pitchingByKey = new Map<string, PitchingSeason>();
-  for (const p of roster.pitching) pitchingByKey.set(keyOf(p.playerId, p.season, p.level), p);
+  if (withHitters) for (const p of roster.pitching) pitchingByKey.set(keyOf(p.playerId, p.season, p.level), p);
 
   const ageOf = (playerId: string, season: number): number | null => {
     const birth = roster.players.get(playerId)?.birthDate;
@@ -64,7 +71,7 @@ export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAU
   const hitters: { meta: SeasonMeta; line: HitterLine }[] = [];
   let hittersBelowMinimum = 0;
   let pitchersBatting = 0;
-  for (const b of roster.batting) {
+  for (const b of withHitters ? roster.batting : []) {
     if (b.PA < minimums.minPa) {
       hittersBelowMinimum++;
       continue;
@@ -93,7 +100,7 @@ export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAU
 
   const pitchers: { meta: SeasonMeta; line: PitchingSeason }[] = [];
   let pitchersBelowMinimum = 0;
-  for (const p of roster.pitching) {
+  for (const p of kinds.includes('pitchers') ? roster.pitching : []) {
     if (p.BF < minimums.minBf) {
       pitchersBelowMinimum++;
       continue;

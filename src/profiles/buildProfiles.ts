@@ -1,7 +1,7 @@
 import type { Roster } from '../ingest/Roster.ts';
 import type { Dimension, DimensionInfo, LeagueContext } from './Dimension.ts';
 import { describeDimension } from './Dimension.ts';
-import { assembleSeasons, DEFAULT_MINIMUMS, type AssembledSeasons, type SampleMinimums, type SeasonMeta } from './assembleSeasons.ts';
+import { assembleSeasons, DEFAULT_MINIMUMS, PROFILE_KINDS, type AssembledSeasons, type ProfileKind, type SampleMinimums, type SeasonMeta } from './assembleSeasons.ts';
 import { measureDimensions, type MeasuredColumn } from './measureDimensions.ts';
 import { DEFAULT_SHRINKAGE, type ShrinkageOptions, type ShrinkageUsed } from './shrinkage.ts';
 import { standardiseByStratum, DEFAULT_STANDARDISE, type StandardiseOptions, type StratumStats } from './standardiseByStratum.ts';
@@ -77,7 +77,24 @@ function dimensionDefs(group: PositionGroup): readonly Dimension<never>[] {
  * standardise within season, level and group (or position), and weigh redundancy.
  */
 export function buildProfiles(roster: Roster, options: ProfileOptions = DEFAULT_PROFILE_OPTIONS): ProfileSet {
-  const seasons = assembleSeasons(roster, options.minimums);
+  return profileRoster(roster, options, new Map(), PROFILE_KINDS);
+}
+
+/**
+ * buildProfiles for the groups of some kinds only (hitters: C, IF, OF, DH; pitchers: SP, RP), each the same
+ * as buildProfiles makes it: hitters and pitchers are measured against leagues of their own kind, so the
+ * build can profile the pitchers, hand their groups on, then profile the hitters.
+ */
+export function buildKindProfiles(roster: Roster, options: ProfileOptions, kinds: readonly ProfileKind[]): ProfileSet {
+  return profileRoster(roster, options, new Map(), kinds);
+}
+
+/** Default weights taken as given for some groups instead of computed from their profiles. */
+type GivenWeights = ReadonlyMap<PositionGroup, Pick<GroupProfiles, 'reliability' | 'redundancy'>>;
+
+/** buildProfiles of `kinds`, with the default weights of the groups in `given` taken from there (not computed). */
+function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeights, kinds: readonly ProfileKind[]): ProfileSet {
+  const seasons = assembleSeasons(roster, options.minimums, kinds);
   const groups = new Map<PositionGroup, GroupProfiles>();
 
   const hitterLines = seasons.hitters.map((h) => h.line);
@@ -93,7 +110,7 @@ export function buildProfiles(roster: Roster, options: ProfileOptions = DEFAULT_
 
   const pitcherLines = seasons.pitchers.map((p) => p.line);
   const pitcherMeta = seasons.pitchers.map((p) => p.meta);
-  const constants = fipConstants(roster);
+  const constants = kinds.includes('pitchers') ? fipConstants(roster) : new Map<string, number>();
   const pitcherCols = measureDimensions(PITCHER_DIMENSIONS, {
     lines: pitcherLines,
     leagueKey: (i, scope) => leagueKey(pitcherMeta[i] as SeasonMeta, scope),
@@ -107,12 +124,13 @@ export function buildProfiles(roster: Roster, options: ProfileOptions = DEFAULT_
 
   for (const group of POSITION_GROUPS) {
     const pitcher = group === 'SP' || group === 'RP';
+    if (!kinds.includes(pitcher ? 'pitchers' : 'hitters')) continue;
     const meta = pitcher ? pitcherMeta : hitterMeta;
     const cols = pitcher ? pitcherCols : hitterCols;
     const rows: number[] = [];
     for (let i = 0; i < meta.length; i++) if (groupOf((meta[i] as SeasonMeta).position) === group) rows.push(i);
     if (rows.length === 0) continue;
-    groups.set(group, assembleGroup(group, rows, meta, cols, options.standardise));
+    groups.set(group, assembleGroup(group, rows, meta, cols, options.standardise, given.get(group)));
   }
   return { groups, skipped: seasons.skipped };
 }
@@ -137,26 +155,23 @@ export function buildWindowProfiles(
 
 /**
  * buildWindowProfiles on a roster already combined into windows (windowRoster), so that a caller can let
- * the roster of single seasons go before the window profiles are built (the build does, for its last window).
+ * the roster of single seasons go before the window profiles are built (the build does, for its last window);
+ * with `kinds`, only the groups of those kinds (as buildKindProfiles).
  */
 export function profileWindowRoster(
   wr: WindowRoster,
   options: ProfileOptions,
   single: { readonly groups: ReadonlyMap<PositionGroup, Pick<GroupProfiles, 'reliability' | 'redundancy'>> },
+  kinds: readonly ProfileKind[] = PROFILE_KINDS,
 ): ProfileSet {
   const window = wr.window;
-  if (window === 1) return buildProfiles(wr.roster, options);
-  const built = buildProfiles(wr.roster, options);
+  if (window === 1) return profileRoster(wr.roster, options, new Map(), kinds);
+  // the single seasons' weights are taken as they are, so the windows' own are not computed
+  const built = profileRoster(wr.roster, options, single.groups, kinds);
   const groups = new Map<PositionGroup, GroupProfiles>();
   for (const [group, g] of built.groups) {
-    const one = single.groups.get(group);
     const first = Int32Array.from(g.meta, (m) => wr.firstSeason.get(windowKey(m.playerId, m.season, m.level)) ?? m.season);
-    groups.set(group, {
-      ...g,
-      reliability: one ? one.reliability : g.reliability,
-      redundancy: one ? one.redundancy : g.redundancy,
-      window: { size: window, first },
-    });
+    groups.set(group, { ...g, window: { size: window, first } });
   }
   return { groups, skipped: built.skipped };
 }
@@ -176,6 +191,7 @@ function assembleGroup(
   allMeta: readonly SeasonMeta[],
   cols: ReadonlyMap<string, MeasuredColumn>,
   standardise: StandardiseOptions,
+  given: Pick<GroupProfiles, 'reliability' | 'redundancy'> | undefined,
 ): GroupProfiles {
   const dims = dimensionsOf(group);
   const n = rows.length;
@@ -183,7 +199,8 @@ function assembleGroup(
   const meta = rows.map((i) => allMeta[i] as SeasonMeta);
   const raw = new Float32Array(n * d);
   const z = new Float32Array(n * d);
-  const z64 = new Float64Array(n * d);
+  // the weights' input, only when they are computed here
+  const z64 = given ? null : new Float64Array(n * d);
   const strata = new Map<string, ReadonlyMap<string, StratumStats>>();
   const shrinkage = new Map<string, ReadonlyMap<string, ShrinkageUsed>>();
   const seen = new Set<string>();
@@ -210,13 +227,14 @@ function assembleGroup(
     for (let r = 0; r < n; r++) {
       const v = st.z[r] as number;
       z[r * d + j] = v;
-      z64[r * d + j] = v;
+      if (z64) z64[r * d + j] = v;
     }
     strata.set(dim.name, st.strata);
   });
   const ids = new Map<string, number>();
   const playerNumber = (id: string): number => ids.get(id) ?? ids.set(id, ids.size).size - 1;
-  const w = defaultWeights(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season), dims.map((dim) => dim.family));
+  const w = z64 ? defaultWeights(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season), dims.map((dim) => dim.family)) : given;
+  if (!w) throw new Error(`internal: no default weights for ${group}`);
   return { group, dims, meta, raw, z, strata, reliability: w.reliability, redundancy: w.redundancy, shrinkage };
 }
 
