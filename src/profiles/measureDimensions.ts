@@ -43,24 +43,35 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
   const n = input.lines.length;
   const options = input.shrinkage ?? DEFAULT_SHRINKAGE;
   const out = new Map<string, MeasuredColumn>();
-  // each line's league stratum key per scope, made once (not once per dimension and pass)
-  const keysByScope = new Map<'group' | 'position', readonly string[]>();
-  const keysOf = (scope: 'group' | 'position'): readonly string[] => {
-    let keys = keysByScope.get(scope);
-    if (!keys) keysByScope.set(scope, (keys = Array.from({ length: n }, (_, i) => input.leagueKey(i, scope))));
-    return keys;
+  // each line's league stratum per scope, made once (not once per dimension and pass): its key, and a
+  // number per stratum (in the order of first appearance) that the passes below index arrays by
+  const strataByScope = new Map<'group' | 'position', LineStrata>();
+  const strataOf = (scope: 'group' | 'position'): LineStrata => {
+    let strata = strataByScope.get(scope);
+    if (!strata) strataByScope.set(scope, (strata = lineStrata(n, (i) => input.leagueKey(i, scope))));
+    return strata;
   };
   for (const dim of dims) {
     const raw = new Float64Array(n).fill(NaN);
     const regressed = new Float64Array(n).fill(NaN);
     const m = dim.measure;
     const shrinkage = new Map<string, ShrinkageUsed>();
-    const keys = m.kind === 'derived' ? [] : keysOf(dim.scope);
+    if (m.kind === 'derived') {
+      out.set(dim.name, { raw, regressed, shrinkage });
+      continue;
+    }
+    const { of: stratumOf, keys } = strataOf(dim.scope);
+    const count = keys.length;
+    // per stratum: whether a line has added to it yet, and its totals (each started by its first line's
+    // values and added to in line order, as a running sum over the lines)
+    const seen = new Uint8Array(count);
+    const sumA = new Float64Array(count);
+    const sumB = new Float64Array(count);
+    /** The strata in the order their first contributing line comes (the order `shrinkage` lists them). */
+    const order: number[] = [];
     if (m.kind === 'rate') {
       const num = new Float64Array(n).fill(NaN);
       const den = new Float64Array(n).fill(NaN);
-      const totals = new Map<string, [number, number]>();
-      const members = new Map<string, number[]>();
       for (let i = 0; i < n; i++) {
         const line = input.lines[i] as L;
         const a = m.numerator(line);
@@ -68,55 +79,46 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
         if (!usable(a) || !usable(b) || b <= 0) continue;
         num[i] = a;
         den[i] = b;
-        const key = keys[i] as string;
-        const t = totals.get(key);
-        if (t) {
-          t[0] += a;
-          t[1] += b;
-          (members.get(key) as number[]).push(i);
+        const st = stratumOf[i] as number;
+        if (seen[st] === 1) {
+          sumA[st] = (sumA[st] as number) + a;
+          sumB[st] = (sumB[st] as number) + b;
         } else {
-          totals.set(key, [a, b]);
-          members.set(key, [i]);
+          seen[st] = 1;
+          sumA[st] = a;
+          sumB[st] = b;
+          order.push(st);
         }
       }
       if (m.stabilisation > 0) {
-        // each stratum's sample, made once (a stratum is in the era of each of its neighbours)
-        const samples = new Map<readonly number[], RateSample>();
-        const sample = (rows: readonly number[]): RateSample => {
-          let s = samples.get(rows);
-          if (!s) samples.set(rows, (s = { successes: rows.map((i) => num[i] as number), trials: rows.map((i) => den[i] as number) }));
-          return s;
-        };
-        const eras = new Map<string, { season: number; rows: readonly number[] }[]>();
-        const eraOfKey = new Map<string, { key: string; season: number }>();
-        for (const [key, rows] of members) {
-          const era = input.eraOf ? input.eraOf(rows[0] as number, dim.scope) : { key, season: 0 };
-          eraOfKey.set(key, era);
-          const list = eras.get(era.key);
-          if (list) list.push({ season: era.season, rows });
-          else eras.set(era.key, [{ season: era.season, rows }]);
+        if (options.fit && m.binomial) {
+          fitShrinkage(shrinkage, { n, num, stratumOf, keys, order, sumA, sumB, den }, m.stabilisation, dim.scope, input, options);
+        } else {
+          // shrinkageFor gives the table's k without looking at the samples when it does not fit
+          for (const st of order) shrinkage.set(keys[st] as string, shrinkageFor([], (sumA[st] as number) / (sumB[st] as number), m.stabilisation, m.binomial, options));
         }
-        for (const [key, rows] of members) {
-          const era = eraOfKey.get(key) as { key: string; season: number };
-          const near = (eras.get(era.key) ?? []).filter((e) => Math.abs(e.season - era.season) <= options.eraSeasons);
-          const t = totals.get(key) as [number, number];
-          shrinkage.set(key, shrinkageFor(near.map((e) => sample(e.rows)), t[0] / t[1], m.stabilisation, m.binomial, options));
+      }
+      // each stratum's k, when it has one
+      const kOf = new Float64Array(count);
+      const hasK = new Uint8Array(count);
+      for (const st of order) {
+        const used = shrinkage.get(keys[st] as string);
+        if (used) {
+          kOf[st] = used.k;
+          hasK[st] = 1;
         }
       }
       for (let i = 0; i < n; i++) {
         const a = num[i] as number;
         const b = den[i] as number;
         if (Number.isNaN(a)) continue;
-        const key = keys[i] as string;
-        const t = totals.get(key) as [number, number];
+        const st = stratumOf[i] as number;
         raw[i] = a / b;
-        const used = shrinkage.get(key);
-        regressed[i] = used ? regressToMean(a, b, t[0] / t[1], used.k) : a / b;
+        regressed[i] = hasK[st] === 1 ? regressToMean(a, b, (sumA[st] as number) / (sumB[st] as number), kOf[st] as number) : a / b;
       }
     } else if (m.kind === 'mean') {
       const vals = new Float64Array(n).fill(NaN);
       const evs = new Float64Array(n).fill(NaN);
-      const totals = new Map<string, [number, number]>();
       for (let i = 0; i < n; i++) {
         const line = input.lines[i] as L;
         const v = m.value(line);
@@ -125,23 +127,29 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
         const e = m.events(line);
         if (!usable(e) || e <= 0) continue;
         evs[i] = e;
-        const key = keys[i] as string;
-        const t = totals.get(key);
-        if (t) {
-          t[0] += v * e;
-          t[1] += e;
-        } else totals.set(key, [v * e, e]);
+        const st = stratumOf[i] as number;
+        if (seen[st] === 1) {
+          sumA[st] = (sumA[st] as number) + v * e;
+          sumB[st] = (sumB[st] as number) + e;
+        } else {
+          seen[st] = 1;
+          sumA[st] = v * e;
+          sumB[st] = e;
+        }
       }
+      const k = m.stabilisation * options.tableScale;
       for (let i = 0; i < n; i++) {
         const v = vals[i] as number;
         if (Number.isNaN(v)) continue;
         raw[i] = v;
         const e = evs[i] as number;
-        const key = keys[i] as string;
-        const t = totals.get(key);
-        const k = m.stabilisation * options.tableScale;
-        if (m.stabilisation > 0 && t && !shrinkage.has(key)) shrinkage.set(key, { k, table: k, source: 'table', players: 0 });
-        regressed[i] = m.stabilisation > 0 && !Number.isNaN(e) && t ? regressAverageToMean(v, e, t[0] / t[1], k) : v;
+        const st = stratumOf[i] as number;
+        const has = seen[st] === 1;
+        if (m.stabilisation > 0 && has) {
+          const key = keys[st] as string;
+          if (!shrinkage.has(key)) shrinkage.set(key, { k, table: k, source: 'table', players: 0 });
+        }
+        regressed[i] = m.stabilisation > 0 && !Number.isNaN(e) && has ? regressAverageToMean(v, e, (sumA[st] as number) / (sumB[st] as number), k) : v;
       }
     }
     out.set(dim.name, { raw, regressed, shrinkage });
@@ -170,4 +178,75 @@ export function measureDimensions<L>(dims: readonly Dimension<L>[], input: Measu
     out.set(dim.name, { raw, regressed, shrinkage: new Map() });
   }
   return out;
+}
+
+/** Each line's league stratum as a number, and each number's key (numbered in order of first appearance). */
+interface LineStrata {
+  readonly of: Int32Array;
+  readonly keys: readonly string[];
+}
+
+function lineStrata(n: number, keyOf: (i: number) => string): LineStrata {
+  const of = new Int32Array(n);
+  const ids = new Map<string, number>();
+  const keys: string[] = [];
+  for (let i = 0; i < n; i++) {
+    const key = keyOf(i);
+    let id = ids.get(key);
+    if (id === undefined) {
+      id = keys.length;
+      ids.set(key, id);
+      keys.push(key);
+    }
+    of[i] = id;
+  }
+  return { of, keys };
+}
+
+/**
+ * Fits k per league stratum of a binomial rate (shrinkageFor) over the stratum's era: the strata of the
+ * same era key (level, plus position for fielding) within `eraSeasons` seasons, each a sample of its own
+ * lines (successes and trials in line order).
+ */
+function fitShrinkage<L>(
+  shrinkage: Map<string, ShrinkageUsed>,
+  lines: {
+    readonly n: number;
+    readonly num: Float64Array;
+    readonly den: Float64Array;
+    readonly stratumOf: Int32Array;
+    readonly keys: readonly string[];
+    readonly order: readonly number[];
+    readonly sumA: Float64Array;
+    readonly sumB: Float64Array;
+  },
+  stabilisation: number,
+  scope: 'group' | 'position',
+  input: MeasureInput<L>,
+  options: ShrinkageOptions,
+): void {
+  const members = new Map<number, number[]>(lines.order.map((st) => [st, []]));
+  for (let i = 0; i < lines.n; i++) if (!Number.isNaN(lines.num[i] as number)) members.get(lines.stratumOf[i] as number)?.push(i);
+  const samples = new Map<number, RateSample>();
+  const sample = (st: number, rows: readonly number[]): RateSample => {
+    let s = samples.get(st);
+    if (!s) samples.set(st, (s = { successes: rows.map((i) => lines.num[i] as number), trials: rows.map((i) => lines.den[i] as number) }));
+    return s;
+  };
+  const eras = new Map<string, { st: number; season: number; rows: readonly number[] }[]>();
+  const eraOfStratum = new Map<number, { key: string; season: number }>();
+  for (const [st, rows] of members) {
+    const key = lines.keys[st] as string;
+    const era = input.eraOf ? input.eraOf(rows[0] as number, scope) : { key, season: 0 };
+    eraOfStratum.set(st, era);
+    const list = eras.get(era.key);
+    if (list) list.push({ st, season: era.season, rows });
+    else eras.set(era.key, [{ st, season: era.season, rows }]);
+  }
+  for (const st of members.keys()) {
+    const era = eraOfStratum.get(st) as { key: string; season: number };
+    const near = (eras.get(era.key) ?? []).filter((e) => Math.abs(e.season - era.season) <= options.eraSeasons);
+    const rate = (lines.sumA[st] as number) / (lines.sumB[st] as number);
+    shrinkage.set(lines.keys[st] as string, shrinkageFor(near.map((e) => sample(e.st, e.rows)), rate, stabilisation, true, options));
+  }
 }
