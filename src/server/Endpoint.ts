@@ -5,6 +5,17 @@ import type { StoreHolder } from './StoreHolder.ts';
 export interface EndpointContext {
   readonly holder: StoreHolder;
   readonly query: URLSearchParams;
+  /** A store endpoint's answer as the server gives it (from the cache, the answer workers or this thread), as JSON text. */
+  readonly storeAnswer: (path: string, query: string) => Promise<JsonText>;
+}
+
+/** An answer already serialised: sent as it is. */
+export class JsonText {
+  readonly text: string;
+
+  constructor(text: string) {
+    this.text = text;
+  }
 }
 
 /**
@@ -18,7 +29,7 @@ export interface StoreEndpoint {
   readonly answer: (loaded: LoadedStore, query: URLSearchParams) => unknown;
 }
 
-/** An endpoint answered on the server's own thread, not cached (reload, info, players, map, dims). */
+/** An endpoint answered on the server's own thread, not cached (reload, dims); a JsonText answer is sent as it is. */
 export interface ServerEndpoint {
   readonly methods: readonly ('GET' | 'POST')[];
   readonly cacheable: false;

@@ -9,7 +9,7 @@ import { SECURITY_HEADERS } from './securityHeaders.ts';
 import { loadStaticFiles, type StaticFile } from './staticFiles.ts';
 import { StoreHolder, type StoreLoader } from './StoreHolder.ts';
 import type { LoadedStore } from './LoadedStore.ts';
-import type { Endpoint } from './Endpoint.ts';
+import { JsonText, type Endpoint } from './Endpoint.ts';
 import { API_ENDPOINTS } from './apiEndpoints.ts';
 import { cacheKey } from './AnswerCache.ts';
 import { TurnQueue } from './TurnQueue.ts';
@@ -114,6 +114,20 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
   const pool = workers > 0 ? await AnswerPool.start(workers, holder.current, holder.dir, inThread, log) : undefined;
   if (pool) holder.attach(pool);
 
+  /**
+   * A store endpoint's answer: from the current store's cache, else computed (by a worker or here) and
+   * kept only in the cache of the store it was computed from, and only while that store is current.
+   */
+  async function storeAnswer(path: string, query: string): Promise<JsonText> {
+    const key = cacheKey(path, new URLSearchParams(query));
+    const hit = holder.current.answers.get(key);
+    if (hit !== undefined) return new JsonText(hit);
+    const fresh = await (pool ? pool.run(path, query) : inThread(path, query));
+    const loaded = holder.current;
+    if (loaded.generation === fresh.generation) loaded.answers.set(key, fresh.text);
+    return new JsonText(fresh.text);
+  }
+
   const server = http.createServer(
     {
       maxHeaderSize: limits.maxHeaderBytes,
@@ -151,21 +165,11 @@ export async function createServer(options: ServerOptions): Promise<RunningServe
         const ok = allowed.includes(method) || (method === 'HEAD' && allowed.includes('GET'));
         if (!ok) throw new HttpError(405, 'kindred.http.methodNotAllowed', `${path} takes ${allowed.join(', ')}, not ${method}`, { Allow: allowed.join(', ') });
         if (!endpoint.cacheable) {
-          sendJson(res, method, 200, JSON.stringify(await endpoint.answer({ holder, query })));
+          const out = await endpoint.answer({ holder, query, storeAnswer });
+          sendJson(res, method, 200, out instanceof JsonText ? out.text : JSON.stringify(out));
           return;
         }
-        const key = cacheKey(path, query);
-        const hit = holder.current.answers.get(key);
-        if (hit !== undefined) {
-          sendJson(res, method, 200, hit);
-          return;
-        }
-        const raw = q < 0 ? '' : target.slice(q + 1);
-        const fresh = await (pool ? pool.run(path, raw) : inThread(path, raw));
-        // kept only in the cache of the store it was computed from, and only while that store is current
-        const loaded = holder.current;
-        if (loaded.generation === fresh.generation) loaded.answers.set(key, fresh.text);
-        sendJson(res, method, 200, fresh.text);
+        sendJson(res, method, 200, (await storeAnswer(path, q < 0 ? '' : target.slice(q + 1))).text);
         return;
       }
       if (path.startsWith('/api/')) throw new HttpError(404, 'kindred.http.notFound', `no endpoint ${path}; known: ${[...API_ENDPOINTS.keys()].join(', ')}`);

@@ -6,7 +6,7 @@ import { noParameters } from '../../request/readRequest.ts';
 import { defaultOf } from '../../request/parameters.ts';
 
 export type { StoreInfo } from '../../request/apiContract.ts';
-import type { ServerEndpoint } from '../Endpoint.ts';
+import type { StoreEndpoint } from '../Endpoint.ts';
 
 /** A reach in JSON: a whole number, or null for no limit (the parameter's `all`). */
 const limit = (n: number | undefined): number | null => (n === undefined || !Number.isFinite(n) ? null : n);
@@ -52,8 +52,9 @@ export function answerInfo(loaded: LoadedStore, query: URLSearchParams): StoreIn
   };
 }
 
-export const infoEndpoint: ServerEndpoint = {
+/** A store endpoint: the summary is fixed per loaded store (its generation and load time included), so it is cached and computed with the answers. */
+export const infoEndpoint: StoreEndpoint = {
   methods: ['GET'],
-  cacheable: false,
-  answer: ({ holder, query }) => answerInfo(holder.current, query),
+  cacheable: true,
+  answer: answerInfo,
 };

@@ -4,7 +4,7 @@ import { POSITION_GROUPS } from '../../profiles/positionGroup.ts';
 import type { PoolMap } from '../../request/apiContract.ts';
 import { readRequest } from '../../request/readRequest.ts';
 import type { LoadedStore } from '../LoadedStore.ts';
-import type { ServerEndpoint } from '../Endpoint.ts';
+import type { StoreEndpoint } from '../Endpoint.ts';
 
 /** `GET /api/map?group=G`: the pool of a position group on its first two principal components (cached per store). */
 export function answerMap(loaded: LoadedStore, query: URLSearchParams): PoolMap {
@@ -16,8 +16,8 @@ export function answerMap(loaded: LoadedStore, query: URLSearchParams): PoolMap 
   return m;
 }
 
-export const mapEndpoint: ServerEndpoint = {
+export const mapEndpoint: StoreEndpoint = {
   methods: ['GET'],
-  cacheable: false,
-  answer: ({ holder, query }) => answerMap(holder.current, query),
+  cacheable: true,
+  answer: answerMap,
 };

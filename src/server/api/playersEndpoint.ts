@@ -3,7 +3,7 @@ import { searchPlayers } from '../../query/resolvePlayer.ts';
 import type { PlayerHit, PlayerSeason } from '../../request/apiContract.ts';
 import { readRequest } from '../../request/readRequest.ts';
 import type { LoadedStore } from '../LoadedStore.ts';
-import type { ServerEndpoint } from '../Endpoint.ts';
+import type { StoreEndpoint } from '../Endpoint.ts';
 
 export type { PlayerHit, PlayerSeason } from '../../request/apiContract.ts';
 
@@ -38,8 +38,8 @@ export function answerPlayers(loaded: LoadedStore, query: URLSearchParams): { pl
   return { players };
 }
 
-export const playersEndpoint: ServerEndpoint = {
+export const playersEndpoint: StoreEndpoint = {
   methods: ['GET'],
-  cacheable: false,
-  answer: ({ holder, query }) => answerPlayers(holder.current, query),
+  cacheable: true,
+  answer: answerPlayers,
 };

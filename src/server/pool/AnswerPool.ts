@@ -52,7 +52,8 @@ const HEALTHY_MS = 10_000;
 
 /**
  * Worker threads computing the uncached answers of store endpoints (comps, prospect, cheaper, match,
- * backtest) while the server's thread does HTTP and the answer cache. Each worker opens every store
+ * backtest, players, map, info) while the server's thread does HTTP and the answer cache, and never
+ * reads a group itself. Each worker opens every store
  * build the server serves from the store folder itself (lazily: the players at once, a group when
  * first asked for) and answers from the build a request was given, so an answer never mixes builds:
  * - a request gets the current generation when it is handed to a worker (queued ones wait here);
@@ -260,7 +261,7 @@ export class AnswerPool implements StoreSwitch {
 
 /** The pool's name for a loaded store: its generation, folder and manifest. */
 function poolStoreOf(loaded: LoadedStore, dir: string): PoolStore {
-  return { generation: loaded.generation, dir, manifest: JSON.stringify(loaded.store.opened.manifest) };
+  return { generation: loaded.generation, dir, manifest: JSON.stringify(loaded.store.opened.manifest), loadedAt: loaded.loadedAt.toISOString() };
 }
 
 /**

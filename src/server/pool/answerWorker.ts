@@ -38,7 +38,7 @@ async function open(store: PoolStore): Promise<void> {
   if (JSON.stringify(served.store.opened.manifest) !== store.manifest) {
     throw new StoreError('kindred.store.corrupt', `${store.dir} changed between the server's open and an answer thread's; try the reload again when the build is done`, { dir: store.dir });
   }
-  const loaded = new LoadedStore(served, store.generation, 0);
+  const loaded = new LoadedStore(served, store.generation, 0, new Date(store.loadedAt));
   stores.set(store.generation, loaded);
   latest = loaded;
 }

@@ -1,11 +1,13 @@
 import type { ErrorCode, ErrorContext } from '../../errors/KindredError.ts';
 import type { ErrorResponse } from '../errorResponse.ts';
 
-/** A store build as the pool names it: the server's generation, its folder and its manifest (as JSON text). */
+/** A store build as the pool names it: the server's generation, its folder, its manifest (as JSON text) and when the server loaded it. */
 export interface PoolStore {
   readonly generation: number;
   readonly dir: string;
   readonly manifest: string;
+  /** ISO time: `/api/info` tells it (a worker's copy says when the server loaded the store, not when the worker did). */
+  readonly loadedAt: string;
 }
 
 /** What the server's thread asks a worker. */

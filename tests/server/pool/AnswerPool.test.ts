@@ -26,10 +26,10 @@ function requestPaths(store: ProfileStore): string[] {
       if (!p || !other) continue;
       const q = new URLSearchParams({ player: p.playerId, season: String(g.season[row]), level: store.levels[g.level[row] ?? -1] ?? '', position: g.position[row] ?? 'DH' });
       out.push(`/api/comps?${q.toString()}`);
-      if (i === 0) out.push(`/api/comps?player=${p.playerId}&k=25&exact`, `/api/prospect?player=${p.playerId}`, `/api/cheaper?player=${p.playerId}&max-salary=2000000`, `/api/match?player=${p.playerId}&candidate=${other.playerId}`);
+      if (i === 0) out.push(`/api/map?group=${g.group}`, `/api/players?q=${encodeURIComponent(p.name.slice(0, 4))}`, `/api/comps?player=${p.playerId}&k=25&exact`, `/api/prospect?player=${p.playerId}`, `/api/cheaper?player=${p.playerId}&max-salary=2000000`, `/api/match?player=${p.playerId}&candidate=${other.playerId}`);
     }
   }
-  out.push('/api/comps?want=obp%3D60g&position=SS', '/api/comps?player=nobody', '/api/comps?k=0', '/api/comps?player=p000202&bogus=1', '/api/prospect?player=nobody');
+  out.push('/api/info', '/api/map?group=hitters', '/api/players?q=zz', '/api/comps?want=obp%3D60g&position=SS', '/api/comps?player=nobody', '/api/comps?k=0', '/api/comps?player=p000202&bogus=1', '/api/prospect?player=nobody');
   return out;
 }
 
@@ -39,9 +39,11 @@ interface Answer {
   readonly text: string;
 }
 
+/** The answer to `path`; `/api/info` without its load time (each server loaded its store at its own time). */
 async function get(srv: RunningServer, path: string): Promise<Answer> {
   const r = await fetch(new URL(path, srv.url));
-  return { status: r.status, type: r.headers.get('content-type'), text: await r.text() };
+  const text = await r.text();
+  return { status: r.status, type: r.headers.get('content-type'), text: path === '/api/info' ? text.replace(/"loaded_at":"[^"]*"/, '"loaded_at":""') : text };
 }
 
 /** Points the symlink `link` at `target` in one step (a new link renamed over the old). */
@@ -90,6 +92,12 @@ describe('AnswerPool: worker threads answering store endpoints', () => {
       const statuses = new Set(got.map((a) => a.status));
       expect([...statuses].sort(), 'answers and refusals both compared').toEqual([200, 400, 404]);
       got.forEach((a, i) => expect(a, paths[i]).toEqual(expectedA.get(paths[i] ?? '')));
+      const reloaded = await fetch(new URL('/api/reload', srv.url), { method: 'POST' });
+      expect(reloaded.status).toBe(200);
+      expect(JSON.parse(await reloaded.text())).toMatchObject({ generation: 2 });
+      const opened = srv.holder.current.store.opened;
+      const groupFiles = Object.keys(opened.manifest.files).filter((f) => f.startsWith('group-'));
+      expect(groupFiles.filter((f) => opened.reads(f) > 0), 'the server\'s thread read no group: the workers did').toEqual([]);
     } finally {
       await srv.close();
     }
@@ -98,7 +106,8 @@ describe('AnswerPool: worker threads answering store endpoints', () => {
   it('switches all workers at a reload: under load every answer is wholly one build, and after the reload only the new one (cached or not)', async () => {
     const link = join(root, 'live');
     await pointAt(link, storeA);
-    const differ = paths.filter((p) => expectedA.get(p)?.text !== expectedB.get(p)?.text);
+    // (not /api/info: it names the generation, which every reload changes)
+    const differ = paths.filter((p) => p !== '/api/info' && expectedA.get(p)?.text !== expectedB.get(p)?.text);
     expect(differ.length, 'the two builds answer most requests differently').toBeGreaterThan(paths.length / 2);
     const srv = await createServer({ storeDir: link, port: 0, workers: 2, log: () => {} });
     let stop = false;
