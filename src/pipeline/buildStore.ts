@@ -17,6 +17,7 @@ import type { IndexParams } from '../ann/IndexParams.ts';
 import { StoreWriter } from '../store/writeStore.ts';
 import { checkStoreTarget, cleanLeftovers, lockStore } from '../store/storeTarget.ts';
 import { partitionByCoverage, type CoveragePartition } from '../ann/partitionByCoverage.ts';
+import { NARROW_INDEX_MIN_ROWS, narrowRows, scansWider } from '../ann/narrowRows.ts';
 import { partitionVector } from '../ann/partitionVector.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
 import type { ProfileKind } from '../profiles/assembleSeasons.ts';
@@ -57,6 +58,8 @@ export interface BuildOptions {
    * thread. The store is byte for byte the same either way.
    */
   readonly threads?: number;
+  /** Fewest wider-partition rows a narrow index is built over (default NARROW_INDEX_MIN_ROWS; tests use small leagues). */
+  readonly narrowMinRows?: number;
   readonly onProgress?: (stage: string, done: number, total: number) => void;
 }
 
@@ -271,13 +274,21 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
         mainIndex = { ...indexParams, dim: e.dim, count: g.meta.length };
       } else {
         const sqrtW = Float64Array.from(g.redundancy, Math.sqrt);
-        for (const [i, part] of partitionByCoverage(g.z, g.meta.length, g.dims.length).entries()) {
+        const parts = partitionByCoverage(g.z, g.meta.length, g.dims.length);
+        for (const [i, part] of parts.entries()) {
           let meta: GroupFile['index'] = null;
+          let narrow: GroupFile['index'] = null;
           if (part.rows.length >= PARTITION_INDEX_MIN_ROWS) {
             indexFile(names.partitionIndex(i), partitionVectors(g.z, g.dims.length, part, sqrtW), part.dims.length);
             meta = { ...indexParams, dim: part.dims.length, count: part.rows.length };
           }
-          partitions.push({ dims: [...part.dims], rows: part.rows, index: meta });
+          // this coverage's targets meet the wider partitions' rows in one index instead of scans of them
+          const wide = { dims: part.dims, rows: narrowRows(parts, i) };
+          if (wide.rows.length >= (options.narrowMinRows ?? NARROW_INDEX_MIN_ROWS) && scansWider(parts, i, g.redundancy)) {
+            indexFile(names.narrowIndex(i), partitionVectors(g.z, g.dims.length, wide, sqrtW), part.dims.length);
+            narrow = { ...indexParams, dim: part.dims.length, count: wide.rows.length };
+          }
+          partitions.push({ dims: [...part.dims], rows: part.rows, index: meta, narrow });
         }
       }
       const groupFiles = encodeGroupFiles(g, playerIndex, levels, {
@@ -369,7 +380,7 @@ function embeddingChecksums(group: string, files: ReadonlyMap<string, string | U
 export const PARTITION_INDEX_MIN_ROWS = 2000;
 
 /** A partition's index vectors, one partitionVector per row. */
-export function partitionVectors(z: Float32Array, d: number, part: CoveragePartition, sqrtW: Float64Array): Float32Array {
+export function partitionVectors(z: Float32Array, d: number, part: Pick<CoveragePartition, 'dims' | 'rows'>, sqrtW: Float64Array): Float32Array {
   const width = part.dims.length;
   const out = new Float32Array(part.rows.length * width);
   part.rows.forEach((row, r) => partitionVector(z, row * d, part.dims, sqrtW, out, r * width));

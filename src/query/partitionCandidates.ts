@@ -1,5 +1,6 @@
 import { partitionVector } from '../ann/partitionVector.ts';
 import type { StoredGroup } from '../store/ProfileStore.ts';
+import { PART_INDEX_MIN_SHARE, widerPartitions } from '../ann/narrowRows.ts';
 import { closestRows } from './closestRows.ts';
 import { packedPartitionOf } from './packPartition.ts';
 import { searchIndexPool } from './searchIndexPool.ts';
@@ -18,14 +19,52 @@ export interface CandidateQuery {
   readonly excluded: number;
 }
 
-/**
- * A partition's index is searched when the target has at least this share of the partition's weight
- * (its missing coordinates set to 0, the stratum mean); below it the partition is scanned on the
- * dimensions it shares with the target. Chosen by recall and time on simulated leagues (bench core).
- */
-export const PART_INDEX_MIN_SHARE = 0.9;
 /** Candidates are multiplied by this when the target lacks some of a searched partition's dimensions. */
 export const PART_PARTIAL_FACTOR = 4;
+
+/** Whether the target has `j` (a weighted dimension with a value). */
+const has = (q: CandidateQuery, j: number): boolean => (q.weights[j] as number) > 0 && !Number.isNaN(q.z[j] as number);
+
+/**
+ * Searches the narrow index of each partition whose dimensions are exactly the ones the target shares
+ * with every wider partition (src/ann/narrowRows.ts: a season without tracking against the tracked
+ * ones), adding up to `c` candidates from it to `out`; gives the partitions whose candidates it so
+ * proposed, which are then not scanned. Over those rows the target's shared dimensions are the
+ * partition's own, so the missing-aware distance ranks them as the index does.
+ */
+function narrowSearches(
+  partitions: StoredGroup['partitions'],
+  q: CandidateQuery,
+  c: number,
+  sqrtW: Float64Array,
+  out: number[],
+): { served: Set<number>; searched: boolean } {
+  const served = new Set<number>();
+  let searched = false;
+  for (const [i, p] of partitions.entries()) {
+    const narrow = p.narrow;
+    if (!narrow || !Array.from(p.dims).every((j) => has(q, j))) continue;
+    const own = new Set(p.dims);
+    const wider = widerPartitions(partitions, i).filter((w) => !served.has(w));
+    const exact = wider.every((w) => Array.from(partitions[w]?.dims ?? []).every((j) => own.has(j) || !has(q, j)));
+    if (wider.length === 0 || !exact) continue;
+    let shared = 0;
+    for (const j of p.dims) shared += q.weights[j] as number;
+    for (const w of wider) served.add(w);
+    if (!(shared > 0) || shared < q.minCoverage * q.targetWeight) continue;
+    const index = narrow.index;
+    if (!index) {
+      for (const w of wider) served.delete(w);
+      continue;
+    }
+    const v = new Float32Array(p.dims.length);
+    partitionVector(q.z, 0, p.dims, sqrtW, v, 0);
+    const rows = narrow.rows;
+    for (const r of searchIndexPool(index, v, c, (label) => rows[label] as number, q.mask, q.excluded)) out.push(r);
+    searched = true;
+  }
+  return { served, searched };
+}
 
 /**
  * Candidates from every coverage partition of a group (input space): each partition proposes up to
@@ -40,7 +79,10 @@ export function partitionCandidates(g: Pick<StoredGroup, 'z' | 'd' | 'partitions
   const out: number[] = [];
   let viaIndex = false;
   const sqrtW = Float64Array.from(q.weights, Math.sqrt);
-  for (const p of g.partitions) {
+  const { served, searched } = narrowSearches(g.partitions, q, c, sqrtW, out);
+  viaIndex ||= searched;
+  for (const [i, p] of g.partitions.entries()) {
+    if (served.has(i)) continue;
     let partWeight = 0;
     let sharedWeight = 0;
     for (const j of p.dims) {

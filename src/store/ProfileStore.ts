@@ -23,6 +23,11 @@ export interface StoredPartition {
   /** Group rows; index label i is row rows[i]. */
   readonly rows: Int32Array;
   readonly index: GuardedIndex | null;
+  /**
+   * The narrow index (src/ann/narrowRows.ts): the rows of the wider partitions (`rows`, its labels)
+   * on this partition's dimensions; null when the build made none.
+   */
+  readonly narrow: { readonly rows: Int32Array; readonly index: GuardedIndex | null } | null;
 }
 
 /** One position group as queries see it: columns of row metadata, the matrices, the index. */

@@ -11,7 +11,13 @@ export interface GroupIndexes {
   /** The index over all rows (codes of a learned space); null in the input space. */
   readonly index: GroupFile['index'];
   /** Input space: the coverage partitions (dimensions, group rows) and their index metadata. */
-  readonly partitions: readonly { readonly dims: readonly number[]; readonly rows: ArrayLike<number>; readonly index: GroupFile['index'] }[];
+  readonly partitions: readonly {
+    readonly dims: readonly number[];
+    readonly rows: ArrayLike<number>;
+    readonly index: GroupFile['index'];
+    /** The narrow index over the wider partitions' rows on these dimensions (src/ann/narrowRows.ts). */
+    readonly narrow: GroupFile['index'];
+  }[];
   /** The learned space's kind and code size, when comps are ranked in one. */
   readonly embedding?: GroupFile['embedding'];
 }
@@ -51,7 +57,7 @@ export function encodeGroupFiles(
     strata,
     shrinkage,
     index: indexes.index,
-    partitions: indexes.partitions.map((p) => ({ dims: [...p.dims], rows: p.rows.length, index: p.index })),
+    partitions: indexes.partitions.map((p) => ({ dims: [...p.dims], rows: p.rows.length, index: p.index, narrow: p.narrow })),
     ...(indexes.embedding ? { embedding: indexes.embedding } : {}),
     ...(g.window ? { window: { size: g.window.size, first: [...g.window.first] } } : {}),
   };

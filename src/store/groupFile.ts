@@ -52,13 +52,16 @@ export const groupFileSchema = z.strictObject({
   /**
    * Input space: the rows split by coverage pattern (src/ann/partitionByCoverage.ts), each with the
    * dimensions its vectors hold, its row count (its rows are the next `rows` of the `partition_rows`
-   * column of `group-<G>.rows.bin`) and, when it is large enough, its own index `group-<G>.p<i>.hnsw`.
+   * column of `group-<G>.rows.bin`) and, when it is large enough, its own index `group-<G>.p<i>.hnsw`;
+   * `narrow`, when its wider partitions hold enough rows, the index `group-<G>.p<i>.narrow.hnsw` over
+   * their rows on this partition's dimensions (src/ann/narrowRows.ts).
    */
   partitions: z.array(
     z.strictObject({
       dims: z.array(z.number().int().nonnegative()),
       rows: z.number().int().nonnegative(),
       index: indexSchema.nullable(),
+      narrow: indexSchema.nullable(),
     }),
   ),
   /**

@@ -9,8 +9,9 @@ export const STORE_FORMAT = 'kindred-store';
  * 7: each group file names its raw and standardised matrices (and its embedding's files) by sha256.
  * 8: players and group rows as columns files (players.bin, group-<G>.rows.bin), read lazily.
  * 9: players.bin also lists every player's rows over windows (`rows_w<N>_*`).
+ * 10: coverage partitions may have a narrow index (`group-<G>.p<i>.narrow.hnsw`, src/ann/narrowRows.ts).
  */
-export const STORE_FORMAT_VERSION = 9;
+export const STORE_FORMAT_VERSION = 10;
 /** Name of the manifest inside a store folder (reserved: no data file may use it). */
 export const MANIFEST_NAME = 'manifest.json';
 

@@ -1,3 +1,4 @@
+import { narrowRows } from '../ann/narrowRows.ts';
 import { GuardedIndex } from '../ann/GuardedIndex.ts';
 import type { IndexMeta } from '../ann/IndexParams.ts';
 import type { Position } from '../ingest/Roster.ts';
@@ -110,7 +111,7 @@ export function readGroup(
     if (!meta || meta.dim !== embedding.dim || meta.count !== n) throw bad('index metadata does not match the codes');
     index = once(() => loadIndex(names.index, meta));
   }
-  const partitions: StoredPartition[] = [];
+  const shapes: { dims: Int32Array; rows: Int32Array }[] = [];
   let covered = 0;
   for (const [i, p] of gf.partitions.entries()) {
     if (covered + p.rows > partitionRows.length) throw bad(`partition ${i} holds more rows than ${names.rows} lists`);
@@ -119,17 +120,37 @@ export function readGroup(
     const meta = p.index;
     if (meta && (meta.dim !== p.dims.length || meta.count !== p.rows)) throw bad(`partition ${i} index metadata does not match`);
     covered += p.rows;
-    const partIndex = meta ? once(() => loadIndex(names.partitionIndex(i), meta)) : () => null;
-    partitions.push({
-      dims: Int32Array.from(p.dims),
-      rows,
-      get index() {
-        return partIndex();
-      },
-    });
+    shapes.push({ dims: Int32Array.from(p.dims), rows });
   }
   if (covered !== partitionRows.length) throw bad(`partitions hold ${covered} rows, ${names.rows} lists ${partitionRows.length}`);
   if (!embedding && covered !== n) throw bad(`partitions hold ${covered} of ${n} rows`);
+  const partitions: StoredPartition[] = gf.partitions.map((p, i) => {
+    const shape = shapes[i] ?? { dims: new Int32Array(0), rows: new Int32Array(0) };
+    const meta = p.index;
+    const partIndex = meta ? once(() => loadIndex(names.partitionIndex(i), meta)) : () => null;
+    const wide = p.narrow;
+    let narrow: StoredPartition['narrow'] = null;
+    if (wide) {
+      const rows = narrowRows(shapes, i);
+      if (wide.dim !== p.dims.length || wide.count !== rows.length) {
+        throw bad(`partition ${i} narrow index metadata does not match (${wide.count} rows of ${wide.dim} dimensions, expected ${rows.length} of ${p.dims.length})`);
+      }
+      const narrowIndex = once(() => loadIndex(names.narrowIndex(i), wide));
+      narrow = {
+        rows,
+        get index() {
+          return narrowIndex();
+        },
+      };
+    }
+    return {
+      ...shape,
+      get index() {
+        return partIndex();
+      },
+      narrow,
+    };
+  });
   const strata = new Map<string, Map<string, StratumStats>>();
   for (const [dim, list] of Object.entries(gf.strata)) {
     strata.set(dim, new Map(list.map(([key, mean, sd, count, from, to]) => [key, { mean, sd, n: count, seasons: [from, to] as const }])));

@@ -20,7 +20,15 @@ export const BACKTEST_FILE = 'backtest.json';
 export const groupFileNames = (
   group: string,
   window = 1,
-): { json: string; rows: string; raw: string; z: string; index: string; partitionIndex: (i: number) => string } => {
+): {
+  json: string;
+  rows: string;
+  raw: string;
+  z: string;
+  index: string;
+  partitionIndex: (i: number) => string;
+  narrowIndex: (i: number) => string;
+} => {
   const name = window === 1 ? group : `${group}.w${window}`;
   return {
     json: `group-${name}.json`,
@@ -29,6 +37,7 @@ export const groupFileNames = (
     z: `group-${name}.z.f32`,
     index: `group-${name}.hnsw`,
     partitionIndex: (i: number) => `group-${name}.p${i}.hnsw`,
+    narrowIndex: (i: number) => `group-${name}.p${i}.narrow.hnsw`,
   };
 };
 

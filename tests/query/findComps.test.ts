@@ -4,12 +4,15 @@ import { effectiveWeights } from '../../src/query/prepareQuery.ts';
 import { DEFAULT_COMPS_OPTIONS, findComps, findCompsWithRows } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import { parseWant } from '../../src/query/parseWant.ts';
-import type { StoredGroup } from '../../src/store/ProfileStore.ts';
+import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import type { Target } from '../../src/query/Target.ts';
 
 let s: SimStore;
+/** The same league built with narrow indexes over as few as 200 wider rows (the default needs 5,000). */
+let narrow: SimStore;
 beforeAll(async () => {
   s = await simStore(12000);
+  narrow = await simStore(12000, 4242, { narrowMinRows: 200 });
 });
 
 const group = (): StoredGroup => {
@@ -21,6 +24,54 @@ const group = (): StoredGroup => {
 /** Rows spread evenly over the group, early seasons without tracking included (so coverage varies). */
 const sampleRows = (g: StoredGroup, count: number): number[] =>
   Array.from({ length: count }, (_, i) => Math.floor(((i + 0.5) * g.n) / count));
+
+/** Recall@10 of the default search against the exact scan, per coverage class, on IF targets of `store`. */
+function recallByClass(store: ProfileStore): void {
+  const g = store.groups.get('IF');
+  if (!g) throw new Error('no IF group in the simulated store');
+  expect(g.n).toBeGreaterThan(2000); // large enough for the index path
+  const W = g.redundancy.reduce((a, b) => a + b, 0);
+  const share = (r: number): number => {
+    let have = 0;
+    for (let j = 0; j < g.d; j++) if (!Number.isNaN(g.z[r * g.d + j] as number)) have += g.redundancy[j] as number;
+    return have / W;
+  };
+  const all = Array.from({ length: g.n }, (_, r) => r);
+  const spread = (rows: number[], count: number): number[] => Array.from({ length: Math.min(count, rows.length) }, (_, i) => rows[Math.floor(((i + 0.5) * rows.length) / count)] as number);
+  const full = spread(all.filter((r) => share(r) === 1), 20);
+  const untracked = spread(all.filter((r) => share(r) < 0.75), 20);
+  const names = g.dims.map((d) => d.name);
+  const classes: [string, Target[]][] = [
+    ['every dimension', full.map((row) => playerTarget(store, { group: 'IF', row }))],
+    ['without tracking', untracked.map((row) => playerTarget(store, { group: 'IF', row }))],
+    [
+      'hand-built, 2 to 4 dimensions',
+      full.map((row, i) => {
+        const t = playerTarget(store, { group: 'IF', row });
+        const keep = new Set([names[i % g.d], names[(i * 7 + 3) % g.d], ...(i % 2 === 0 ? [names[(i * 5 + 1) % g.d]] : [])]);
+        return { ...t, kind: 'want' as const, player: -1, row: -1, z: t.z.map((v, j) => (keep.has(names[j]) ? v : NaN)), raw: t.raw.map((v, j) => (keep.has(names[j]) ? v : NaN)) };
+      }),
+    ],
+  ];
+  for (const [name, targets] of classes) {
+    expect(targets.length, name).toBeGreaterThan(5);
+    let hit = 0;
+    let total = 0;
+    let viaIndex = 0;
+    for (const target of targets) {
+      const fast = findComps(store, target, DEFAULT_COMPS_OPTIONS);
+      const exact = findComps(store, target, { ...DEFAULT_COMPS_OPTIONS, exact: true });
+      expect(exact.query.method).toBe('exact');
+      if (fast.query.method === 'hnsw') viaIndex++;
+      const truth = new Set(exact.comps.map((c) => c.player_id));
+      hit += fast.comps.filter((c) => truth.has(c.player_id)).length;
+      total += truth.size;
+    }
+    expect(hit / total, name).toBeGreaterThanOrEqual(0.99);
+    // seasons without tracking are the bulk of the group: their own partition's index proposes them
+    if (name === 'without tracking') expect(viaIndex).toBe(targets.length);
+  }
+}
 
 describe('findComps(store, target, options)', () => {
   it('never returns the target player and returns each comp player once, closest first', () => {
@@ -40,49 +91,13 @@ describe('findComps(store, target, options)', () => {
   });
 
   it('finds the same comps as the exact scan for targets of every coverage class (recall@10 at least 0.99 each; reference: the exact scan)', () => {
-    const g = group();
-    expect(g.n).toBeGreaterThan(2000); // large enough for the index path
-    const W = g.redundancy.reduce((a, b) => a + b, 0);
-    const share = (r: number): number => {
-      let have = 0;
-      for (let j = 0; j < g.d; j++) if (!Number.isNaN(g.z[r * g.d + j] as number)) have += g.redundancy[j] as number;
-      return have / W;
-    };
-    const all = Array.from({ length: g.n }, (_, r) => r);
-    const spread = (rows: number[], count: number): number[] => Array.from({ length: Math.min(count, rows.length) }, (_, i) => rows[Math.floor(((i + 0.5) * rows.length) / count)] as number);
-    const full = spread(all.filter((r) => share(r) === 1), 20);
-    const untracked = spread(all.filter((r) => share(r) < 0.75), 20);
-    const names = g.dims.map((d) => d.name);
-    const classes: [string, Target[]][] = [
-      ['every dimension', full.map((row) => playerTarget(s.store, { group: 'IF', row }))],
-      ['without tracking', untracked.map((row) => playerTarget(s.store, { group: 'IF', row }))],
-      [
-        'hand-built, 2 to 4 dimensions',
-        full.map((row, i) => {
-          const t = playerTarget(s.store, { group: 'IF', row });
-          const keep = new Set([names[i % g.d], names[(i * 7 + 3) % g.d], ...(i % 2 === 0 ? [names[(i * 5 + 1) % g.d]] : [])]);
-          return { ...t, kind: 'want' as const, player: -1, row: -1, z: t.z.map((v, j) => (keep.has(names[j]) ? v : NaN)), raw: t.raw.map((v, j) => (keep.has(names[j]) ? v : NaN)) };
-        }),
-      ],
-    ];
-    for (const [name, targets] of classes) {
-      expect(targets.length, name).toBeGreaterThan(5);
-      let hit = 0;
-      let total = 0;
-      let viaIndex = 0;
-      for (const target of targets) {
-        const fast = findComps(s.store, target, DEFAULT_COMPS_OPTIONS);
-        const exact = findComps(s.store, target, { ...DEFAULT_COMPS_OPTIONS, exact: true });
-        expect(exact.query.method).toBe('exact');
-        if (fast.query.method === 'hnsw') viaIndex++;
-        const truth = new Set(exact.comps.map((c) => c.player_id));
-        hit += fast.comps.filter((c) => truth.has(c.player_id)).length;
-        total += truth.size;
-      }
-      expect(hit / total, name).toBeGreaterThanOrEqual(0.99);
-      // seasons without tracking are the bulk of the group: their own partition's index proposes them
-      if (name === 'without tracking') expect(viaIndex).toBe(targets.length);
-    }
+    recallByClass(s.store);
+  });
+
+  it('finds the same comps with narrow indexes, and untracked targets meet tracked rows through them (reference: the exact scan)', () => {
+    const g = narrow.store.groups.get('IF');
+    expect(g?.partitions.some((p) => p.narrow !== null)).toBe(true);
+    recallByClass(narrow.store);
   });
 
   it('ranks exactly by the weighted missing-aware distance computed independently here', () => {

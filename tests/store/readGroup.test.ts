@@ -13,6 +13,7 @@ import { writeLeagueCsv } from '../../src/sim/writeLeagueCsv.ts';
 import { openProfileStore } from '../../src/store/openProfileStore.ts';
 import { groupEmbeddingFileNames, groupFileNames } from '../../src/store/storeFileNames.ts';
 import { resealStore, swapStoreFiles } from '../helpers/resealStore.ts';
+import { groupFileSchema } from '../../src/store/groupFile.ts';
 import { decodeColumns, encodeColumns, type ColumnInput } from '../../src/store/columnsFile.ts';
 import { decodePlayersFile } from '../../src/store/playersFile.ts';
 
@@ -26,7 +27,8 @@ beforeAll(async () => {
   const league = simulateLeague({ seed: 31, firstSeason: 2018, lastSeason: 2026, targetPlayerSeasons: 900 });
   await writeLeagueCsv(league, join(work, 'roster'));
   built = join(work, 'built');
-  await buildStore(join(work, 'roster'), built, { lenient: false, threads: 1 });
+  // narrow indexes over as few as 50 rows, so that this small league has them (the default needs 5,000)
+  await buildStore(join(work, 'roster'), built, { lenient: false, threads: 1, narrowMinRows: 50 });
   builtPca = join(work, 'built-pca');
   await buildStore(join(work, 'roster'), builtPca, { lenient: false, threads: 1, embed: { method: 'pca', driverTargets: 0 } });
 }, 240_000);
@@ -100,6 +102,21 @@ describe('readGroup behind a rewritten manifest', () => {
       });
     });
   }
+
+  it('refuses a narrow index whose row count is not that of the wider partitions', async () => {
+    const dir = copy();
+    const group = (['OF', 'IF', 'C'] as const).find((g) => groupFileSchema.parse(JSON.parse(readFileSync(join(dir, groupFileNames(g).json), 'utf8'))).partitions.some((p) => p.narrow));
+    expect(group, 'a group with a narrow index').toBeDefined();
+    const names = groupFileNames(group ?? 'OF');
+    const file = groupFileSchema.parse(JSON.parse(readFileSync(join(dir, names.json), 'utf8')));
+    const partitions = file.partitions.map((p) => (p.narrow ? { ...p, narrow: { ...p.narrow, count: p.narrow.count + 1 } } : p));
+    writeFileSync(join(dir, names.json), JSON.stringify({ ...file, partitions }));
+    resealStore(dir, [names.json]);
+    await expect(openProfileStore(dir, { load: 'eager' })).rejects.toMatchObject({
+      code: 'kindred.store.corrupt',
+      message: expect.stringContaining('narrow index metadata does not match'),
+    });
+  });
 
   it('refuses a row naming a player past the players table', async () => {
     const dir = copy();
