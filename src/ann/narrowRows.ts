@@ -4,8 +4,17 @@ export interface PartitionShape {
   readonly rows: ArrayLike<number>;
 }
 
-/** A partition's narrow index is built only over at least this many rows (fewer are scanned as fast). */
-export const NARROW_INDEX_MIN_ROWS = 5000;
+/**
+ * When a partition gets a narrow index: its wider partitions hold at least `rows` rows (fewer are
+ * scanned about as fast as an index is searched), and it holds at least `targets` rows itself (a
+ * rarer coverage's few targets scan, rather than every build paying for an index they seldom use).
+ */
+export interface NarrowIndexMin {
+  readonly rows: number;
+  readonly targets: number;
+}
+
+export const NARROW_INDEX_MIN: NarrowIndexMin = { rows: 5000, targets: 1000 };
 
 /**
  * The partitions whose dimensions strictly include those of partition `i`: their rows have every

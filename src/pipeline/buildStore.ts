@@ -17,7 +17,7 @@ import type { IndexParams } from '../ann/IndexParams.ts';
 import { StoreWriter } from '../store/writeStore.ts';
 import { checkStoreTarget, cleanLeftovers, lockStore } from '../store/storeTarget.ts';
 import { partitionByCoverage, type CoveragePartition } from '../ann/partitionByCoverage.ts';
-import { NARROW_INDEX_MIN_ROWS, narrowRows, scansWider } from '../ann/narrowRows.ts';
+import { NARROW_INDEX_MIN, narrowRows, scansWider, type NarrowIndexMin } from '../ann/narrowRows.ts';
 import { partitionVector } from '../ann/partitionVector.ts';
 import { POSITION_GROUPS, type PositionGroup } from '../profiles/positionGroup.ts';
 import type { ProfileKind } from '../profiles/assembleSeasons.ts';
@@ -58,8 +58,8 @@ export interface BuildOptions {
    * thread. The store is byte for byte the same either way.
    */
   readonly threads?: number;
-  /** Fewest wider-partition rows a narrow index is built over (default NARROW_INDEX_MIN_ROWS; tests use small leagues). */
-  readonly narrowMinRows?: number;
+  /** When a coverage partition gets a narrow index (default NARROW_INDEX_MIN; tests lower it for small leagues). */
+  readonly narrowMin?: NarrowIndexMin;
   readonly onProgress?: (stage: string, done: number, total: number) => void;
 }
 
@@ -284,7 +284,8 @@ async function buildLocked(rosterDir: string, storeDir: string, options: BuildOp
           }
           // this coverage's targets meet the wider partitions' rows in one index instead of scans of them
           const wide = { dims: part.dims, rows: narrowRows(parts, i) };
-          if (wide.rows.length >= (options.narrowMinRows ?? NARROW_INDEX_MIN_ROWS) && scansWider(parts, i, g.redundancy)) {
+          const min = options.narrowMin ?? NARROW_INDEX_MIN;
+          if (part.rows.length >= min.targets && wide.rows.length >= min.rows && scansWider(parts, i, g.redundancy)) {
             indexFile(names.narrowIndex(i), partitionVectors(g.z, g.dims.length, wide, sqrtW), part.dims.length);
             narrow = { ...indexParams, dim: part.dims.length, count: wide.rows.length };
           }

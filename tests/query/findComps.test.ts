@@ -8,11 +8,11 @@ import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts'
 import type { Target } from '../../src/query/Target.ts';
 
 let s: SimStore;
-/** The same league built with narrow indexes over as few as 200 wider rows (the default needs 5,000). */
+/** The same league built with narrow indexes over as few as 200 wider rows (the default needs 5,000 and 1,000 targets). */
 let narrow: SimStore;
 beforeAll(async () => {
   s = await simStore(12000);
-  narrow = await simStore(12000, 4242, { narrowMinRows: 200 });
+  narrow = await simStore(12000, 4242, { narrowMin: { rows: 200, targets: 100 } });
 });
 
 const group = (): StoredGroup => {

@@ -28,7 +28,7 @@ beforeAll(async () => {
   await writeLeagueCsv(league, join(work, 'roster'));
   built = join(work, 'built');
   // narrow indexes over as few as 50 rows, so that this small league has them (the default needs 5,000)
-  await buildStore(join(work, 'roster'), built, { lenient: false, threads: 1, narrowMinRows: 50 });
+  await buildStore(join(work, 'roster'), built, { lenient: false, threads: 1, narrowMin: { rows: 50, targets: 10 } });
   builtPca = join(work, 'built-pca');
   await buildStore(join(work, 'roster'), builtPca, { lenient: false, threads: 1, embed: { method: 'pca', driverTargets: 0 } });
 }, 240_000);
