@@ -29,6 +29,7 @@ import type { SimLeague } from '../src/sim/simTypes.ts';
 import type { ProfileStore } from '../src/store/ProfileStore.ts';
 import { DEFAULT_PROSPECT_OPTIONS, type ProspectOptions } from '../src/jobs/findProspectComps.ts';
 import { DEFAULT_CALIBRATION, type CalibrationChoice } from '../src/outlook/calibrateForecast.ts';
+import { POSITION_GROUPS, isPitcherGroup, type PositionGroup } from '../src/profiles/positionGroup.ts';
 
 const playerSeasons = Number(process.argv[2] ?? 15000);
 const wanted = (process.argv[3] ?? 'home,slow,fast,drifting').split(',');
@@ -41,6 +42,12 @@ const POOLS: Record<string, Partial<ProspectOptions>> = {
   'level+age (default)': {},
   ...(process.env['KINDRED_BENCH_POOLS'] === '1' ? { 'PA/BF band x2': { sampleBand: 2 }, 'band x2 + level path': { sampleBand: 2, levelPath: true } } : {}),
 };
+/**
+ * `KINDRED_BENCH_MISSING=1` also forecasts hitters with the comps' missing-dimension rule (missingRuleOf: the
+ * imputed gap) beside the prospect default (prospectMissingRuleOf: rescaled).
+ */
+const HITTER_RULES = process.env['KINDRED_BENCH_MISSING'] === '1';
+const HITTER_GROUPS: readonly PositionGroup[] = POSITION_GROUPS.filter((g) => !isPitcherGroup(g));
 const D = DEFAULT_CALIBRATION;
 /** The default's name in the tables below. */
 const DEFAULT_MAP = 'chosen per roster (default)';
@@ -109,6 +116,20 @@ for (const spec of benchLeagues(playerSeasons).filter((s) => wanted.includes(s.n
         seasons: [outcomes.firstSeason + 6, outcomes.lastSeason - 6],
       });
       const secs = (performance.now() - t) / 1000;
+      if (poolName === 'level+age (default)' && HITTER_RULES) {
+        // hitters' prospect comps with the comps' rule (a dimension the comp lacks at its expected gap given his
+        // own rates, the lines fitted on the group as of each season); pitchers' rule is the same under both, so
+        // their forecasts are shared
+        const imputed = collectForecasts(store, outcomes, {
+          prospect: { ...DEFAULT_PROSPECT_OPTIONS, comps: { ...DEFAULT_PROSPECT_OPTIONS.comps, missing: 'impute' } }, perSeason,
+          seasons: [outcomes.firstSeason + 6, outcomes.lastSeason - 6], groups: HITTER_GROUPS,
+        });
+        const b = runBacktest([...imputed, ...rows.filter((r) => r.kind === 'pitcher')], outcomes.lastSeason, { horizon: 6, calibration: D, rounds: 300 });
+        for (const k of b.kinds.filter((x) => x.kind === 'hitter')) {
+          console.log(`  hitters' comps with the imputed gap (the comps' rule), map ${DEFAULT_MAP}: ${line(k)}`);
+          add(`hitters with the imputed gap (the comps' rule) | ${DEFAULT_MAP} | ${k.kind}`, k);
+        }
+      }
       for (const [mapName, choice] of Object.entries(MAPS)) {
         if (poolName !== 'level+age (default)' && mapName !== DEFAULT_MAP) continue;
         const usedChoice: CalibrationChoice = poolName === 'level+age (default)' ? choice : { ...FIXED, features: ['comps', 'matched', 'sample'] };

@@ -8,7 +8,7 @@ import { fitRidge } from '../stats/fitRidge.ts';
  * rates from his batting and fielding lines), and each other dimension (the measurements tracked only
  * in some seasons and levels: exit velocity, run speed, arm strength, ...) gets a least-squares line on
  * the core ones, fitted on the rows that have it, with its residual variance (mean squared residual).
- * A missing core value counts as 0, its stratum's mean.
+ * A missing core value counts as 0, its stratum's mean. Rows without any value (no profile) are not counted.
  */
 export interface CoreImputer {
   /** The core dimensions (column indices), the features of every line. */
@@ -51,8 +51,15 @@ export function fitCoreImputer(
   const scan = Math.max(1, Math.ceil(n / SCAN_ROWS));
   const present = new Float64Array(d);
   let scanned = 0;
-  for (let r = 0; r < n; r += scan, scanned++) {
-    for (let j = 0; j < d; j++) if (!Number.isNaN(z[r * d + j] as number)) present[j] = (present[j] as number) + 1;
+  for (let r = 0; r < n; r += scan) {
+    let any = false;
+    for (let j = 0; j < d; j++) {
+      if (Number.isNaN(z[r * d + j] as number)) continue;
+      present[j] = (present[j] as number) + 1;
+      any = true;
+    }
+    // a row without any profile (a later season in a group seen as of an earlier one, groupAsOf) says nothing of which dimensions are core
+    if (any) scanned++;
   }
   const core = Int32Array.from({ length: d }, (_, j) => j).filter((j) => scanned > 0 && 1 - (present[j] as number) / scanned < CORE_MAX_MISSING);
   const lines: (Float64Array | null)[] = [];

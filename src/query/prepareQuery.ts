@@ -8,6 +8,7 @@ import { storedGroup } from './storedGroup.ts';
 import type { Target } from './Target.ts';
 import { userWeights, type WeightPreset } from './weightPresets.ts';
 import { missingRuleOf } from './missingRuleOf.ts';
+import { coreImputerOf } from './coreImputerOf.ts';
 
 /** What decides a query's pool and weights (the part of CompsOptions every job shares). */
 export interface QuerySettings {
@@ -18,8 +19,12 @@ export interface QuerySettings {
   readonly weighting: 'redundancy' | 'plain';
   /** How the filter's playing-time floor was scaled (poolRules), for the echo; absent without a floor from the rules. */
   readonly sampleFloor?: SampleFloor;
-  /** A dimension the target has and a pool row lacks: left out and the rest rescaled (`rescale`), counted at its expected gap (`expected`) or at its expected gap given the row's core dimensions (`{ impute }`; MissingRule); default missingRuleOf(group). */
-  readonly missing?: MissingRule;
+  /**
+   * A dimension the target has and a pool row lacks: left out and the rest rescaled (`rescale`), counted at its
+   * expected gap (`expected`) or at its expected gap given the row's core dimensions (`{ impute }`, or `impute`
+   * for the lines of the queried group, coreImputerOf; MissingRule); default missingRuleOf(group).
+   */
+  readonly missing?: MissingRule | 'impute';
 }
 
 /** A query made ready: its group, the weights in play, the target's weight and the pool. */
@@ -72,6 +77,6 @@ export function prepareQuery(store: ProfileStore, target: Target, settings: Quer
   return {
     store, group, target, filter: settings.filter, weights, preset: settings.preset, targetWeight: wT, mask, eligible: count, defaultMetric,
     sampleFloor: settings.sampleFloor ?? null,
-    missing: settings.missing ?? missingRuleOf(group),
+    missing: settings.missing === 'impute' ? { impute: coreImputerOf(group) } : (settings.missing ?? missingRuleOf(group)),
   };
 }

@@ -33,6 +33,16 @@ describe('fitCoreImputer (lines from the dimensions every profile has)', () => {
     expect((imp.residual[1] as number) * 11).toBeCloseTo(13.76, 1);
   });
 
+  it('fits the same line when rows without any profile are added (a group seen as of an earlier season)', () => {
+    // Anscombe's first set again, followed by 12 rows with no value at all: without the rule the x column
+    // would be missing in half the rows, not core, and no line would be fitted
+    const padded = Float64Array.from([...anscombe(), ...new Array<number>(24).fill(NaN)]);
+    const imp = fitCoreImputer(padded, 24, 2, { ridge: 0, minRows: 5 });
+    expect(Array.from(imp.core)).toEqual([0]);
+    expect(imp.lines[1]?.[0]).toBeCloseTo(3.0, 2);
+    expect(imp.lines[1]?.[1]).toBeCloseTo(0.5, 3);
+  });
+
   it('leaves a dimension present in too few rows without a line (residual 1)', () => {
     const imp = fitCoreImputer(anscombe(), 12, 2, { ridge: 0 });
     expect(imp.lines[1]).toBeNull();

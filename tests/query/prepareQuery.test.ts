@@ -14,6 +14,8 @@ import { echoPool, echoQuery } from '../../src/query/echoQuery.ts';
 import { DEFAULT_COMPS_OPTIONS } from '../../src/query/findComps.ts';
 import { playerTarget } from '../../src/query/playerTarget.ts';
 import { prepareQuery } from '../../src/query/prepareQuery.ts';
+import { coreImputerOf } from '../../src/query/coreImputerOf.ts';
+import { missingRuleOf } from '../../src/query/missingRuleOf.ts';
 import type { ProfileStore, StoredGroup } from '../../src/store/ProfileStore.ts';
 import { scoreRow } from '../../src/query/scoreRow.ts';
 import type { Target } from '../../src/query/Target.ts';
@@ -50,6 +52,13 @@ describe('prepareQuery(store, target, settings)', () => {
     const q = prepareQuery(store, target, { ...DEFAULT_COMPS_OPTIONS, weighting: 'plain' });
     expect(Array.from(q.weights).every((w) => w === 1)).toBe(true);
     expect(q.defaultMetric).toBe(false);
+  });
+
+  it('reads `impute` as the imputation lines of the queried group (coreImputerOf), the default rule as missingRuleOf', () => {
+    const q = prepareQuery(store, target, { ...DEFAULT_COMPS_OPTIONS, missing: 'impute' });
+    expect(typeof q.missing === 'object' ? q.missing.impute : null).toBe(coreImputerOf(g));
+    expect(prepareQuery(store, target, { ...DEFAULT_COMPS_OPTIONS, missing: 'rescale' }).missing).toBe('rescale');
+    expect(prepareQuery(store, target, DEFAULT_COMPS_OPTIONS).missing).toEqual(missingRuleOf(g));
   });
 
   it('refuses a group the store does not have (kindred.query.emptyPool)', () => {
