@@ -6,7 +6,8 @@
  * (also run by `npm run bench -- quality`). Scoring: bench/lib/caseQuality.ts. Each league is built once
  * with every window; its figure per case is the median ratio over the case's targets (twins: the share
  * found in the top 10); across leagues the mean, sd and min-max, and the aims on the worst league (an aim
- * is for every league). The embedding case (an embedded store against the input space) is its own bench:
+ * is for every league); the hitters' bat gap (caseQuality.batGap: their comps' squared true-talent gap in
+ * contact, power and eye, which a variant must not grow). The embedding case (an embedded store against the input space) is its own bench:
  * `npm run bench -- embed-quality`.
  */
 import { mkdtemp, rm } from 'node:fs/promises';
@@ -20,7 +21,7 @@ import { DEFAULT_COMPS_OPTIONS } from '../src/query/findComps.ts';
 import { windowView } from '../src/query/windowView.ts';
 import { DEFAULT_WINDOW } from '../src/query/defaultWindow.ts';
 import { aim, type Aim } from './lib/aim.ts';
-import { chooseTargets, QUALITY_CASES, scoreCases } from './lib/caseQuality.ts';
+import { batGap, chooseTargets, QUALITY_CASES, scoreCases } from './lib/caseQuality.ts';
 import { benchLeagues } from './leagues.ts';
 
 /** The windows compared (the 6th argument, e.g. `1,3,5`; default 1, 3, 5). */
@@ -44,6 +45,7 @@ export async function runQualityCases(playerSeasons: number, targetsPerCase: num
   const twinShare = WINDOWS.map(() => [] as number[]);
   const twinCounts = WINDOWS.map(() => [] as string[]);
   const twinByCase = QUALITY_CASES.map(() => WINDOWS.map(() => [] as string[]));
+  const bat = WINDOWS.map(() => [] as number[]);
   for (const spec of leagues) {
     const dir = await mkdtemp(join(tmpdir(), `kindred-cases-${spec.name}-`));
     try {
@@ -59,6 +61,7 @@ export async function runQualityCases(playerSeasons: number, targetsPerCase: num
           (median[c] as number[][])[w]?.push(s.median[c] as number);
           (twinByCase[c] as string[][])[w]?.push(`${s.twinsFound[c]}/${s.twinTargets[c]}`);
         }
+        bat[w]?.push(batGap(s.talentGaps[0]));
         const found = s.twinsFound.reduce((a, b) => a + b, 0);
         const scored = s.twinTargets.reduce((a, b) => a + b, 0);
         twinShare[w]?.push(found / scored);
@@ -83,11 +86,13 @@ export async function runQualityCases(playerSeasons: number, targetsPerCase: num
     lines.push(`${kase.name.padEnd(22)}${WINDOWS.map((_, w) => `${summary(per[w] ?? [])} wins ${wins(per, w, (a, b) => a < b)}`.padStart(40)).join('')}`);
   }
   lines.push(`${'twins found in top 10'.padEnd(22)}${WINDOWS.map((_, w) => `${summary(twinShare[w] ?? [], 2)} wins ${wins(twinShare, w, (a, b) => a > b)}`.padStart(40)).join('')}`);
+  lines.push(`${"hitters' bat gap".padEnd(22)}${WINDOWS.map((_, w) => `${summary(bat[w] ?? [], 2)}`.padStart(40)).join('')}`);
   lines.push(`${'embedding vs input'.padEnd(22)}${'see npm run bench -- embed-quality'.padStart(40)}`);
   lines.push(`per league (${leagues.map((l) => l.name).join(', ')}):`);
   for (const [c, kase] of QUALITY_CASES.entries()) {
     lines.push(`${kase.name.padEnd(22)}${WINDOWS.map((_, w) => ((median[c] as number[][])[w] ?? []).map((x) => x.toFixed(3)).join(' ').padStart(40)).join('')}`);
   }
+  lines.push(`${"hitters' bat gap".padEnd(22)}${WINDOWS.map((_, w) => (bat[w] ?? []).map((x) => x.toFixed(2)).join(' ').padStart(40)).join('')}`);
   lines.push(`${'twins found/targets'.padEnd(22)}${WINDOWS.map((_, w) => (twinCounts[w] ?? []).join(' ').padStart(40)).join('')}`);
   for (const [c, kase] of QUALITY_CASES.entries()) {
     lines.push(`${`  of which ${kase.name.replace('top ', '')}`.padEnd(22)}${WINDOWS.map((_, w) => ((twinByCase[c] as string[][])[w] ?? []).join(' ').padStart(40)).join('')}`);

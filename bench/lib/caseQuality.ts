@@ -121,6 +121,21 @@ export interface CaseScores {
   readonly talentGaps: readonly { readonly names: readonly string[]; readonly comps: Float64Array; readonly ideal: Float64Array }[];
 }
 
+/** Talents that make up the bat (what "who hits like him" asks; the hitters case's gap in them must not grow). */
+export const BAT_TALENTS: readonly string[] = ['contact', 'power', 'eye'];
+
+/** The bat's gap: a case's mean squared standardised talent gap to the comps, summed over BAT_TALENTS (NaN without them). */
+export function batGap(gaps: CaseScores['talentGaps'][number] | undefined): number {
+  if (!gaps) return NaN;
+  let s = 0;
+  for (const name of BAT_TALENTS) {
+    const j = gaps.names.indexOf(name);
+    if (j < 0) return NaN;
+    s += gaps.comps[j] as number;
+  }
+  return s;
+}
+
 export interface ScoreOptions {
   /** Comps options (default pool rules are added as the filter). */
   readonly compsOptions: CompsOptions;

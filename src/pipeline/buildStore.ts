@@ -183,7 +183,7 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
   for (const size of windowSizes) {
     progress(`profiles over ${size} seasons`, 0, 1);
     if (!roster) throw new Error('internal: the roster was let go before its last window');
-    let combined: WindowRoster | null = windowRoster(roster, size);
+    let combined: WindowRoster | null = windowRoster(roster, size, profileOptions.windowDecay);
     if (size === windowSizes[windowSizes.length - 1]) {
       // after the last window's lines are combined, nothing needs the single seasons' lines: they are
       // collected now, before the window profiles allocate (V8 would keep them until the heap grows)

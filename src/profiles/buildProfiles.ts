@@ -49,7 +49,27 @@ export interface ProfileOptions {
   readonly standardise: StandardiseOptions;
   /** Fitted or fixed regression constants (default DEFAULT_SHRINKAGE). */
   readonly shrinkage?: ShrinkageOptions;
+  /** Recency weight per season back inside a window (windowRoster; default 1: every season by its events). */
+  readonly windowDecay?: number;
+  /** The window profiles' default weights: their own (default, DEFAULT_WINDOW_WEIGHTS) or the single seasons'. */
+  readonly windowWeights?: 'single' | 'window';
+  /** The window profiles' regression constants (default DEFAULT_WINDOW_SHRINKAGE: fitted). */
+  readonly windowShrinkage?: ShrinkageOptions;
 }
+
+/**
+ * Window profiles weigh their dimensions by their own reliability, measured between a player's windows
+ * that share no season (reliability with `apart` = the window size), and the redundancy among window
+ * rows: a dimension's noise shrinks at its own pace as seasons are added (a rate of rare events gains
+ * more than a timed measurement), which the single seasons' weights do not see. And their rates are
+ * regressed with k fitted to the roster's window lines (empirical Bayes, shrinkageFor), the table as the
+ * fallback: k of the table is a per-season figure, while a window's spread of true talent differs.
+ * Together, on the four bench leagues (bench/qualityVariants.bench.ts, windows of 5): hitters 1.312 ->
+ * 1.300, better in every league, the bat's gap the same on the mean (1.72); SP 1.497 -> 1.490, RP
+ * 1.665 -> 1.650; either alone was not better everywhere (docs/jobs.md). Single seasons keep the table.
+ */
+export const DEFAULT_WINDOW_WEIGHTS = 'window';
+export const DEFAULT_WINDOW_SHRINKAGE: ShrinkageOptions = { ...DEFAULT_SHRINKAGE, fit: true };
 
 export const DEFAULT_PROFILE_OPTIONS: ProfileOptions = {
   minimums: DEFAULT_MINIMUMS,
@@ -93,7 +113,7 @@ export function buildKindProfiles(roster: Roster, options: ProfileOptions, kinds
 type GivenWeights = ReadonlyMap<PositionGroup, Pick<GroupProfiles, 'reliability' | 'redundancy'>>;
 
 /** buildProfiles of `kinds`, with the default weights of the groups in `given` taken from there (not computed). */
-function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeights, kinds: readonly ProfileKind[]): ProfileSet {
+function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeights, kinds: readonly ProfileKind[], apart = 1): ProfileSet {
   const seasons = assembleSeasons(roster, options.minimums, kinds);
   const groups = new Map<PositionGroup, GroupProfiles>();
 
@@ -130,7 +150,7 @@ function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeig
     const rows: number[] = [];
     for (let i = 0; i < meta.length; i++) if (groupOf((meta[i] as SeasonMeta).position) === group) rows.push(i);
     if (rows.length === 0) continue;
-    groups.set(group, assembleGroup(group, rows, meta, cols, options.standardise, given.get(group)));
+    groups.set(group, assembleGroup(group, rows, meta, cols, options.standardise, given.get(group), apart));
   }
   return { groups, skipped: seasons.skipped };
 }
@@ -139,8 +159,10 @@ function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeig
  * Profiles over windows of `window` seasons (windowRoster: each line combined with the same player's
  * lines at its level in the seasons before it), built by the same steps as buildProfiles: the rates
  * recomputed and regressed on the combined counts, standardised among the windows ending at the same
- * season and level. The default weights are those of the single seasons (`single`, project choice):
- * overlapping windows share seasons, so their season-to-season correlation would overstate reliability.
+ * season and level; the rates regressed with options.windowShrinkage (default fitted k) and the default
+ * weights the windows' own, with reliability between windows that share no season (overlapping windows
+ * share their seasons' noise, so their season-to-season correlation would overstate it), or with
+ * windowWeights 'single' those of the single seasons (`single`); see DEFAULT_WINDOW_WEIGHTS.
  * `window` 1 is buildProfiles itself.
  */
 export function buildWindowProfiles(
@@ -150,7 +172,7 @@ export function buildWindowProfiles(
   single: { readonly groups: ReadonlyMap<PositionGroup, Pick<GroupProfiles, 'reliability' | 'redundancy'>> },
 ): ProfileSet {
   if (window === 1) return buildProfiles(roster, options);
-  return profileWindowRoster(windowRoster(roster, window), options, single);
+  return profileWindowRoster(windowRoster(roster, window, options.windowDecay), options, single);
 }
 
 /**
@@ -166,8 +188,10 @@ export function profileWindowRoster(
 ): ProfileSet {
   const window = wr.window;
   if (window === 1) return profileRoster(wr.roster, options, new Map(), kinds);
-  // the single seasons' weights are taken as they are, so the windows' own are not computed
-  const built = profileRoster(wr.roster, options, single.groups, kinds);
+  const own = (options.windowWeights ?? DEFAULT_WINDOW_WEIGHTS) === 'window';
+  const windowOptions: ProfileOptions = { ...options, shrinkage: options.windowShrinkage ?? DEFAULT_WINDOW_SHRINKAGE };
+  // with the single seasons' weights taken as they are, the windows' own are not computed
+  const built = own ? profileRoster(wr.roster, windowOptions, new Map(), kinds, window) : profileRoster(wr.roster, windowOptions, single.groups, kinds);
   const groups = new Map<PositionGroup, GroupProfiles>();
   for (const [group, g] of built.groups) {
     const first = Int32Array.from(g.meta, (m) => wr.firstSeason.get(windowKey(m.playerId, m.season, m.level)) ?? m.season);
@@ -192,6 +216,7 @@ function assembleGroup(
   cols: ReadonlyMap<string, MeasuredColumn>,
   standardise: StandardiseOptions,
   given: Pick<GroupProfiles, 'reliability' | 'redundancy'> | undefined,
+  apart: number,
 ): GroupProfiles {
   const dims = dimensionsOf(group);
   const n = rows.length;
@@ -233,7 +258,7 @@ function assembleGroup(
   });
   const ids = new Map<string, number>();
   const playerNumber = (id: string): number => ids.get(id) ?? ids.set(id, ids.size).size - 1;
-  const w = z64 ? defaultWeights(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season), dims.map((dim) => dim.family)) : given;
+  const w = z64 ? defaultWeights(z64, n, d, meta.map((m) => playerNumber(m.playerId)), meta.map((m) => m.season), dims.map((dim) => dim.family), apart) : given;
   if (!w) throw new Error(`internal: no default weights for ${group}`);
   return { group, dims, meta, raw, z, strata, reliability: w.reliability, redundancy: w.redundancy, shrinkage };
 }

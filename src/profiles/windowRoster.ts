@@ -26,14 +26,16 @@ export const windowKey = (playerId: string, season: number, level: string): stri
  * stolen-base attempts, fastball velocity by batters faced, ...). The window line keeps the key of its
  * last season, so its age is taken at that season and it is compared with the league of that season and
  * level; the rates are recomputed and regressed on the combined counts by the profiles as for any line.
- * Fielding lines combine per position. No recency weights: every season counts by its events
- * (the bench `compsQuality.bench.ts` measures windows). `window` 1 returns the roster unchanged.
+ * Fielding lines combine per position. Recency weights: a season a seasons before the window's last
+ * counts decay^a of its events (counts and measurement weights; combineStints' scale); the default 1
+ * counts every season by its events (bench/qualityVariants.bench.ts measures others). `window` 1 returns
+ * the roster unchanged.
  *
  * @example
  * // batting of p1 at Top: 2025 PA 300, H 80, BB 30; 2026 PA 200, H 50, BB 10
  * // windowRoster(roster, 2): p1 2026 Top PA 500, H 130, BB 40, first season 2025; p1 2025 Top unchanged
  */
-export function windowRoster(roster: Roster, window: number): WindowRoster {
+export function windowRoster(roster: Roster, window: number, decay = 1): WindowRoster {
   if (!Number.isInteger(window) || window < 1) throw new RangeError(`window must be a whole number of seasons of at least 1 (got ${window})`);
   const firstSeason = new Map<string, number>();
   if (window === 1) {
@@ -46,9 +48,9 @@ export function windowRoster(roster: Roster, window: number): WindowRoster {
     const key = windowKey(playerId, season, level);
     firstSeason.set(key, Math.min(firstSeason.get(key) ?? first, first));
   };
-  const batting = combineWindows(BATTING_COLUMNS, roster.batting, window, (l) => `${l.playerId}\u0000${l.level}`, note);
-  const pitching = combineWindows(PITCHING_COLUMNS, roster.pitching, window, (l) => `${l.playerId}\u0000${l.level}`, note);
-  const fielding = combineWindows(FIELDING_COLUMNS, roster.fielding, window, (l) => `${l.playerId}\u0000${l.level}\u0000${l.pos}`, () => {});
+  const batting = combineWindows(BATTING_COLUMNS, roster.batting, window, decay, (l) => `${l.playerId}\u0000${l.level}`, note);
+  const pitching = combineWindows(PITCHING_COLUMNS, roster.pitching, window, decay, (l) => `${l.playerId}\u0000${l.level}`, note);
+  const fielding = combineWindows(FIELDING_COLUMNS, roster.fielding, window, decay, (l) => `${l.playerId}\u0000${l.level}\u0000${l.pos}`, () => {});
   return { window, roster: { ...roster, batting, pitching, fielding }, firstSeason };
 }
 
@@ -66,6 +68,7 @@ function combineWindows<T extends ColumnTable>(
   table: T,
   lines: readonly RecordOf<T>[],
   window: number,
+  decay: number,
   seriesOf: (l: RecordOf<T> & SeasonLine) => string,
   note: (playerId: string, season: number, level: string, first: number) => void,
 ): RecordOf<T>[] {
@@ -83,14 +86,16 @@ function combineWindows<T extends ColumnTable>(
   for (const list of series.values()) list.sort((a, b) => b.season - a.season);
   return typed.map((l, i) => {
     const held: (RecordOf<T> & SeasonLine)[] = [];
+    const scale: number[] = [];
     let first = l.season;
     for (const o of seriesAt[i] ?? [l]) {
       if (o.season > l.season || o.season <= l.season - window) continue;
       held.push(o);
+      scale.push(decay ** (l.season - o.season));
       if (o.season < first) first = o.season;
     }
     note(l.playerId, l.season, l.level, first);
-    return held.length === 1 ? l : combineStints(table, held);
+    return held.length === 1 ? l : combineStints(table, held, decay === 1 ? undefined : scale);
   });
 }
 

@@ -54,13 +54,24 @@ describe('buildKindProfiles(roster, options, kinds)', () => {
     expect(apart).toEqual(both);
   });
 
-  it('profiles each kind over windows of 5 seasons as one pass over both does, with the single seasons\u2019 weights', () => {
+  it('profiles each kind over windows of 5 seasons as one pass over both does, with their own weights or the single seasons\u2019', () => {
     const single = buildProfiles(roster, DEFAULT_PROFILE_OPTIONS);
     const wr = windowRoster(roster, 5);
     const both = profileWindowRoster(wr, DEFAULT_PROFILE_OPTIONS, single);
     const apart = joined(profileWindowRoster(wr, DEFAULT_PROFILE_OPTIONS, single, ['pitchers']), profileWindowRoster(wr, DEFAULT_PROFILE_OPTIONS, single, ['hitters']));
     expect(apart).toEqual(both);
-    for (const [group, g] of both.groups) expect(g.redundancy).toBe(single.groups.get(group)?.redundancy);
+    for (const [group, g] of both.groups) expect(g.redundancy).not.toBe(single.groups.get(group)?.redundancy);
+    const asSingle = { ...DEFAULT_PROFILE_OPTIONS, windowWeights: 'single' as const };
+    const given = profileWindowRoster(wr, asSingle, single);
+    expect(joined(profileWindowRoster(wr, asSingle, single, ['pitchers']), profileWindowRoster(wr, asSingle, single, ['hitters']))).toEqual(given);
+    for (const [group, g] of given.groups) expect(g.redundancy).toBe(single.groups.get(group)?.redundancy);
+  });
+
+  it('regresses the windows\u2019 rates with k fitted to their lines where an era has enough players, single seasons with the table', () => {
+    const sources = (set: ProfileSet): Set<string> => new Set([...set.groups.values()].flatMap((g) => [...g.shrinkage.values()].flatMap((m) => [...m.values()].map((u) => u.source))));
+    const single = buildProfiles(roster, DEFAULT_PROFILE_OPTIONS);
+    expect(sources(single)).toEqual(new Set(['table']));
+    expect(sources(profileWindowRoster(windowRoster(roster, 5), DEFAULT_PROFILE_OPTIONS, single)).has('fitted')).toBe(true);
   });
 });
 

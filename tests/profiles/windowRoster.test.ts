@@ -91,6 +91,15 @@ describe('windowRoster(roster, 2): a line with the same player\u2019s line at it
   it('keeps other levels apart: h1\u2019s 2025 Top line stays his Top season alone', () => {
     expect(battingOf(windowRoster(roster, 2).roster, 'h1', 2025, 'Top')).toEqual(battingOf(roster, 'h1', 2025, 'Top'));
   });
+  it('with recency weights counts a season a seasons back at decay^a of its events: h1 2026 over 3 seasons at 0.5', () => {
+    // hand-worked: PA 300 + 0.5 * 400 + 0.25 * 500 = 625, H 81 + 45 + 30 = 156, bbe 210 + 130 + 82.5 = 422.5
+    // rounded to 423, triples 3 + 0.5 + 0.5 = 4; exit velocity weighted by the weighted batted-ball events:
+    // (88.5 * 210 + 87.0 * 130 + 90.0 * 82.5) / 422.5
+    const b = battingOf(windowRoster(roster, 3, 0.5).roster, 'h1', 2026);
+    expect([b.PA, b.H, b.bbe, b.triples]).toEqual([625, 156, 423, 4]);
+    expect(b.evAvgMph).toBeCloseTo((88.5 * 210 + 87 * 130 + 90 * 82.5) / 422.5, 10);
+    expect(battingOf(windowRoster(roster, 3, 1).roster, 'h1', 2026).PA).toBe(1200);
+  });
   it('leaves the roster as it is with window 1, and refuses a window below 1', () => {
     expect(windowRoster(roster, 1).roster).toBe(roster);
     expect(() => windowRoster(roster, 0)).toThrow(RangeError);
@@ -117,10 +126,11 @@ describe('buildWindowProfiles(roster, options, 2, single)', () => {
     const of = buildWindowProfiles(roster, options, 2, single).groups.get('OF');
     expect(of?.meta.find((m) => m.playerId === 'h1' && m.season === 2025 && m.level === 'AA')?.age).toBe(25);
   });
-  it('keeps the single seasons\u2019 default weights, and window 1 is the single seasons themselves', () => {
+  it('keeps the single seasons\u2019 default weights when asked (windowWeights single), and window 1 is the single seasons themselves', () => {
     const single = buildProfiles(roster, options);
-    const w = buildWindowProfiles(roster, options, 2, single);
+    const w = buildWindowProfiles(roster, { ...options, windowWeights: 'single' }, 2, single);
     expect(w.groups.get('SP')?.redundancy).toBe(single.groups.get('SP')?.redundancy);
+    expect(buildWindowProfiles(roster, options, 2, single).groups.get('SP')?.redundancy).not.toBe(single.groups.get('SP')?.redundancy);
     expect(buildWindowProfiles(roster, options, 1, single)).toEqual(single);
   });
 });
