@@ -172,7 +172,7 @@ async function readAndProfile(rosterDir: string, storeDir: string, options: Buil
     if (!roster) throw new Error('internal: the roster was let go before the single seasons');
     return buildKindProfiles(roster, profileOptions, [kind]);
   }, 1, () => {});
-  // the windows take the single seasons' default weights: only those are kept of the single profiles
+  // the single seasons' default weights, for windows built with windowWeights 'single' (by default they weigh their own): only those are kept of the single profiles
   const weights = { groups: single.weights };
   // The outcomes are the last use of the roster's season lines, and the players file needs none of them
   // (players, contracts and levels only): both are taken now, so that the lines can go before the last window's profiles.
