@@ -36,14 +36,81 @@ export function eligibleRows(
     }
     return { mask, count };
   }
-  const passes = rowTest(store, g, filter, excludePlayers);
   let count = 0;
+  if (filter.levels !== undefined || filter.positions !== undefined) {
+    // only the rows at an allowed level and position are tested (about a tenth for a default comps pool),
+    // on the other fields: those two hold for every row of the lists selected
+    const { levels: _levels, positions: _positions, ...others } = filter;
+    const passes = rowTest(store, g, others, excludePlayers);
+    for (const rows of bucketsOf(g).select(store, filter)) {
+      for (let k = 0; k < rows.length; k++) {
+        const i = rows[k] as number;
+        if (!passes(i)) continue;
+        mask[i] = 1;
+        count++;
+      }
+    }
+    return { mask, count };
+  }
+  const passes = rowTest(store, g, filter, excludePlayers);
   for (let i = 0; i < n; i++) {
     if (!passes(i)) continue;
     mask[i] = 1;
     count++;
   }
   return { mask, count };
+}
+
+/**
+ * A group's rows by level and position (each list ascending), built once per loaded group, so that a
+ * pool filtered by level or position tests only the rows it can hold. Why: at 1,000,000
+ * player-seasons a default comps pool (levels within one, the target's position) holds about 9% of
+ * its group's 286,022 rows, and testing every row took about 4 ms of each answer's 8.
+ */
+class RowBuckets {
+  /** `${level}|${position}` (position as rowTest reads it) to rows. */
+  readonly #rows: ReadonlyMap<string, Int32Array>;
+  readonly #keys: readonly { readonly level: number; readonly position: string; readonly key: string }[];
+
+  constructor(g: PoolRows) {
+    const lists = new Map<string, number[]>();
+    const keys: { level: number; position: string; key: string }[] = [];
+    for (let i = 0; i < g.n; i++) {
+      const level = g.level[i] ?? -1;
+      const position = g.position[i] ?? 'DH';
+      const key = `${level}|${position}`;
+      let list = lists.get(key);
+      if (!list) {
+        lists.set(key, (list = []));
+        keys.push({ level, position, key });
+      }
+      list.push(i);
+    }
+    this.#rows = new Map([...lists].map(([k, v]) => [k, Int32Array.from(v)]));
+    this.#keys = keys;
+  }
+
+  /** The row lists whose level and position the filter allows (every row that can pass it is in one). */
+  select(store: PoolStore, filter: PoolFilter): Int32Array[] {
+    const levels = filter.levels === undefined ? null : new Set(filter.levels.map((l) => store.levels.indexOf(l)).filter((at) => at >= 0));
+    const positions: ReadonlySet<string> | null = filter.positions ? new Set(filter.positions) : null;
+    const out: Int32Array[] = [];
+    for (const { level, position, key } of this.#keys) {
+      if (levels !== null && !levels.has(level)) continue;
+      if (positions !== null && !positions.has(position)) continue;
+      const rows = this.#rows.get(key);
+      if (rows) out.push(rows);
+    }
+    return out;
+  }
+}
+
+const bucketCache = new WeakMap<PoolRows, RowBuckets>();
+
+function bucketsOf(g: PoolRows): RowBuckets {
+  let b = bucketCache.get(g);
+  if (!b) bucketCache.set(g, (b = new RowBuckets(g)));
+  return b;
 }
 
 /** Whether any row of the group passes the filter (eligibleRows(...).count > 0, stopping at the first). */

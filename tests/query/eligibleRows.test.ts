@@ -94,6 +94,13 @@ describe('eligibleRows(store, group, filter, excluded)', () => {
     expect(kept({ include: (row) => row % 2 === 0 })).toEqual([0, 2, 4, 6]);
     expect(kept({ positions: ['SS'], include: (row) => row !== 0 })).toEqual([1, 5]);
   });
+  it('levels with positions (only the rows at those levels and positions are tested): both must hold, a level the store lacks keeps nothing', () => {
+    expect(kept({ levels: ['Top'], positions: ['SS', '3B'] })).toEqual([4, 5]);
+    expect(kept({ levels: ['Low', 'High'], positions: ['CF'], minSample: 400 })).toEqual([7]);
+    expect(kept({ levels: ['Low', 'High'], positions: ['SS'] }, [0])).toEqual([]);
+    expect(kept({ levels: ['Nowhere'], positions: ['SS'] })).toEqual([]);
+    expect(kept({ levels: ['High'], positions: ['SS'] }), 'asked again of the same group').toEqual([1]);
+  });
   it('every filter at once: a row must pass all of them, excluded players still out', () => {
     const all: PoolFilter = { levels: ['High', 'Top'], seasonFrom: 2020, seasonTo: 2022, ageMin: 22, ageMax: 30, bats: ['L', 'R'], positions: ['SS', '2B'] };
     expect(kept(all)).toEqual([1, 2, 3]);
