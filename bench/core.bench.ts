@@ -176,9 +176,9 @@ function batch(store: ProfileStore, drawn: readonly DrawnTarget[], n: number, wi
 
 }
 
-/** `kindred serve` without the answer cache under load: latency and failures. */
+/** `kindred serve` without the answer cache under load (default answer workers; every target asked once first, so each worker has read its groups): latency and failures. */
 async function serveLoad(storeDir: string, paths: string[], connections: number, seconds: number): Promise<{ p50: number; p99: number; requests: number; errors: number; non2xx: number }> {
-  const r = await serveUnderLoad({ storeDir, serveArgs: ['--cache', '0'], paths, connections, seconds });
+  const r = await serveUnderLoad({ storeDir, serveArgs: ['--cache', '0'], paths, connections, seconds, warmAll: true });
   return { p50: r.latency.p50, p99: r.latency.p99, requests: r.requests.total, errors: r.errors + r.timeouts, non2xx: r.non2xx };
 }
 

@@ -8,7 +8,8 @@
  * workers (`--workers`), at `connections`; `--cache 0` with `POST /api/reload` every 0.3 s beside the
  * load (each reload opens the store again, the unchanged groups taken over, in the server and in
  * every worker, and swaps it in); and both caches at 200 connections. Without `--workers` the
- * server's default is used.
+ * server's default is used (DEFAULT_WORKERS). With a store folder given, every target is asked once
+ * before each run, so that each worker has read its groups (at 1M a group takes seconds to read).
  * Prints p50 and p99 latency, requests per second, errors and non-2xx answers, each with its aim
  * (bench/lib/aim.ts): `--cache 0` p99 at most 20 ms, under reloads at most 50 ms, at 200 connections
  * under 500 ms; no errors, timeouts or non-2xx answers anywhere; and the server's resident memory
@@ -80,7 +81,7 @@ function reloadEvery(everyMs: number, counts: Map<number | string, number>): (ur
 async function run(label: string, extraArgs: string[], p99Aim: number, conns = connections, reloadMs?: number): Promise<void> {
   const reloads = new Map<number | string, number>();
   const result = await serveUnderLoad({
-    storeDir, serveArgs: extraArgs, paths, connections: conns, seconds,
+    storeDir, serveArgs: extraArgs, paths, connections: conns, seconds, warmAll: given !== undefined,
     ...(reloadMs === undefined ? {} : { beside: reloadEvery(reloadMs, reloads) }),
   });
   const line = (k: string, v: string): void => console.log(`  ${k.padEnd(22)} ${v}`);

@@ -71,7 +71,7 @@ export interface ServerOptions {
 }
 
 /** `kindred serve --workers` by default (measured in bench/serve.bench.ts; see README). */
-export const DEFAULT_WORKERS = 2;
+export const DEFAULT_WORKERS = 1;
 
 /** An answer is about 20 KB; the cache is also bounded in bytes (AnswerCache's DEFAULT_CACHE_BYTES). */
 export const DEFAULT_CACHE_ENTRIES = 1000;
