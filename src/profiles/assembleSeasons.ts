@@ -40,8 +40,6 @@ export const PROFILE_KINDS: readonly ProfileKind[] = ['hitters', 'pitchers'];
 
 const FIELD_ORDER = ['C', 'SS', '2B', 'CF', '3B', 'RF', 'LF', '1B'];
 
-const keyOf = (playerId: string, season: number, level: string): string => `${playerId}\u0000${season}\u0000${level}`;
-
 /**
  * Turns the roster's lines into one hitter line and/or one pitcher line per player, season and level
  * (only those of `kinds`: the other kind's lines are left empty and its skipped counts 0).
@@ -53,15 +51,20 @@ const keyOf = (playerId: string, season: number, level: string): string => `${pl
  */
 export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAULT_MINIMUMS, kinds: readonly ProfileKind[] = PROFILE_KINDS): AssembledSeasons {
   const withHitters = kinds.includes('hitters');
-  const fieldingByKey = new Map<string, FieldingSeason[]>();
+  // each player's fielding rows and pitching lines in file order, found by his id (one shared string, its
+  // hash computed once) and then by season and level among his few lines, instead of by a key string made per line
+  const fieldingOf = new Map<string, FieldingSeason[]>();
   for (const f of withHitters ? roster.fielding : []) {
-    const key = keyOf(f.playerId, f.season, f.level);
-    const list = fieldingByKey.get(key);
+    const list = fieldingOf.get(f.playerId);
     if (list) list.push(f);
-    else fieldingByKey.set(key, [f]);
+    else fieldingOf.set(f.playerId, [f]);
   }
-  const pitchingByKey = new Map<string, PitchingSeason>();
-  if (withHitters) for (const p of roster.pitching) pitchingByKey.set(keyOf(p.playerId, p.season, p.level), p);
+  const pitchingOf = new Map<string, PitchingSeason[]>();
+  for (const p of withHitters ? roster.pitching : []) {
+    const list = pitchingOf.get(p.playerId);
+    if (list) list.push(p);
+    else pitchingOf.set(p.playerId, [p]);
+  }
 
   const ageOf = (playerId: string, season: number): number | null => {
     const birth = roster.players.get(playerId)?.birthDate;
@@ -76,13 +79,12 @@ export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAU
       hittersBelowMinimum++;
       continue;
     }
-    const key = keyOf(b.playerId, b.season, b.level);
-    const pitching = pitchingByKey.get(key);
+    const pitching = lastAt(pitchingOf.get(b.playerId), b.season, b.level);
     if (pitching && pitching.BF > b.PA) {
       pitchersBatting++;
       continue;
     }
-    const primary = primaryPosition(fieldingByKey.get(key) ?? []);
+    const primary = primaryPosition(fieldingOf.get(b.playerId), b.season, b.level);
     hitters.push({
       meta: {
         playerId: b.playerId,
@@ -122,9 +124,18 @@ export function assembleSeasons(roster: Roster, minimums: SampleMinimums = DEFAU
   return { hitters, pitchers, skipped: { hittersBelowMinimum, pitchersBelowMinimum, pitchersBatting } };
 }
 
-function primaryPosition(rows: readonly FieldingSeason[]): FieldingSeason | undefined {
+/** The last of a player's lines at this season and level (a season's stints are combined: at most one). */
+function lastAt(lines: readonly PitchingSeason[] | undefined, season: number, level: string): PitchingSeason | undefined {
+  let found: PitchingSeason | undefined;
+  for (const p of lines ?? []) if (p.season === season && p.level === level) found = p;
+  return found;
+}
+
+/** Of a player's fielding rows, the primary position's at this season and level (see assembleSeasons). */
+function primaryPosition(rows: readonly FieldingSeason[] | undefined, season: number, level: string): FieldingSeason | undefined {
   let best: FieldingSeason | undefined;
-  for (const row of rows) {
+  for (const row of rows ?? []) {
+    if (row.season !== season || row.level !== level) continue;
     if (
       best === undefined ||
       row.outs > best.outs ||

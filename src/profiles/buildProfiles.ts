@@ -12,6 +12,7 @@ import { PITCHER_DIMENSIONS } from './pitcherDimensions.ts';
 import { leagueFip } from '../stats/leagueFip.ts';
 import type { PitchingSeason } from '../ingest/Roster.ts';
 import { windowKey, windowRoster, type WindowRoster } from './windowRoster.ts';
+import { JoinedKeys } from './JoinedKeys.ts';
 
 /** The profiles of one position group, row-major n x d. */
 export interface GroupProfiles {
@@ -115,6 +116,8 @@ type GivenWeights = ReadonlyMap<PositionGroup, Pick<GroupProfiles, 'reliability'
 /** buildProfiles of `kinds`, with the default weights of the groups in `given` taken from there (not computed). */
 function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeights, kinds: readonly ProfileKind[], apart = 1): ProfileSet {
   const seasons = assembleSeasons(roster, options.minimums, kinds);
+  // the strata's keys, one string each (not one per line)
+  const keys = new JoinedKeys();
   const groups = new Map<PositionGroup, GroupProfiles>();
 
   const hitterLines = seasons.hitters.map((h) => h.line);
@@ -122,7 +125,7 @@ function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeig
   const noLeague: LeagueContext = { fipConstant: NaN };
   const hitterCols = measureDimensions(HITTER_DIMENSIONS, {
     lines: hitterLines,
-    leagueKey: (i, scope) => leagueKey(hitterMeta[i] as SeasonMeta, scope),
+    leagueKey: (i, scope) => leagueKey(keys, hitterMeta[i] as SeasonMeta, scope),
     league: () => noLeague,
     eraOf: (i, scope) => eraOf(hitterMeta[i] as SeasonMeta, scope),
     shrinkage: options.shrinkage ?? DEFAULT_SHRINKAGE,
@@ -133,10 +136,10 @@ function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeig
   const constants = kinds.includes('pitchers') ? fipConstants(roster) : new Map<string, number>();
   const pitcherCols = measureDimensions(PITCHER_DIMENSIONS, {
     lines: pitcherLines,
-    leagueKey: (i, scope) => leagueKey(pitcherMeta[i] as SeasonMeta, scope),
+    leagueKey: (i, scope) => leagueKey(keys, pitcherMeta[i] as SeasonMeta, scope),
     league: (i) => {
       const m = pitcherMeta[i] as SeasonMeta;
-      return { fipConstant: constants.get(`${m.season}|${m.level}`) ?? NaN };
+      return { fipConstant: constants.get(keys.of(m.season, m.level)) ?? NaN };
     },
     eraOf: (i, scope) => eraOf(pitcherMeta[i] as SeasonMeta, scope),
     shrinkage: options.shrinkage ?? DEFAULT_SHRINKAGE,
@@ -150,7 +153,7 @@ function profileRoster(roster: Roster, options: ProfileOptions, given: GivenWeig
     const rows: number[] = [];
     for (let i = 0; i < meta.length; i++) if (groupOf((meta[i] as SeasonMeta).position) === group) rows.push(i);
     if (rows.length === 0) continue;
-    groups.set(group, assembleGroup(group, rows, meta, cols, options.standardise, given.get(group), apart));
+    groups.set(group, assembleGroup(group, rows, meta, cols, options.standardise, given.get(group), apart, keys));
   }
   return { groups, skipped: seasons.skipped };
 }
@@ -200,8 +203,8 @@ export function profileWindowRoster(
   return { groups, skipped: built.skipped };
 }
 
-function leagueKey(m: SeasonMeta, scope: 'group' | 'position'): string {
-  return scope === 'group' ? `${m.season}|${m.level}` : `${m.season}|${m.level}|${m.position}`;
+function leagueKey(keys: JoinedKeys, m: SeasonMeta, scope: 'group' | 'position'): string {
+  return scope === 'group' ? keys.of(m.season, m.level) : keys.of3(m.season, m.level, m.position);
 }
 
 /** The era a line's k is fitted over: its level (and position for fielding), around its season. */
@@ -217,6 +220,7 @@ function assembleGroup(
   standardise: StandardiseOptions,
   given: Pick<GroupProfiles, 'reliability' | 'redundancy'> | undefined,
   apart: number,
+  keys: JoinedKeys,
 ): GroupProfiles {
   const dims = dimensionsOf(group);
   const n = rows.length;
@@ -229,12 +233,12 @@ function assembleGroup(
   const strata = new Map<string, ReadonlyMap<string, StratumStats>>();
   const shrinkage = new Map<string, ReadonlyMap<string, ShrinkageUsed>>();
   const seen = new Set<string>();
-  for (const m of meta) seen.add(`${m.season}|${m.level}`).add(`${m.season}|${m.level}|${m.position}`);
+  for (const m of meta) seen.add(keys.of(m.season, m.level)).add(keys.of3(m.season, m.level, m.position));
   // each row's standardisation base per scope (level and group, or level and position), made once
   const basesByScope = new Map<Dimension<never>['scope'], readonly string[]>();
   const basesOf = (scope: Dimension<never>['scope']): readonly string[] => {
     let bases = basesByScope.get(scope);
-    if (!bases) basesByScope.set(scope, (bases = meta.map((m) => (scope === 'group' ? `${m.level}|${group}` : `${m.level}|${m.position}`))));
+    if (!bases) basesByScope.set(scope, (bases = meta.map((m) => (scope === 'group' ? keys.of(m.level, group) : keys.of(m.level, m.position)))));
     return bases;
   };
   dims.forEach((dim, j) => {
